@@ -1,0 +1,61 @@
+'use client';
+
+import { chartMetrics } from './theme';
+import type { ChartEmphasis } from './theme';
+
+export interface LegendItem {
+  id: string;
+  label: string;
+  color: string;
+  width?: number;
+  dashed?: boolean;
+  note?: string;
+}
+
+export interface LegendProps {
+  items: readonly LegendItem[];
+  hidden: ReadonlySet<string>;
+  onToggle: (id: string) => void;
+  emphasis?: ChartEmphasis;
+  /** Accessible name of the group, e.g. "Traces of Magnitude". */
+  label: string;
+}
+
+/** Legend whose items are toggle buttons (aria-pressed = trace shown). */
+export function Legend({ items, hidden, onToggle, emphasis = 'default', label }: LegendProps) {
+  const m = chartMetrics(emphasis);
+  const swatchW = 22 * m.space;
+  const swatchH = 10 * m.space;
+  return (
+    <div role="group" aria-label={label} className="flex flex-wrap gap-x-1 gap-y-1" style={{ fontSize: m.fontPx + 1 }}>
+      {items.map((item) => {
+        const shown = !hidden.has(item.id);
+        return (
+          <button
+            key={item.id}
+            type="button"
+            aria-pressed={shown}
+            onClick={() => onToggle(item.id)}
+            title={shown ? `Hide ${item.label}` : `Show ${item.label}`}
+            className="inline-flex min-h-8 items-center gap-1.5 rounded-md px-2 py-1 text-[#18202A] hover:bg-[#F6F4EF] focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-[#18202A] aria-[pressed=false]:text-[#6B7280]"
+          >
+            <svg width={swatchW} height={swatchH} aria-hidden="true" focusable="false">
+              <line
+                x1={1}
+                x2={swatchW - 1}
+                y1={swatchH / 2}
+                y2={swatchH / 2}
+                stroke={item.color}
+                strokeWidth={(item.width ?? 2) * m.lineScale}
+                strokeDasharray={item.dashed ? '5 3' : undefined}
+                opacity={shown ? 1 : 0.35}
+              />
+            </svg>
+            <span className={shown ? undefined : 'line-through decoration-1'}>{item.label}</span>
+            {item.note ? <span className="text-[0.85em] text-[#4B5563]">({item.note})</span> : null}
+          </button>
+        );
+      })}
+    </div>
+  );
+}
