@@ -1,0 +1,67 @@
+'use client';
+
+import { useState } from 'react';
+import type { RefObject } from 'react';
+import { downloadCsv, downloadPng, downloadSvg, frequencyCsv } from './export';
+import type { FrequencyCsvData } from './export';
+
+export interface ChartExportButtonsProps {
+  /** The chart's `<svg>` (pass the same ref as the chart's `ref` prop). */
+  svgRef: RefObject<SVGSVGElement | null>;
+  /** File name without extension, e.g. "juniper-blend-magnitude". */
+  filename: string;
+  /** Curves for a CSV download; a function is called only on click. */
+  csv?: FrequencyCsvData | (() => string);
+  /** What is downloaded, for the buttons' accessible names (default "plot"). */
+  subject?: string;
+  className?: string;
+}
+
+const buttonClass =
+  'inline-flex min-h-8 items-center rounded-md border border-[#D6D3CB] bg-white px-2.5 py-1 text-sm text-[#18202A] hover:bg-[#F6F4EF] focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-[#18202A] disabled:opacity-60';
+
+/** "SVG", "PNG" and (with `csv`) "CSV" download buttons for one chart. */
+export function ChartExportButtons({ svgRef, filename, csv, subject = 'plot', className }: ChartExportButtonsProps) {
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+
+  const withSvg = (action: (svg: SVGSVGElement) => void | Promise<void>) => async () => {
+    const svg = svgRef.current;
+    if (!svg) return;
+    setError(null);
+    setBusy(true);
+    try {
+      await action(svg);
+    } catch (e) {
+      setError(e instanceof Error ? e.message : 'The download failed.');
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  return (
+    <div role="group" aria-label={`Download ${subject}`} className={['flex flex-wrap items-center gap-1.5', className].filter(Boolean).join(' ')}>
+      <button type="button" className={buttonClass} aria-label={`Download ${subject} as SVG`} onClick={withSvg((svg) => downloadSvg(svg, filename))}>
+        SVG
+      </button>
+      <button type="button" className={buttonClass} aria-label={`Download ${subject} as PNG`} disabled={busy} aria-busy={busy} onClick={withSvg((svg) => downloadPng(svg, filename))}>
+        PNG
+      </button>
+      {csv ? (
+        <button
+          type="button"
+          className={buttonClass}
+          aria-label={`Download ${subject} data as CSV`}
+          onClick={() => downloadCsv(typeof csv === 'function' ? csv() : frequencyCsv(csv.frequencyHz, csv.columns), filename)}
+        >
+          CSV
+        </button>
+      ) : null}
+      {error ? (
+        <span role="status" className="text-sm text-[#B91C1C]">
+          {error}
+        </span>
+      ) : null}
+    </div>
+  );
+}
