@@ -1,0 +1,26 @@
+import { requireCaller } from '@/lib/auth';
+import { assertUuid, changeMember } from '@/lib/data/workspaces';
+import { json, parseJson, route } from '@/lib/http';
+import { memberUpdateSchema } from '@/lib/validations/workspace';
+
+type Ctx = { params: Promise<{ id: string; userId: string }> };
+
+export const PATCH = route<Ctx>(async (request, { params }) => {
+  const caller = await requireCaller();
+  const { id, userId } = await params;
+  assertUuid(id, 'That workspace');
+  assertUuid(userId, 'That member');
+  const { role } = await parseJson(request, memberUpdateSchema, 16 * 1024);
+  await changeMember(caller, id, userId, { role });
+  return json({ ok: true });
+});
+
+/** Removes a member (owners), or leaves the workspace (anyone, for themselves). */
+export const DELETE = route<Ctx>(async (_request, { params }) => {
+  const caller = await requireCaller();
+  const { id, userId } = await params;
+  assertUuid(id, 'That workspace');
+  assertUuid(userId, 'That member');
+  await changeMember(caller, id, userId, 'remove');
+  return json({ ok: true });
+});

@@ -1,0 +1,11 @@
+'use client';
+
+import { signOut } from 'next-auth/react';
+
+export function SignOutButton() {
+  return (
+    <button type="button" onClick={() => signOut({ callbackUrl: '/' })} className="rounded-md px-2 py-1 text-sm text-ink hover:bg-[#EFECE4]">
+      Sign out
+    </button>
+  );
+}

@@ -1,0 +1,97 @@
+import type { NextAuthOptions, Session } from 'next-auth';
+import { getServerSession } from 'next-auth';
+import CredentialsProvider from 'next-auth/providers/credentials';
+import type { Caller } from './access';
+import { findUserByEmail } from './data/users';
+import { AppError, unauthorized } from './errors';
+import { DUMMY_HASH, verifyPassword } from './passwords';
+import { assertSignInAllowed, clearFailedSignIns, recordFailedSignIn } from './rate-limit';
+import { signInSchema } from './validations/auth';
+
+declare module 'next-auth' {
+  interface Session {
+    user: { id: string; email: string; name: string; siteRole: 'admin' | 'member' };
+  }
+  interface User {
+    id: string;
+    siteRole: 'admin' | 'member';
+  }
+}
+declare module 'next-auth/jwt' {
+  interface JWT {
+    uid?: string;
+    siteRole?: 'admin' | 'member';
+  }
+}
+
+function clientAddress(headers: Record<string, unknown> | undefined): string {
+  const forwarded = headers?.['x-forwarded-for'];
+  const first = typeof forwarded === 'string' ? forwarded.split(',')[0]?.trim() : undefined;
+  return first || (typeof headers?.['x-real-ip'] === 'string' ? (headers['x-real-ip'] as string) : 'unknown');
+}
+
+export const authOptions: NextAuthOptions = {
+  session: { strategy: 'jwt', maxAge: 30 * 24 * 3600 },
+  pages: { signIn: '/sign-in' },
+  providers: [
+    CredentialsProvider({
+      name: 'E-mail and password',
+      credentials: { email: { label: 'E-mail', type: 'email' }, password: { label: 'Password', type: 'password' } },
+      async authorize(credentials, req) {
+        const parsed = signInSchema.safeParse(credentials ?? {});
+        if (!parsed.success) throw new Error('Enter your e-mail and password.');
+        const { email, password } = parsed.data;
+        const address = clientAddress(req?.headers as Record<string, unknown> | undefined);
+        try {
+          await assertSignInAllowed(email, address);
+        } catch (e) {
+          if (e instanceof AppError) throw new Error(e.message);
+          throw new Error('Sign-in is not available right now. Try again in a few seconds.');
+        }
+        const user = await findUserByEmail(email);
+        const ok = await verifyPassword(password, user?.passwordHash ?? DUMMY_HASH);
+        if (!user || !ok) {
+          await recordFailedSignIn(email, address);
+          throw new Error('That e-mail and password do not match an account.');
+        }
+        await clearFailedSignIns(email);
+        return { id: user.id, email: user.email, name: user.name, siteRole: user.siteRole };
+      },
+    }),
+  ],
+  callbacks: {
+    async jwt({ token, user }) {
+      if (user) {
+        token.uid = user.id;
+        token.siteRole = user.siteRole;
+      }
+      return token;
+    },
+    async session({ session, token }) {
+      session.user = {
+        id: token.uid ?? '',
+        email: token.email ?? '',
+        name: token.name ?? '',
+        siteRole: token.siteRole ?? 'member',
+      };
+      return session;
+    },
+  },
+};
+
+export async function getSession(): Promise<Session | null> {
+  const session = await getServerSession(authOptions);
+  return session?.user?.id ? session : null;
+}
+
+/** The signed-in caller, or null. */
+export async function getCaller(): Promise<(Caller & { email: string; name: string }) | null> {
+  const session = await getSession();
+  return session ? { id: session.user.id, siteRole: session.user.siteRole, email: session.user.email, name: session.user.name } : null;
+}
+
+export async function requireCaller(): Promise<Caller & { email: string; name: string }> {
+  const caller = await getCaller();
+  if (!caller) throw unauthorized();
+  return caller;
+}

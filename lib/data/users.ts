@@ -1,0 +1,58 @@
+import { UniqueConstraintError } from 'sequelize';
+import { db } from '@/lib/db';
+import { invalid } from '@/lib/errors';
+import { hashPassword } from '@/lib/passwords';
+import type { SignUpInput } from '@/lib/validations/auth';
+import { Membership, User, Workspace, type SiteRole } from '@/models';
+
+export interface AppUser {
+  id: string;
+  email: string;
+  name: string;
+  siteRole: SiteRole;
+  createdAt: string;
+}
+
+export const toAppUser = (u: User): AppUser => ({ id: u.id, email: u.email, name: u.name, siteRole: u.siteRole, createdAt: u.createdAt.toISOString() });
+
+const duplicateEmail = () => invalid('An account with that e-mail already exists. Sign in, or reset your password.', [{ path: 'email', message: 'an account with that e-mail already exists' }]);
+
+/** Creates a user and the personal workspace they own, in one transaction. */
+export async function createUserWithWorkspace(input: SignUpInput & { siteRole?: SiteRole }): Promise<AppUser> {
+  const sequelize = db();
+  const passwordHash = await hashPassword(input.password);
+  try {
+    return await sequelize.transaction(async (transaction) => {
+      if (await User.findOne({ where: { email: input.email }, transaction })) throw duplicateEmail();
+      const user = await User.create({ email: input.email, name: input.name, passwordHash, siteRole: input.siteRole ?? 'member' }, { transaction });
+      const workspace = await Workspace.create({ name: `${input.name}'s workspace`, personal: true }, { transaction });
+      await Membership.create({ workspaceId: workspace.id, userId: user.id, role: 'owner' }, { transaction });
+      return toAppUser(user);
+    });
+  } catch (e) {
+    if (e instanceof UniqueConstraintError) throw duplicateEmail();
+    throw e;
+  }
+}
+
+export async function findUserByEmail(email: string): Promise<User | null> {
+  db();
+  return User.findOne({ where: { email: email.trim().toLowerCase() } });
+}
+
+export async function getUser(id: string): Promise<AppUser | null> {
+  db();
+  const u = await User.findByPk(id);
+  return u ? toAppUser(u) : null;
+}
+
+export async function listUsers(): Promise<(AppUser & { workspaceCount: number })[]> {
+  db();
+  const users = await User.findAll({ order: [['createdAt', 'ASC']], include: [{ model: Membership, as: 'memberships', attributes: ['id'] }] });
+  return users.map((u) => ({ ...toAppUser(u), workspaceCount: ((u as unknown as { memberships?: unknown[] }).memberships ?? []).length }));
+}
+
+export async function setPassword(userId: string, password: string): Promise<void> {
+  db();
+  await User.update({ passwordHash: await hashPassword(password) }, { where: { id: userId } });
+}

@@ -1,0 +1,77 @@
+import { NextResponse } from 'next/server';
+import type { z } from 'zod';
+import { AppError, errorBody, fromZod, invalid, tooLarge, toAppError, unsupportedMedia } from './errors';
+
+export const DEFAULT_BODY_LIMIT_BYTES = 256 * 1024;
+
+export function json(data: unknown, status = 200, headers: Record<string, string> = {}) {
+  return NextResponse.json(data, { status, headers: { 'Cache-Control': 'no-store', ...headers } });
+}
+
+export function errorResponse(error: unknown) {
+  const e = toAppError(error);
+  const headers: Record<string, string> = { 'Cache-Control': 'no-store' };
+  if (e.status === 429 && typeof e.extra.retryAfterS === 'number') headers['Retry-After'] = String(Math.ceil(e.extra.retryAfterS));
+  if (e.status === 503) headers['Retry-After'] = '5';
+  return NextResponse.json(errorBody(e), { status: e.status, headers });
+}
+
+/** Reads at most `limitBytes` of the body as text, answering 413 beyond (without buffering it all). */
+export async function readBodyText(request: Request, limitBytes = DEFAULT_BODY_LIMIT_BYTES): Promise<string> {
+  const declared = Number(request.headers.get('content-length') ?? NaN);
+  if (Number.isFinite(declared) && declared > limitBytes) throw tooLarge(limitBytes);
+  if (!request.body) return '';
+  const reader = request.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > limitBytes) {
+      await reader.cancel().catch(() => {});
+      throw tooLarge(limitBytes);
+    }
+    chunks.push(value);
+  }
+  return new TextDecoder('utf-8', { fatal: false }).decode(Buffer.concat(chunks));
+}
+
+/** Parses a JSON body against a zod schema: 415 for other media types, 413 when too large, 400 otherwise. */
+export async function parseJson<S extends z.ZodType>(request: Request, schema: S, limitBytes = DEFAULT_BODY_LIMIT_BYTES): Promise<z.infer<S>> {
+  const type = request.headers.get('content-type') ?? '';
+  if (!/^application\/(.+\+)?json\b/i.test(type)) throw unsupportedMedia('application/json');
+  const text = await readBodyText(request, limitBytes);
+  let raw: unknown;
+  try {
+    raw = JSON.parse(text);
+  } catch {
+    throw invalid('The body is not valid JSON.', [{ path: '(body)', message: 'not valid JSON' }]);
+  }
+  const parsed = schema.safeParse(raw);
+  if (!parsed.success) throw fromZod(parsed.error);
+  return parsed.data;
+}
+
+/** Parses URL search parameters against a zod schema (400 with the parameter named). */
+export function parseQuery<S extends z.ZodType>(request: Request, schema: S): z.infer<S> {
+  const params = Object.fromEntries(new URL(request.url).searchParams.entries());
+  const parsed = schema.safeParse(params);
+  if (!parsed.success) throw fromZod(parsed.error);
+  return parsed.data;
+}
+
+type Handler<C> = (request: Request, context: C) => Promise<Response>;
+
+/** Wraps a route handler so every thrown error becomes the JSON error answer of SPEC §6. */
+export function route<C = unknown>(handler: Handler<C>): Handler<C> {
+  return async (request, context) => {
+    try {
+      return await handler(request, context);
+    } catch (error) {
+      return errorResponse(error);
+    }
+  };
+}
+
+export { AppError };

@@ -1,0 +1,179 @@
+import { z } from 'zod';
+
+/**
+ * The System document (SPEC §3): one room, its seats, speakers, subs, bass management and the
+ * speaker profiles they use. SI units inside, unit in every field name. Coordinates in metres with
+ * the origin at the front-left floor corner: x across the room (0…widthM), y into the room from the
+ * front wall (0…lengthM), z up from the floor (0…heightM).
+ */
+export const SYSTEM_SCHEMA_VERSION = 1;
+
+const finite = (label: string, min: number, max: number) =>
+  z.number({ error: `${label} must be a number` }).min(min, `${label} must be at least ${min}`).max(max, `${label} must be at most ${max}`);
+
+export const idSchema = z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, 'id must be 1–40 letters, digits, - or _');
+
+export const filterFamilySchema = z.enum(['butterworth', 'linkwitz-riley']);
+
+/** A crossover slope: Butterworth orders 1–8, Linkwitz–Riley 2, 4 or 8. */
+export const slopeSchema = z
+  .object({ family: filterFamilySchema, order: z.number().int('order must be a whole number').min(1).max(8) })
+  .superRefine((s, ctx) => {
+    if (s.family === 'linkwitz-riley' && ![2, 4, 8].includes(s.order)) {
+      ctx.addIssue({ code: 'custom', path: ['order'], message: 'Linkwitz–Riley order must be 2, 4 or 8' });
+    }
+  });
+
+/** A speaker's natural low-frequency roll-off (Small 1972; Thiele 1971). */
+export const lowRolloffSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('none') }),
+  z.object({ kind: z.literal('sealed'), cornerHz: finite('cornerHz', 5, 500), q: finite('q', 0.3, 3) }),
+  z.object({ kind: z.literal('vented'), cornerHz: finite('cornerHz', 5, 500) }),
+]);
+
+/** A subwoofer's natural upper roll-off (second order), or none. */
+export const highRolloffSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('none') }),
+  z.object({ kind: z.literal('lowpass'), cornerHz: finite('cornerHz', 30, 2000), q: finite('q', 0.3, 3) }),
+]);
+
+export const speakerProfileSchema = z.object({
+  id: idSchema,
+  /** Set when the profile was copied from a Library profile. */
+  libraryId: z.string().uuid().optional(),
+  name: z.string().trim().min(1, 'name is required').max(120),
+  kind: z.enum(['main', 'sub']),
+  lowRolloff: lowRolloffSchema,
+  highRolloff: highRolloffSchema,
+  sensitivityDb: finite('sensitivityDb', 60, 130),
+  sensitivityReference: z.enum(['1W', '2.83V']),
+  ratedPowerW: finite('ratedPowerW', 1, 20000),
+  impedanceOhm: finite('impedanceOhm', 1, 64),
+  notes: z.string().max(2000).default(''),
+});
+
+const point = {
+  xM: finite('xM', 0, 100),
+  yM: finite('yM', 0, 100),
+  zM: finite('zM', 0, 30),
+};
+
+export const seatSchema = z.object({ id: idSchema, name: z.string().trim().min(1).max(60), ...point });
+
+export const aimSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('mlp') }),
+  z.object({ kind: z.literal('seat'), seatId: idSchema }),
+  z.object({ kind: z.literal('point'), xM: finite('xM', -100, 200), yM: finite('yM', -100, 200) }),
+]);
+
+export const CHANNEL_LABELS = [
+  'L', 'C', 'R', 'SL', 'SR', 'SBL', 'SBR', 'SB', 'FWL', 'FWR',
+  'TFL', 'TFR', 'TML', 'TMR', 'TRL', 'TRR', 'TFC', 'TBC',
+] as const;
+
+export const speakerSchema = z.object({
+  id: idSchema,
+  channel: z.enum(CHANNEL_LABELS),
+  ...point,
+  aim: aimSchema,
+  profileId: idSchema,
+  /** When set, used instead of the geometric distance to the MLP (a measured distance). */
+  distanceOverrideM: finite('distanceOverrideM', 0.1, 100).nullable(),
+  trimDb: finite('trimDb', -30, 30),
+  amplifierPowerW: finite('amplifierPowerW', 1, 20000),
+});
+
+export const subSchema = z.object({
+  id: idSchema,
+  name: z.string().trim().min(1).max(60),
+  ...point,
+  profileId: idSchema,
+  delayMs: finite('delayMs', 0, 100),
+  gainDb: finite('gainDb', -30, 30),
+  invert: z.boolean(),
+  distanceOverrideM: finite('distanceOverrideM', 0.1, 100).nullable(),
+  amplifierPowerW: finite('amplifierPowerW', 1, 20000),
+  count: z.number().int().min(1).max(8).default(1),
+});
+
+export const bassManagementSchema = z.object({
+  crossoverHz: finite('crossoverHz', 20, 300),
+  mainsHighpass: slopeSchema,
+  subLowpass: slopeSchema,
+  lfeLowpassHz: finite('lfeLowpassHz', 40, 250),
+  /** +10 dB in-band is the cinema convention for LFE. */
+  lfeGainDb: finite('lfeGainDb', 0, 15),
+  /** Delay added to the mains (only positive delays: either the sub or the mains is delayed). */
+  mainsDelayMs: finite('mainsDelayMs', 0, 100),
+});
+
+export const roomSchema = z.object({
+  lengthM: finite('lengthM', 1.5, 60),
+  widthM: finite('widthM', 1.5, 60),
+  heightM: finite('heightM', 1.8, 20),
+  rt60S: finite('rt60S', 0.1, 5),
+  temperatureC: finite('temperatureC', -20, 50),
+});
+
+export const LAYOUT_NAMES = ['2.0', '2.1', '3.1', '5.1', '7.1', '5.1.2', '5.1.4', '7.1.2', '7.1.4', '9.1.6'] as const;
+
+export const systemDocumentSchema = z
+  .object({
+    schemaVersion: z.literal(SYSTEM_SCHEMA_VERSION),
+    layout: z.enum(LAYOUT_NAMES),
+    room: roomSchema,
+    seats: z.array(seatSchema).min(1, 'at least one seat is needed').max(40),
+    mlpSeatId: idSchema,
+    speakers: z.array(speakerSchema).max(24),
+    subs: z.array(subSchema).max(8),
+    bassManagement: bassManagementSchema,
+    profiles: z.array(speakerProfileSchema).max(40),
+    notes: z.string().max(20000),
+    tags: z.array(z.string().trim().min(1).max(40)).max(20),
+  })
+  .superRefine((doc, ctx) => {
+    const unique = (items: { id: string }[], key: string) => {
+      const seen = new Set<string>();
+      items.forEach((item, i) => {
+        if (seen.has(item.id)) ctx.addIssue({ code: 'custom', path: [key, i, 'id'], message: `duplicate id "${item.id}"` });
+        seen.add(item.id);
+      });
+    };
+    unique(doc.seats, 'seats');
+    unique(doc.speakers, 'speakers');
+    unique(doc.subs, 'subs');
+    unique(doc.profiles, 'profiles');
+    if (!doc.seats.some((s) => s.id === doc.mlpSeatId)) {
+      ctx.addIssue({ code: 'custom', path: ['mlpSeatId'], message: 'mlpSeatId must name one of the seats' });
+    }
+    const profiles = new Map(doc.profiles.map((p) => [p.id, p]));
+    doc.speakers.forEach((s, i) => {
+      if (profiles.get(s.profileId)?.kind !== 'main') ctx.addIssue({ code: 'custom', path: ['speakers', i, 'profileId'], message: 'profileId must name a main-speaker profile' });
+      if (s.aim.kind === 'seat' && !doc.seats.some((seat) => seat.id === (s.aim as { seatId: string }).seatId)) {
+        ctx.addIssue({ code: 'custom', path: ['speakers', i, 'aim', 'seatId'], message: 'aim seatId must name one of the seats' });
+      }
+    });
+    doc.subs.forEach((s, i) => {
+      if (profiles.get(s.profileId)?.kind !== 'sub') ctx.addIssue({ code: 'custom', path: ['subs', i, 'profileId'], message: 'profileId must name a subwoofer profile' });
+    });
+    const inside = (p: { xM: number; yM: number; zM: number }, path: (string | number)[]) => {
+      if (p.xM > doc.room.widthM) ctx.addIssue({ code: 'custom', path: [...path, 'xM'], message: `xM must be within the room width (${doc.room.widthM} m)` });
+      if (p.yM > doc.room.lengthM) ctx.addIssue({ code: 'custom', path: [...path, 'yM'], message: `yM must be within the room length (${doc.room.lengthM} m)` });
+      if (p.zM > doc.room.heightM) ctx.addIssue({ code: 'custom', path: [...path, 'zM'], message: `zM must be within the room height (${doc.room.heightM} m)` });
+    };
+    doc.seats.forEach((s, i) => inside(s, ['seats', i]));
+    doc.speakers.forEach((s, i) => inside(s, ['speakers', i]));
+    doc.subs.forEach((s, i) => inside(s, ['subs', i]));
+  });
+
+export type SystemDocument = z.infer<typeof systemDocumentSchema>;
+export type SpeakerProfile = z.infer<typeof speakerProfileSchema>;
+export type Seat = z.infer<typeof seatSchema>;
+export type Speaker = z.infer<typeof speakerSchema>;
+export type Sub = z.infer<typeof subSchema>;
+export type Slope = z.infer<typeof slopeSchema>;
+export type LowRolloff = z.infer<typeof lowRolloffSchema>;
+export type HighRolloff = z.infer<typeof highRolloffSchema>;
+export type LayoutName = (typeof LAYOUT_NAMES)[number];
+
+export const systemNameSchema = z.string().trim().min(1, 'name is required').max(200, 'name must be at most 200 characters');

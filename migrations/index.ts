@@ -1,0 +1,25 @@
+import type { Migration } from './types';
+import { migration as createUsers } from './20261201000100-create-users';
+import { migration as createWorkspaces } from './20261201000200-create-workspaces';
+import { migration as createMemberships } from './20261201000300-create-memberships';
+import { migration as createSystems } from './20261201000400-create-systems';
+import { migration as createSystemRevisions } from './20261201000500-create-system-revisions';
+import { migration as createShareLinks } from './20261201000600-create-share-links';
+import { migration as createInvitations } from './20261201000700-create-invitations';
+import { migration as createPasswordResetTokens } from './20261201000800-create-password-reset-tokens';
+import { migration as createRateLimits } from './20261201000900-create-rate-limits';
+import { migration as createDevMessages } from './20261201001000-create-dev-messages';
+
+/** Every migration in the order it runs; a new migration is added at the end. */
+export const migrations: Migration[] = [
+  createUsers,
+  createWorkspaces,
+  createMemberships,
+  createSystems,
+  createSystemRevisions,
+  createShareLinks,
+  createInvitations,
+  createPasswordResetTokens,
+  createRateLimits,
+  createDevMessages,
+];

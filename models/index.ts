@@ -1,0 +1,37 @@
+import type { Sequelize } from 'sequelize';
+import { DevMessage } from './dev-message';
+import { Invitation } from './invitation';
+import { Membership } from './membership';
+import { PasswordResetToken } from './password-reset-token';
+import { ShareLink } from './share-link';
+import { System } from './system';
+import { SystemRevision } from './system-revision';
+import { User } from './user';
+import { Workspace } from './workspace';
+
+export { DevMessage, Invitation, Membership, PasswordResetToken, ShareLink, System, SystemRevision, User, Workspace };
+export type { SiteRole } from './user';
+export type { WorkspaceRole } from './membership';
+export type { ShareTarget } from './share-link';
+
+const initialised = new WeakSet<Sequelize>();
+
+/** Registers every model and association on one Sequelize instance (idempotent). */
+export function initModels(sequelize: Sequelize): void {
+  if (initialised.has(sequelize)) return;
+  initialised.add(sequelize);
+  for (const model of [User, Workspace, Membership, System, SystemRevision, ShareLink, Invitation, PasswordResetToken, DevMessage]) {
+    model.initModel(sequelize);
+  }
+  Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  Membership.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  Workspace.hasMany(Membership, { foreignKey: 'workspaceId', as: 'memberships' });
+  User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
+  System.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  System.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' });
+  System.belongsTo(User, { foreignKey: 'lastEditorId', as: 'lastEditor' });
+  SystemRevision.belongsTo(System, { foreignKey: 'systemId', as: 'system' });
+  SystemRevision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+  Invitation.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  PasswordResetToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+}

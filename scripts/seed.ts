@@ -1,0 +1,54 @@
+/**
+ * The invented demo (SPEC §8): workspace "Larkspur AV" (fictional), its users, two Systems.
+ * Idempotent: finds what exists by e-mail and name, creates only what is missing.
+ */
+import { db } from '../lib/db';
+import { createSystem } from '../lib/data/systems';
+import { createUserWithWorkspace, findUserByEmail } from '../lib/data/users';
+import { addMember } from '../lib/data/workspaces';
+import { juniperLaneDocument, lindenStreetDocument } from '../lib/demo/systems';
+import { systemDocumentSchema } from '../lib/validations/system';
+import { Membership, System, Workspace } from '../models';
+
+export const DEMO_PASSWORD = 'seamline-demo';
+export const DEMO_USERS = {
+  owner: { email: 'demo@seamline.test', name: 'Demo Integrator' },
+  viewer: { email: 'viewer@seamline.test', name: 'Demo Client' },
+  other: { email: 'other@seamline.test', name: 'Other Enthusiast' },
+  admin: { email: 'admin@seamline.test', name: 'Site Admin' },
+} as const;
+export const DEMO_WORKSPACE = 'Larkspur AV';
+
+async function ensureUser(email: string, name: string, siteRole: 'admin' | 'member' = 'member') {
+  const existing = await findUserByEmail(email);
+  if (existing) return { id: existing.id, siteRole: existing.siteRole };
+  const created = await createUserWithWorkspace({ email, name, password: DEMO_PASSWORD, siteRole });
+  return { id: created.id, siteRole: created.siteRole };
+}
+
+export async function seedDemo(): Promise<string> {
+  db();
+  const owner = await ensureUser(DEMO_USERS.owner.email, DEMO_USERS.owner.name);
+  const viewer = await ensureUser(DEMO_USERS.viewer.email, DEMO_USERS.viewer.name);
+  await ensureUser(DEMO_USERS.other.email, DEMO_USERS.other.name);
+  await ensureUser(DEMO_USERS.admin.email, DEMO_USERS.admin.name, 'admin');
+
+  const ownedIds = (await Membership.findAll({ where: { userId: owner.id, role: 'owner' } })).map((m) => m.workspaceId);
+  let workspace = await Workspace.findOne({ where: { name: DEMO_WORKSPACE, id: ownedIds } });
+  if (!workspace) workspace = await Workspace.create({ name: DEMO_WORKSPACE, personal: false });
+  await addMember(workspace.id, owner.id, 'owner');
+  await addMember(workspace.id, viewer.id, 'viewer');
+
+  const made: string[] = [];
+  for (const [name, document] of [
+    ['Juniper Lane screening room', juniperLaneDocument()],
+    ['Linden Street den', lindenStreetDocument()],
+  ] as const) {
+    systemDocumentSchema.parse(document);
+    if (!(await System.findOne({ where: { workspaceId: workspace.id, name } }))) {
+      await createSystem(owner, { name, document, workspaceId: workspace.id, note: 'demo (invented)' });
+      made.push(name);
+    }
+  }
+  return `workspace "${DEMO_WORKSPACE}" ready; ${made.length ? `created ${made.join(', ')}` : 'Systems already present'}`;
+}

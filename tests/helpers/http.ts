@@ -1,0 +1,86 @@
+import { baseUrl } from './env';
+
+/** A tiny HTTP client with a cookie jar, for calling the running app as a browser would. */
+export class Client {
+  private cookies = new Map<string, string>();
+
+  private cookieHeader() {
+    return [...this.cookies.entries()].map(([k, v]) => `${k}=${v}`).join('; ');
+  }
+
+  private remember(res: Response) {
+    for (const line of res.headers.getSetCookie()) {
+      const [pair] = line.split(';');
+      const i = pair!.indexOf('=');
+      const name = pair!.slice(0, i).trim();
+      const value = pair!.slice(i + 1).trim();
+      if (value === '' || /expires=Thu, 01 Jan 1970/i.test(line)) this.cookies.delete(name);
+      else this.cookies.set(name, value);
+    }
+  }
+
+  async request(method: string, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<{ status: number; body: any; headers: Headers; text: string }> {
+    const isForm = body instanceof URLSearchParams || body instanceof FormData;
+    const res = await fetch(`${baseUrl()}${path}`, {
+      method,
+      redirect: 'manual',
+      headers: {
+        ...(body !== undefined && !isForm && typeof body !== 'string' ? { 'Content-Type': 'application/json' } : {}),
+        ...(this.cookies.size ? { Cookie: this.cookieHeader() } : {}),
+        ...headers,
+      },
+      body: body === undefined ? undefined : isForm || typeof body === 'string' ? (body as BodyInit) : JSON.stringify(body),
+    });
+    this.remember(res);
+    const text = await res.text();
+    let parsed: unknown = null;
+    try {
+      parsed = text ? JSON.parse(text) : null;
+    } catch {
+      parsed = null;
+    }
+    return { status: res.status, body: parsed, headers: res.headers, text };
+  }
+
+  get(path: string) {
+    return this.request('GET', path);
+  }
+  post(path: string, body?: unknown, headers?: Record<string, string>) {
+    return this.request('POST', path, body, headers);
+  }
+  put(path: string, body?: unknown) {
+    return this.request('PUT', path, body);
+  }
+  patch(path: string, body?: unknown) {
+    return this.request('PATCH', path, body);
+  }
+  delete(path: string) {
+    return this.request('DELETE', path);
+  }
+
+  /** Signs in through next-auth's credentials flow; returns the error text next-auth gave, or null. */
+  async signIn(email: string, password: string, address?: string): Promise<string | null> {
+    const csrf = await this.get('/api/auth/csrf');
+    const form = new URLSearchParams({ csrfToken: csrf.body.csrfToken, email, password, json: 'true', callbackUrl: '/library' });
+    const res = await this.request('POST', '/api/auth/callback/credentials', form, {
+      'Content-Type': 'application/x-www-form-urlencoded',
+      ...(address ? { 'X-Forwarded-For': address } : {}),
+    });
+    const location = res.headers.get('location') ?? (res.body?.url as string | undefined) ?? '';
+    const error = new URL(location, baseUrl()).searchParams.get('error');
+    return error;
+  }
+
+  get signedIn() {
+    return [...this.cookies.keys()].some((k) => k.includes('next-auth.session-token'));
+  }
+}
+
+export async function signedInClient(email: string, password = 'seamline-demo'): Promise<Client> {
+  const c = new Client();
+  const error = await c.signIn(email, password);
+  if (error || !c.signedIn) throw new Error(`could not sign in as ${email}: ${error ?? 'no session cookie'}`);
+  return c;
+}
+
+export const uniqueEmail = (prefix: string) => `${prefix}-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 7)}@example.test`;
