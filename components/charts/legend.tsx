@@ -37,6 +37,7 @@ export function Legend({ items, hidden, onToggle, emphasis = 'default', label }:
             aria-pressed={shown}
             onClick={() => onToggle(item.id)}
             title={shown ? `Hide ${item.label}` : `Show ${item.label}`}
+            style={{ font: 'inherit' }}
             className="inline-flex min-h-8 items-center gap-1.5 rounded-md px-2 py-1 text-[#18202A] hover:bg-[#F6F4EF] focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-[#18202A] aria-[pressed=false]:text-[#6B7280]"
           >
             <svg width={swatchW} height={swatchH} aria-hidden="true" focusable="false">

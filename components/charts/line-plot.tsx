@@ -77,6 +77,11 @@ export interface CommonPlotProps {
   yDomain?: readonly [number, number];
   /** Explicit y tick values (default: about one every 36 px). */
   yTicks?: readonly number[];
+  /**
+   * Width reserved for y tick labels, in characters (default 4). Give stacked plots the same
+   * value so their plot areas line up under one shared crosshair.
+   */
+  yAxisChars?: number;
   /** Decimals in the read-out (default 1). */
   valueDigits?: number;
   references?: readonly ReferenceLine[];
@@ -203,7 +208,8 @@ export function LinePlot(props: LinePlotProps) {
   const yStep = yTickValues.length > 1 ? Math.abs((yTickValues[1] ?? 0) - (yTickValues[0] ?? 0)) : 1;
   const yTickDigits = decimalsForStep(yStep);
   const yTickLabels = yTickValues.map((v) => formatNumber(v, yTickDigits));
-  const maxChars = Math.max(1, ...yTickLabels.map((s) => s.length));
+  // At least four characters ("−180", "−30", "12.5") so stacked plots' plot areas line up.
+  const maxChars = Math.max(props.yAxisChars ?? 4, ...yTickLabels.map((s) => s.length));
   const margin = {
     top: 12 * m.space + (markers.some((k) => k.label) || bands.some((b) => b.label) ? m.fontPx + 4 : 0),
     right: 14 * m.space,

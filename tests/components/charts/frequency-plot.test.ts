@@ -145,6 +145,14 @@ describe('FrequencyPlot', () => {
     expect(html).toMatch(/data-reading="sum">.*—/);
   });
 
+  it('stacked plots given the same cursorHz draw their crosshairs at the same x', () => {
+    const crosshairX = (html: string) => Number(html.match(/data-part="crosshair"[^>]*><line x1="([^"]+)"/)?.[1]);
+    const magnitude = render({ cursorHz: 80 });
+    const phase = render({ cursorHz: 80, quantity: 'phase', yDomain: undefined, traces: [{ id: 'ph', label: 'Phase', values: flat, color: '#000' }] });
+    expect(crosshairX(magnitude)).toBeGreaterThan(0);
+    expect(crosshairX(phase)).toBeCloseTo(crosshairX(magnitude), 6);
+  });
+
   it('shows no crosshair when cursorHz is null', () => {
     expect(render({ cursorHz: null })).not.toContain('data-part="crosshair"');
   });
