@@ -1,0 +1,49 @@
+import type { FilterSpec, RolloffSpec } from '../filters/filter-types';
+
+/** One signal path: crossover filter × natural roll-off × gain × polarity × delay (delayMs + distanceM / c). */
+export interface PathSpec {
+  readonly name: string;
+  readonly filter: FilterSpec;
+  readonly rolloff?: RolloffSpec;
+  readonly gainDb: number;
+  /** Processor delay, ms, ≥ 0. */
+  readonly delayMs: number;
+  readonly invert: boolean;
+  /** Air path to the listener, m; adds distanceM / c(temperatureC) to the delay, never changes level. */
+  readonly distanceM?: number;
+}
+
+/** Magnitude, phase and group delay over a frequency grid. */
+export interface ResponseCurves {
+  readonly magnitudeDb: Float64Array;
+  /** Wrapped to (−180, 180]. */
+  readonly phaseDeg: Float64Array;
+  /** Continuous phase; a path's includes exactly −360·f·τ for its delay τ. */
+  readonly unwrappedPhaseDeg: Float64Array;
+  readonly groupDelayMs: Float64Array;
+}
+
+/** A named path's curves. */
+export interface PathCurves extends ResponseCurves {
+  readonly name: string;
+}
+
+/** Result of blendResponse: each path and their complex sum. */
+export interface BlendResult {
+  readonly frequencyHz: Float64Array;
+  readonly paths: PathCurves[];
+  readonly sum: ResponseCurves;
+}
+
+/** Options of blendResponse. */
+export interface BlendOptions {
+  readonly temperatureC: number;
+  readonly frequencyHz: Float64Array | readonly number[];
+  readonly paths: readonly PathSpec[];
+}
+
+/** Most paths one blend may sum. */
+export const MAX_PATHS = 16;
+
+/** Floor of reported levels, dB: an exact cancellation reads −300 dB (phase 0, group delay 0) instead of −∞. */
+export const SILENCE_DB = -300;

@@ -1,0 +1,62 @@
+// Seamline's mathematics: pure TypeScript, no I/O. This file only re-exports.
+
+export { speedOfSoundMps } from './air/speed-of-sound';
+export { arrivalTimeMs, type ArrivalTimeOptions } from './air/arrival-time';
+
+export { logFrequencyGridHz, MAX_GRID_POINTS, type LogFrequencyGridOptions } from './grid/log-frequency-grid';
+export { fractionalOctaveBands, OCTAVE_RATIO_BASE_TEN, type FractionalOctaveBands, type FractionalOctaveBandsOptions } from './grid/fractional-octave-bands';
+
+export type { FilterFamily, FilterResponseKind, FilterSpec, FilterShape, RolloffSpec, SectionKind, AnalogSection, ComplexResponse } from './filters/filter-types';
+export { butterworthQ } from './filters/butterworth-q';
+export { filterSections, rolloffSections, LINKWITZ_RILEY_ORDERS, MAX_SECTION_Q } from './filters/analog-sections';
+export {
+  filterResponse,
+  rolloffResponse,
+  secondOrderSectionResponse,
+  sectionsResponse,
+  type FilterResponseOptions,
+  type RolloffResponseOptions,
+  type SecondOrderSectionOptions,
+} from './filters/filter-response';
+
+export { MAX_PATHS, SILENCE_DB, type PathSpec, type ResponseCurves, type PathCurves, type BlendResult, type BlendOptions } from './blend/blend-types';
+export { blendResponse } from './blend/blend-response';
+export { blendMetrics, type BlendMetrics, type BlendMetricsOptions } from './blend/blend-metrics';
+export { crossoverSweep, type CrossoverSweepOptions, type CrossoverSweepRow, type CrossoverSweepResult } from './blend/crossover-sweep';
+
+export { alignSubToMains } from './timing/align-sub-to-mains';
+export { alignSubs } from './timing/align-subs';
+export type { AlignmentResult, AlignSubToMainsOptions, AlignSubsOptions, AlignSubsResult, LevelVersusDelay, SubSetting } from './timing/timing-types';
+
+export type { RoomDimensions, PointM, ModeKind, RoomMode } from './room/room-types';
+export { roomModes, MAX_ROOM_MODES, type RoomModesOptions, type RoomModesResult } from './room/room-modes';
+export { schroederFrequencyHz, type SchroederOptions } from './room/schroeder-frequency';
+export { statisticalModeCount, type StatisticalModeCountOptions } from './room/statistical-mode-count';
+export { modeCountsPerThirdOctave, type ModeBandCount, type ModeCountsOptions } from './room/mode-counts-per-third-octave';
+export { nearCoincidentModes, type CoincidentPair, type NearCoincidentOptions } from './room/near-coincident-modes';
+export { bonelloCheck, type BonelloOptions, type BonelloResult } from './room/bonello-check';
+export { roomProportionCheck, type ProportionCriterion, type RoomProportionResult } from './room/room-proportion-check';
+export { modalTransfer, type ModalTransferOptions, type ModalTransferResult } from './room/modal-transfer';
+export { seatSpreadDb, type SeatSpreadOptions, type SeatSpreadResult } from './room/seat-spread';
+export { modePressureMap, type ModePressureMap, type ModePressureMapOptions } from './room/mode-pressure-map';
+export { quarterWaveNotchHz, type QuarterWaveNotchOptions } from './room/quarter-wave-notch';
+
+export { LAYOUT_TEMPLATES, layoutTemplate, type LayoutTemplate, type LayoutChannel, type AngleRangeDeg, type ChannelSide } from './layout/layout-templates';
+export { speakerAngles, type SpeakerAngles, type SpeakerAnglesOptions } from './layout/speaker-angles';
+export { checkSpeakerAngles, type CheckSpeakerAnglesOptions, type SpeakerAngleCheck } from './layout/check-speaker-angles';
+export { includedAngleDeg, type IncludedAngleOptions } from './layout/included-angle';
+export { toeInDeg, type ToeInOptions, type ToeInResult } from './layout/toe-in';
+export { delaysAndTrims, type DelaysAndTrims, type DelaysAndTrimsOptions } from './layout/delays-and-trims';
+
+export { maxSplDb, REFERENCE_LEVEL_DB, REFERENCE_PEAK_DB, LFE_PEAK_DB, type MaxSplOptions, type MaxSplResult } from './headroom/max-spl';
+export { headroomCheck, type HeadroomCheckOptions, type HeadroomCheckResult } from './headroom/headroom-check';
+export { exposureMinutes } from './headroom/exposure-time';
+
+export type { MeasuredCurve, MeasuredPathInput } from './measured/measured-types';
+export { resampleCurve, type ResampleCurveOptions, type ResampledCurve } from './measured/resample-curve';
+export { unwrapDeg } from './measured/unwrap-phase';
+export { smoothFractionalOctave, type SmoothOptions, type SmoothedCurve } from './measured/smooth-fractional-octave';
+export { minimumPhaseDeg, type MinimumPhaseOptions, type MinimumPhaseResult } from './measured/minimum-phase';
+export { applyPathToMeasured, type ApplyPathOptions, type ProcessedMeasurement } from './measured/apply-path-to-measured';
+export { predictMeasuredBlend, type PredictMeasuredBlendOptions, type MeasuredBlendResult, type MeasuredPathCurves } from './measured/predict-measured-blend';
+export { bestMeasuredAlignment, type BestMeasuredAlignmentOptions } from './measured/best-measured-alignment';

@@ -1,0 +1,39 @@
+import type { CompiledPath } from '../blend/path-plan';
+import { logFrequencyGridHz } from '../grid/log-frequency-grid';
+import { evaluatePlan } from '../internal/section-plan';
+
+/** Points per octave of the ±1-octave band that Timing and the crossover sweep judge flatness on. */
+export const ALIGNMENT_POINTS_PER_OCTAVE = 48;
+
+/** The band fc/2 … 2fc (97 points) plus 4fc (the reference) at 48 points per octave: index 48 is fc. */
+export interface AlignmentGrid {
+  readonly frequencyHz: Float64Array;
+  readonly omega: Float64Array;
+  readonly bandCount: number;
+  readonly crossoverIndex: number;
+  readonly refIndex: number;
+}
+
+export function alignmentGrid(crossoverHz: number): AlignmentGrid {
+  const frequencyHz = logFrequencyGridHz({ startHz: crossoverHz / 2, stopHz: crossoverHz * 4 * (1 + 1e-12), pointsPerOctave: ALIGNMENT_POINTS_PER_OCTAVE });
+  const omega = frequencyHz.map((f) => 2 * Math.PI * f);
+  return { frequencyHz, omega, bandCount: 2 * ALIGNMENT_POINTS_PER_OCTAVE + 1, crossoverIndex: ALIGNMENT_POINTS_PER_OCTAVE, refIndex: frequencyHz.length - 1 };
+}
+
+/** A compiled path's complex response (delay included) on the points ω. */
+export function pathComplex(path: CompiledPath, omega: Float64Array): { re: Float64Array; im: Float64Array } {
+  const re = new Float64Array(omega.length);
+  const im = new Float64Array(omega.length);
+  const out = new Float64Array(4);
+  for (let i = 0; i < omega.length; i++) {
+    const w = omega[i] as number;
+    evaluatePlan(path.plan, w, out);
+    const c = Math.cos(w * path.delayS);
+    const s = -Math.sin(w * path.delayS);
+    const hr = out[0] as number;
+    const hi = out[1] as number;
+    re[i] = hr * c - hi * s;
+    im[i] = hr * s + hi * c;
+  }
+  return { re, im };
+}
