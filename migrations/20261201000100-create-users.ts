@@ -15,7 +15,7 @@ export const migration: Migration = {
     });
   },
   async down({ context: q }) {
-    await q.dropTable('users');
+    await q.dropTable('users', {});
     await q.sequelize.query('DROP TYPE IF EXISTS "enum_users_site_role"');
   },
 };

@@ -13,6 +13,6 @@ export const migration: Migration = {
     });
   },
   async down({ context: q }) {
-    await q.dropTable('workspaces');
+    await q.dropTable('workspaces', {});
   },
 };

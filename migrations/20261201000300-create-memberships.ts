@@ -17,7 +17,7 @@ export const migration: Migration = {
     await q.addIndex('memberships', ['user_id'], { name: 'memberships_user' });
   },
   async down({ context: q }) {
-    await q.dropTable('memberships');
+    await q.dropTable('memberships', {});
     await q.sequelize.query('DROP TYPE IF EXISTS "enum_memberships_role"');
   },
 };

@@ -22,6 +22,6 @@ export const migration: Migration = {
     await q.addIndex('systems', ['tags'], { using: 'GIN', name: 'systems_tags' });
   },
   async down({ context: q }) {
-    await q.dropTable('systems');
+    await q.dropTable('systems', {});
   },
 };

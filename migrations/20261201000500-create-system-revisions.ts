@@ -19,6 +19,6 @@ export const migration: Migration = {
     await q.addIndex('system_revisions', ['system_id', 'revision'], { unique: true, name: 'system_revisions_system_revision' });
   },
   async down({ context: q }) {
-    await q.dropTable('system_revisions');
+    await q.dropTable('system_revisions', {});
   },
 };

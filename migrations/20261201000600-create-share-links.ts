@@ -17,7 +17,7 @@ export const migration: Migration = {
     await q.addIndex('share_links', ['target_type', 'target_id'], { name: 'share_links_target' });
   },
   async down({ context: q }) {
-    await q.dropTable('share_links');
+    await q.dropTable('share_links', {});
     await q.sequelize.query('DROP TYPE IF EXISTS "enum_share_links_target_type"');
   },
 };

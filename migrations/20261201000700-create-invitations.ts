@@ -18,7 +18,7 @@ export const migration: Migration = {
     await q.addIndex('invitations', ['workspace_id', 'email'], { name: 'invitations_workspace_email' });
   },
   async down({ context: q }) {
-    await q.dropTable('invitations');
+    await q.dropTable('invitations', {});
     await q.sequelize.query('DROP TYPE IF EXISTS "enum_invitations_role"');
   },
 };

@@ -15,6 +15,6 @@ export const migration: Migration = {
     await q.addIndex('password_reset_tokens', ['user_id'], { name: 'password_reset_tokens_user' });
   },
   async down({ context: q }) {
-    await q.dropTable('password_reset_tokens');
+    await q.dropTable('password_reset_tokens', {});
   },
 };

@@ -12,6 +12,6 @@ export const migration: Migration = {
     });
   },
   async down({ context: q }) {
-    await q.dropTable('rate_limits');
+    await q.dropTable('rate_limits', {});
   },
 };

@@ -16,6 +16,6 @@ export const migration: Migration = {
     await q.addIndex('dev_messages', ['created_at'], { name: 'dev_messages_created' });
   },
   async down({ context: q }) {
-    await q.dropTable('dev_messages');
+    await q.dropTable('dev_messages', {});
   },
 };

@@ -25,7 +25,7 @@ export function ChartExportButtons({ svgRef, filename, csv, subject = 'plot', cl
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
 
-  const withSvg = (action: (svg: SVGSVGElement) => void | Promise<void>) => async () => {
+  async function withSvgNow(action: (svg: SVGSVGElement) => void | Promise<void>) {
     const svg = svgRef.current;
     if (!svg) return;
     setError(null);
@@ -37,14 +37,14 @@ export function ChartExportButtons({ svgRef, filename, csv, subject = 'plot', cl
     } finally {
       setBusy(false);
     }
-  };
+  }
 
   return (
     <div role="group" aria-label={`Download ${subject}`} className={['flex flex-wrap items-center gap-1.5', className].filter(Boolean).join(' ')}>
-      <button type="button" className={buttonClass} aria-label={`Download ${subject} as SVG`} onClick={withSvg((svg) => downloadSvg(svg, filename))}>
+      <button type="button" className={buttonClass} aria-label={`Download ${subject} as SVG`} onClick={() => void withSvgNow((svg) => downloadSvg(svg, filename))}>
         SVG
       </button>
-      <button type="button" className={buttonClass} aria-label={`Download ${subject} as PNG`} disabled={busy} aria-busy={busy} onClick={withSvg((svg) => downloadPng(svg, filename))}>
+      <button type="button" className={buttonClass} aria-label={`Download ${subject} as PNG`} disabled={busy} aria-busy={busy} onClick={() => void withSvgNow((svg) => downloadPng(svg, filename))}>
         PNG
       </button>
       {csv ? (

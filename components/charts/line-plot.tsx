@@ -260,16 +260,16 @@ export function LinePlot(props: LinePlotProps) {
     const rowH = font + 10;
     let cx = margin.left;
     let row = 0;
-    const items = visible.map((t) => {
+    const items: { t: (typeof visible)[number]; x: number; y: number }[] = [];
+    for (const t of visible) {
       const w = 26 + (t.label.length + (t.note ? t.note.length + 3 : 0)) * font * 0.6 + 16;
       if (cx + w > widthPx - margin.right && cx > margin.left) {
         row += 1;
         cx = margin.left;
       }
-      const item = { t, x: cx, y: row * rowH + rowH / 2 };
+      items.push({ t, x: cx, y: row * rowH + rowH / 2 });
       cx += w;
-      return item;
-    });
+    }
     return { items, heightPx: items.length ? (row + 1) * rowH + 8 : 0 };
   })();
 

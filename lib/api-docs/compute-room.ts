@@ -1,0 +1,3 @@
+import type { ApiRouteDoc } from './types';
+
+export const ROOM_DOCS: ApiRouteDoc[] = [];
