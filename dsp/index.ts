@@ -40,6 +40,7 @@ export { modalTransfer, type ModalTransferOptions, type ModalTransferResult } fr
 export { seatSpreadDb, type SeatSpreadOptions, type SeatSpreadResult } from './room/seat-spread';
 export { modePressureMap, type ModePressureMap, type ModePressureMapOptions } from './room/mode-pressure-map';
 export { quarterWaveNotchHz, type QuarterWaveNotchOptions } from './room/quarter-wave-notch';
+export { summedModalResponse, type ModalSource, type SummedModalResponseOptions, type SummedModalResponseResult, type ComplexPressure } from './room/summed-modal-response';
 
 export { LAYOUT_TEMPLATES, layoutTemplate, type LayoutTemplate, type LayoutChannel, type AngleRangeDeg, type ChannelSide } from './layout/layout-templates';
 export { speakerAngles, type SpeakerAngles, type SpeakerAnglesOptions } from './layout/speaker-angles';
@@ -47,10 +48,12 @@ export { checkSpeakerAngles, type CheckSpeakerAnglesOptions, type SpeakerAngleCh
 export { includedAngleDeg, type IncludedAngleOptions } from './layout/included-angle';
 export { toeInDeg, type ToeInOptions, type ToeInResult } from './layout/toe-in';
 export { delaysAndTrims, type DelaysAndTrims, type DelaysAndTrimsOptions } from './layout/delays-and-trims';
+export { nominalSpeakerPosition, type NominalPosition, type NominalPositionOptions } from './layout/nominal-position';
 
 export { maxSplDb, REFERENCE_LEVEL_DB, REFERENCE_PEAK_DB, LFE_PEAK_DB, type MaxSplOptions, type MaxSplResult } from './headroom/max-spl';
 export { headroomCheck, type HeadroomCheckOptions, type HeadroomCheckResult } from './headroom/headroom-check';
 export { exposureMinutes } from './headroom/exposure-time';
+export { combinedSplDb, type CombinedSplOptions } from './headroom/combined-spl';
 
 export type { MeasuredCurve, MeasuredPathInput } from './measured/measured-types';
 export { resampleCurve, type ResampleCurveOptions, type ResampledCurve } from './measured/resample-curve';
