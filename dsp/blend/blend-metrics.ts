@@ -40,7 +40,8 @@ export interface BlendMetrics {
  * level two octaves above the crossover).
  * @example blendMetrics(blendResponse({ … LR4 pair at 80 Hz … }), { crossoverHz: 80 }).maxDeviationDb // ≈ 0
  */
-export function blendMetrics(result: BlendResult, { crossoverHz, mainsIndex = 0, subIndex = 1 }: BlendMetricsOptions): BlendMetrics {
+export function blendMetrics(result: BlendResult, options: BlendMetricsOptions): BlendMetrics {
+  const { crossoverHz } = options;
   assertPositive('crossoverHz', crossoverHz);
   const f = result.frequencyHz;
   const n = f.length;
@@ -50,6 +51,8 @@ export function blendMetrics(result: BlendResult, { crossoverHz, mainsIndex = 0,
     throw new RangeError(`crossoverHz must lie within the grid ${fLow}..${fHigh} Hz (got ${crossoverHz})`);
   }
   const pathCount = result.paths.length;
+  const mainsIndex = options.mainsIndex ?? 0;
+  const subIndex = options.subIndex ?? Math.min(1, pathCount - 1);
   assertIntegerInRange('mainsIndex', mainsIndex, 0, Math.max(0, pathCount - 1));
   assertIntegerInRange('subIndex', subIndex, 0, Math.max(0, pathCount - 1));
   const sum = result.sum.magnitudeDb;
