@@ -25,6 +25,8 @@ export function getSequelize(): Sequelize {
   if (!globalForDb.seamlineSequelize) {
     globalForDb.seamlineSequelize = createSequelize();
   }
+  // The pool is shared process-wide; this module's copy of the models is registered on it.
+  initModels(globalForDb.seamlineSequelize);
   return globalForDb.seamlineSequelize;
 }
 

@@ -8,18 +8,22 @@ import { System } from './system';
 import { SystemRevision } from './system-revision';
 import { User } from './user';
 import { Workspace } from './workspace';
+import { SpeakerProfileRow } from './speaker-profile';
 
 export { DevMessage, Invitation, Membership, PasswordResetToken, ShareLink, System, SystemRevision, User, Workspace };
 export type { SiteRole } from './user';
 export type { WorkspaceRole } from './membership';
 export type { ShareTarget } from './share-link';
+export { SpeakerProfileRow };
+export type { SpeakerProfileKind } from './speaker-profile';
 
-const initialised = new WeakSet<Sequelize>();
+// Per module instance: bundlers may load this module more than once around one shared Sequelize.
+let initialisedWith: Sequelize | null = null;
 
 /** Registers every model and association on one Sequelize instance (idempotent). */
 export function initModels(sequelize: Sequelize): void {
-  if (initialised.has(sequelize)) return;
-  initialised.add(sequelize);
+  if (initialisedWith === sequelize) return;
+  initialisedWith = sequelize;
   for (const model of [User, Workspace, Membership, System, SystemRevision, ShareLink, Invitation, PasswordResetToken, DevMessage]) {
     model.initModel(sequelize);
   }
@@ -34,4 +38,7 @@ export function initModels(sequelize: Sequelize): void {
   SystemRevision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
   Invitation.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
   PasswordResetToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  SpeakerProfileRow.initModel(sequelize);
+  SpeakerProfileRow.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  SpeakerProfileRow.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
 }
