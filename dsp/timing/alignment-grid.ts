@@ -5,7 +5,7 @@ import { evaluatePlan } from '../internal/section-plan';
 /** Points per octave of the ±1-octave band that Timing and the crossover sweep judge flatness on. */
 export const ALIGNMENT_POINTS_PER_OCTAVE = 48;
 
-/** The band fc/2 … 2fc (97 points) plus 4fc (the reference) at 48 points per octave: index 48 is fc. */
+/** The band fc/2 … 2fc at 48 points per octave (97 points, index 48 is fc) plus one last point at 4fc, the reference. */
 export interface AlignmentGrid {
   readonly frequencyHz: Float64Array;
   readonly omega: Float64Array;
@@ -15,9 +15,12 @@ export interface AlignmentGrid {
 }
 
 export function alignmentGrid(crossoverHz: number): AlignmentGrid {
-  const frequencyHz = logFrequencyGridHz({ startHz: crossoverHz / 2, stopHz: crossoverHz * 4 * (1 + 1e-12), pointsPerOctave: ALIGNMENT_POINTS_PER_OCTAVE });
+  const band = logFrequencyGridHz({ startHz: crossoverHz / 2, stopHz: crossoverHz * 2 * (1 + 1e-12), pointsPerOctave: ALIGNMENT_POINTS_PER_OCTAVE });
+  const frequencyHz = new Float64Array(band.length + 1);
+  frequencyHz.set(band);
+  frequencyHz[band.length] = 4 * crossoverHz;
   const omega = frequencyHz.map((f) => 2 * Math.PI * f);
-  return { frequencyHz, omega, bandCount: 2 * ALIGNMENT_POINTS_PER_OCTAVE + 1, crossoverIndex: ALIGNMENT_POINTS_PER_OCTAVE, refIndex: frequencyHz.length - 1 };
+  return { frequencyHz, omega, bandCount: band.length, crossoverIndex: ALIGNMENT_POINTS_PER_OCTAVE, refIndex: band.length };
 }
 
 /** A compiled path's complex response (delay included) on the points ω. */

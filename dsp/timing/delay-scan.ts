@@ -31,6 +31,17 @@ export interface DelayScan {
 
 const TINY = 1e-300;
 
+/** |A ± B·phasor|² at one point. */
+function sumPower(input: DelayScanInput, phRe: Float64Array, phIm: Float64Array, idx: number, sign: number): number {
+  const pr = phRe[idx] as number;
+  const pi = phIm[idx] as number;
+  const b = input.bRe[idx] as number;
+  const c = input.bIm[idx] as number;
+  const sr = (input.aRe[idx] as number) + sign * (b * pr - c * pi);
+  const si = (input.aIm[idx] as number) + sign * (b * pi + c * pr);
+  return sr * sr + si * si + TINY;
+}
+
 export function scanRelativeDelay(input: DelayScanInput, firstS: number, stepS: number, steps: number): DelayScan {
   const { omega, aRe, aIm, bRe, bIm, bandCount, refIndex, crossoverIndex, referencePower } = input;
   const n = omega.length;
@@ -62,16 +73,8 @@ export function scanRelativeDelay(input: DelayScanInput, firstS: number, stepS: 
         phIm[i] = sc[0] as number;
       }
     }
-    // Reference and crossover powers for both polarities.
-    const refPower = (idx: number, sign: number): number => {
-      const br = (bRe[idx] as number) * (phRe[idx] as number) - (bIm[idx] as number) * (phIm[idx] as number);
-      const bi = (bRe[idx] as number) * (phIm[idx] as number) + (bIm[idx] as number) * (phRe[idx] as number);
-      const sr = (aRe[idx] as number) + sign * br;
-      const si = (aIm[idx] as number) + sign * bi;
-      return sr * sr + si * si + TINY;
-    };
-    const refSame = refPower(refIndex, 1);
-    const refFlipped = refPower(refIndex, -1);
+    const refSame = sumPower(input, phRe, phIm, refIndex, 1);
+    const refFlipped = sumPower(input, phRe, phIm, refIndex, -1);
     let minSame = Infinity;
     let maxSame = 0;
     let minFlipped = Infinity;
@@ -102,8 +105,8 @@ export function scanRelativeDelay(input: DelayScanInput, firstS: number, stepS: 
       flatnessSameDb[k] = LN_POWER_TO_DB * Math.max(Math.log(maxSame / refSame), Math.log(refSame / minSame));
       flatnessFlippedDb[k] = LN_POWER_TO_DB * Math.max(Math.log(maxFlipped / refFlipped), Math.log(refFlipped / minFlipped));
     }
-    levelSameDb[k] = LN_POWER_TO_DB * Math.log(refPower(crossoverIndex, 1));
-    levelFlippedDb[k] = LN_POWER_TO_DB * Math.log(refPower(crossoverIndex, -1));
+    levelSameDb[k] = LN_POWER_TO_DB * Math.log(sumPower(input, phRe, phIm, crossoverIndex, 1));
+    levelFlippedDb[k] = LN_POWER_TO_DB * Math.log(sumPower(input, phRe, phIm, crossoverIndex, -1));
     delayS[k] = firstS + k * stepS;
     for (let i = 0; i < n; i++) {
       const pr = phRe[i] as number;
