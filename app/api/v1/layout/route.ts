@@ -1,0 +1,9 @@
+import { json, parseJson, route } from '@/lib/http';
+import { computeLayout } from '@/lib/system-model/layout-compute';
+import { layoutRequestSchema } from '@/lib/validations/compute-room';
+
+/** POST /api/v1/layout — documented in lib/api-docs/compute-room.ts. No sign-in needed. */
+export const POST = route(async (request) => {
+  const input = await parseJson(request, layoutRequestSchema);
+  return json(computeLayout(input));
+});

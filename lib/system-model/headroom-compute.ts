@@ -1,0 +1,95 @@
+/** The answer of POST /api/v1/headroom, assembled from dsp/headroom. */
+import { combinedSplDb, exposureMinutes, headroomCheck, LFE_PEAK_DB, maxSplDb, REFERENCE_LEVEL_DB, REFERENCE_PEAK_DB } from '@/dsp';
+import type { HeadroomRequest } from '@/lib/validations/compute-room';
+import { fixed, sig } from './room-format';
+
+export interface HeadroomRowOut {
+  name: string;
+  maxSplDb: number;
+  perUnitSplDb: number;
+  sensitivity1WDb: number;
+  targetPeakDb: number;
+  headroomDb: number;
+  deficitDb: number;
+  meetsTarget: boolean;
+  powerW: number;
+  powerNeededW: number;
+  /** Set when ratedPowerW was given: does the power needed (or the amplifier) exceed the speaker's rating? */
+  exceedsRatedPower: boolean | null;
+  amplifierAboveRating: boolean | null;
+}
+
+export interface HeadroomAnswer {
+  referenceLevelDb: number;
+  channelTargetPeakDb: number;
+  subTargetPeakDb: number;
+  channels: HeadroomRowOut[];
+  subs: HeadroomRowOut[];
+  /** The subs together against the LFE peak (115 dB SPL); each sub's own row is held to its share of it. */
+  subsCombined: { summation: 'coherent' | 'power'; maxSplDb: number; targetPeakDb: number; headroomDb: number; meetsTarget: boolean; powerScale: number } | null;
+  allMeetTarget: boolean;
+  exposure: { levelDba: number; minutes: number }[];
+  safety: string[];
+}
+
+type Row = HeadroomRequest['channels'][number];
+
+function rowOut(row: Row, defaultTarget: number): HeadroomRowOut {
+  const targetPeakDb = row.targetPeakDb ?? defaultTarget;
+  const opts = { sensitivityDb: row.sensitivityDb, sensitivityRef: row.sensitivityRef, impedanceOhm: row.impedanceOhm, powerW: row.powerW, distanceM: row.distanceM, count: row.count, roomGainDb: row.roomGainDb };
+  const h = headroomCheck({ ...opts, targetPeakDb });
+  const m = maxSplDb(opts);
+  return {
+    name: row.name,
+    maxSplDb: fixed(h.maxSplDb, 2),
+    perUnitSplDb: fixed(m.perUnitSplDb, 2),
+    sensitivity1WDb: fixed(m.sensitivity1WDb, 2),
+    targetPeakDb: fixed(targetPeakDb, 2),
+    headroomDb: fixed(h.headroomDb, 2),
+    deficitDb: fixed(h.deficitDb, 2),
+    meetsTarget: h.meetsTarget,
+    powerW: row.powerW,
+    powerNeededW: sig(h.powerNeededW, 4),
+    exceedsRatedPower: row.ratedPowerW === undefined ? null : h.powerNeededW > row.ratedPowerW,
+    amplifierAboveRating: row.ratedPowerW === undefined ? null : row.powerW > row.ratedPowerW,
+  };
+}
+
+const EXPOSURE_LEVELS_DBA = [85, 88, 91, 94, 97, 100, 103, 105, 110, 115];
+
+/** Hearing-safety and installation cautions shown with every headroom answer (SPEC §4). */
+export const HEADROOM_SAFETY_NOTES = [
+  'Reference level means peaks of 105 dB SPL per channel and 115 dB SPL from the subs. Such levels can damage hearing: calibrate at the −20 dBFS test signal (85 dB SPL), not at full scale, and keep sessions short.',
+  'NIOSH recommends at most 85 dBA averaged over 8 hours with a 3 dB exchange rate: every 3 dB more halves the safe time (100 dBA: 15 minutes a day). Published: NIOSH, Criteria for a Recommended Standard: Occupational Noise Exposure, 1998.',
+  'Wear hearing protection while running level sweeps or stress tests, and warn everyone in the room before playing test signals.',
+  'Amplifier power above a speaker’s rating can destroy drivers; the power-needed figures assume undistorted peaks and are not a licence to drive past the rating.',
+  'Mounting speakers or subs on walls and ceilings and any electrical work (dedicated circuits, in-wall wiring) must follow local building and electrical codes; use rated hardware and a licensed professional where the codes require one.',
+];
+
+/** Maximum SPL at the MLP against the target per channel and per sub, the subs together, and the exposure table. */
+export function computeHeadroom(input: HeadroomRequest): HeadroomAnswer {
+  const channels = input.channels.map((r) => rowOut(r, REFERENCE_PEAK_DB));
+  // With several subs each carries its share of the 115 dB LFE peak: 115 − 20·log10(N) in phase, − 10·log10(N) as power.
+  const shareDb = input.subs.length > 1 ? (input.subSummation === 'coherent' ? 20 : 10) * Math.log10(input.subs.length) : 0;
+  const subs = input.subs.map((r) => rowOut(r, LFE_PEAK_DB - shareDb));
+  let subsCombined: HeadroomAnswer['subsCombined'] = null;
+  if (input.subs.length > 0) {
+    const levels = input.subs.map((r) => headroomCheck({ ...r, targetPeakDb: LFE_PEAK_DB }).maxSplDb);
+    const combinedDb = combinedSplDb({ levelsDb: levels, summation: input.subSummation });
+    const target = LFE_PEAK_DB;
+    const headroomDb = combinedDb - target;
+    subsCombined = { summation: input.subSummation, maxSplDb: fixed(combinedDb, 2), targetPeakDb: target, headroomDb: fixed(headroomDb, 2), meetsTarget: headroomDb >= 0, powerScale: sig(Math.pow(10, -headroomDb / 10), 4) };
+  }
+  const subsOk = subsCombined ? subsCombined.meetsTarget : true;
+  return {
+    referenceLevelDb: REFERENCE_LEVEL_DB,
+    channelTargetPeakDb: REFERENCE_PEAK_DB,
+    subTargetPeakDb: LFE_PEAK_DB,
+    channels,
+    subs,
+    subsCombined,
+    allMeetTarget: channels.every((c) => c.meetsTarget) && subsOk,
+    exposure: EXPOSURE_LEVELS_DBA.map((levelDba) => ({ levelDba, minutes: sig(exposureMinutes({ levelDba }), 3) })),
+    safety: HEADROOM_SAFETY_NOTES,
+  };
+}
