@@ -1,0 +1,163 @@
+import { z } from 'zod';
+import { COMPUTE_LIMITS, gridSchema, num, temperatureCSchema } from './compute-common';
+
+/**
+ * Request bodies of POST /api/v1/blend (SPEC §6), /api/v1/crossover-sweep and /api/v1/timing.
+ * Every number finite and in range; a bad field is answered 400 with its path
+ * (e.g. `paths.1.filter.order`). Unknown keys are refused so a misspelt field never passes
+ * silently.
+ */
+
+const hz = (min: number = COMPUTE_LIMITS.minHz, max: number = COMPUTE_LIMITS.maxHz) => num(min, max, 'Hz');
+const wholeOrder = num(1, 8).int('must be a whole number');
+
+export const filterFamilySchema = z.enum(['butterworth', 'linkwitz-riley'], { error: "must be 'butterworth' or 'linkwitz-riley'" });
+
+function checkOrder(s: { family: string; order: number }, ctx: z.RefinementCtx) {
+  if (s.family === 'linkwitz-riley' && ![2, 4, 8].includes(s.order)) {
+    ctx.addIssue({ code: 'custom', path: ['order'], message: 'Linkwitz–Riley order must be 2, 4 or 8' });
+  }
+}
+
+/** A crossover slope without its corner: Butterworth 1–8, Linkwitz–Riley 2, 4, 8. */
+export const filterShapeSchema = z.strictObject({ family: filterFamilySchema, order: wholeOrder }).superRefine(checkOrder);
+
+/** A crossover filter of one path. With response 'none' the path is a straight wire (family, order, cornerHz ignored but still checked). */
+export const filterSpecSchema = z
+  .strictObject({
+    family: filterFamilySchema,
+    order: wholeOrder,
+    response: z.enum(['lowpass', 'highpass', 'none'], { error: "must be 'lowpass', 'highpass' or 'none'" }),
+    cornerHz: hz(),
+  })
+  .superRefine(checkOrder);
+
+const q = num(0.2, 10);
+
+/** A speaker's natural roll-off (Small 1972 sealed; Thiele 1971 vented; a sub's upper roll-off). */
+export const rolloffSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.strictObject({ kind: z.literal('none') }),
+    z.strictObject({ kind: z.literal('sealed'), cornerHz: hz(1, 2000), q }),
+    z.strictObject({ kind: z.literal('vented'), cornerHz: hz(1, 2000) }),
+    z.strictObject({ kind: z.literal('lowpass'), cornerHz: hz(10, 24000), q }),
+  ],
+  { error: "kind must be 'none', 'sealed', 'vented' or 'lowpass'" },
+);
+
+/** Main speakers roll off at the bottom: none, sealed or vented. */
+export const mainsRolloffSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.strictObject({ kind: z.literal('none') }),
+    z.strictObject({ kind: z.literal('sealed'), cornerHz: hz(1, 2000), q }),
+    z.strictObject({ kind: z.literal('vented'), cornerHz: hz(1, 2000) }),
+  ],
+  { error: "kind must be 'none', 'sealed' or 'vented'" },
+);
+
+/** A sub's upper roll-off: none or a second-order low-pass. */
+export const subRolloffSchema = z.discriminatedUnion(
+  'kind',
+  [z.strictObject({ kind: z.literal('none') }), z.strictObject({ kind: z.literal('lowpass'), cornerHz: hz(10, 24000), q })],
+  { error: "kind must be 'none' or 'lowpass'" },
+);
+
+const nameSchema = z.string({ error: 'must be a string' }).trim().min(1, 'must not be empty').max(60, 'must be at most 60 characters');
+const gainDbSchema = num(-60, 60, 'dB');
+const delayMsSchema = num(0, 1000, 'ms');
+const distanceMSchema = num(0, 200, 'm');
+const invertSchema = z.boolean({ error: 'must be true or false' });
+
+export const blendPathSchema = z.strictObject({
+  name: nameSchema,
+  filter: filterSpecSchema,
+  rolloff: rolloffSchema.optional(),
+  gainDb: gainDbSchema,
+  delayMs: delayMsSchema,
+  invert: invertSchema,
+  distanceM: distanceMSchema.optional(),
+});
+
+/** POST /api/v1/blend (SPEC §6), plus an optional crossoverHz for the metrics. */
+export const blendRequestSchema = z
+  .strictObject({
+    temperatureC: temperatureCSchema,
+    grid: gridSchema,
+    paths: z.array(blendPathSchema).min(1, 'must hold at least one path').max(COMPUTE_LIMITS.maxPaths, `must hold at most ${COMPUTE_LIMITS.maxPaths} paths`),
+    crossoverHz: hz().optional(),
+  })
+  .superRefine((b, ctx) => {
+    if (b.crossoverHz !== undefined && (b.crossoverHz < b.grid.startHz || b.crossoverHz > b.grid.stopHz)) {
+      ctx.addIssue({ code: 'custom', path: ['crossoverHz'], message: `must lie within the grid (${b.grid.startHz}–${b.grid.stopHz} Hz)` });
+    }
+  });
+
+export type BlendRequest = z.infer<typeof blendRequestSchema>;
+
+/** The product's default candidates: 40–150 Hz in 5 Hz steps (SPEC §4). */
+export const DEFAULT_SWEEP_CANDIDATES_HZ: readonly number[] = Array.from({ length: 23 }, (_, i) => 40 + 5 * i);
+
+const pairingSchema = z.strictObject({ mainsFilter: filterShapeSchema, subFilter: filterShapeSchema });
+
+/** Most candidate points × slope pairings one sweep request may try. */
+export const SWEEP_LIMITS = { maxCandidates: 60, maxPairings: 6, maxRows: 120, minHz: 20, maxHz: 300 } as const;
+
+/** POST /api/v1/crossover-sweep. */
+export const crossoverSweepRequestSchema = z
+  .strictObject({
+    temperatureC: temperatureCSchema.default(20),
+    mainsRolloff: mainsRolloffSchema,
+    subRolloff: subRolloffSchema,
+    pairings: z.array(pairingSchema).min(1, 'must hold at least one pairing').max(SWEEP_LIMITS.maxPairings, `must hold at most ${SWEEP_LIMITS.maxPairings} pairings`),
+    candidatesHz: z
+      .array(hz(SWEEP_LIMITS.minHz, SWEEP_LIMITS.maxHz))
+      .min(1, 'must hold at least one frequency')
+      .max(SWEEP_LIMITS.maxCandidates, `must hold at most ${SWEEP_LIMITS.maxCandidates} frequencies`)
+      .optional(),
+    mainsGainDb: gainDbSchema.default(0),
+    subGainDb: gainDbSchema.default(0),
+    mainsDistanceM: distanceMSchema.default(0),
+    subDistanceM: distanceMSchema.default(0),
+    maxDelayMs: num(1, 50, 'ms').default(20),
+  })
+  .superRefine((b, ctx) => {
+    const n = (b.candidatesHz?.length ?? DEFAULT_SWEEP_CANDIDATES_HZ.length) * b.pairings.length;
+    if (n > SWEEP_LIMITS.maxRows) {
+      ctx.addIssue({ code: 'custom', path: ['candidatesHz'], message: `candidates × pairings gives ${n} rows; at most ${SWEEP_LIMITS.maxRows} are allowed` });
+    }
+  });
+
+export type CrossoverSweepRequest = z.infer<typeof crossoverSweepRequestSchema>;
+
+const timingMainsSchema = z.strictObject({
+  name: nameSchema.default('mains'),
+  distanceM: distanceMSchema,
+  delayMs: delayMsSchema.default(0),
+  gainDb: gainDbSchema.default(0),
+  rolloff: mainsRolloffSchema.default({ kind: 'none' }),
+});
+
+const timingSubSchema = z.strictObject({
+  name: nameSchema,
+  distanceM: distanceMSchema,
+  delayMs: delayMsSchema.default(0),
+  gainDb: gainDbSchema.default(0),
+  invert: invertSchema.default(false),
+  rolloff: subRolloffSchema.default({ kind: 'none' }),
+});
+
+/** POST /api/v1/timing. */
+export const timingRequestSchema = z.strictObject({
+  temperatureC: temperatureCSchema.default(20),
+  crossoverHz: hz(20, 300),
+  mainsHighpass: filterShapeSchema,
+  subLowpass: filterShapeSchema,
+  mains: timingMainsSchema,
+  subs: z.array(timingSubSchema).min(1, 'must hold at least one sub').max(8, 'must hold at most 8 subs'),
+  maxDelayMs: num(1, 50, 'ms').default(20),
+  stepMs: num(0.01, 1, 'ms').default(0.05),
+});
+
+export type TimingRequest = z.infer<typeof timingRequestSchema>;
