@@ -8,6 +8,7 @@ export const PANELS = [
   { id: 'modes', label: 'Modes' },
   { id: 'layout', label: 'Layout' },
   { id: 'headroom', label: 'Headroom' },
+  { id: 'measured', label: 'Measured' },
 ] as const;
 
 export type PanelId = (typeof PANELS)[number]['id'];

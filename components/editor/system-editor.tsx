@@ -6,6 +6,8 @@ import { useCallback, useEffect, useMemo, useRef, useState, useSyncExternalStore
 import { BlendPanel } from '@/components/blend/blend-panel';
 import { HeadroomPanel } from '@/components/headroom/headroom-panel';
 import { LayoutPanel } from '@/components/layout/layout-panel';
+import { AddToLessonButton } from '@/components/lessons/add-to-lesson-button';
+import { MeasuredPanel } from '@/components/measured/measured-panel';
 import { ModesPanel } from '@/components/modes/modes-panel';
 import { TimingPanel } from '@/components/timing/timing-panel';
 import { Button, buttonClass } from '@/components/ui/button';
@@ -170,7 +172,7 @@ export function SystemEditor({ saved, signedIn }: Props) {
     return url.toString();
   };
 
-  const ActivePanel = { blend: BlendPanel, timing: TimingPanel, modes: ModesPanel, layout: LayoutPanel, headroom: HeadroomPanel }[panel];
+  const ActivePanel = { blend: BlendPanel, timing: TimingPanel, modes: ModesPanel, layout: LayoutPanel, headroom: HeadroomPanel, measured: MeasuredPanel }[panel];
 
   return (
     <SystemContext.Provider value={value}>
@@ -222,6 +224,7 @@ export function SystemEditor({ saved, signedIn }: Props) {
               Settings sheet
             </Link>
           ) : null}
+          {signedIn ? <AddToLessonButton doc={doc} name={name} panel={panel} /> : null}
           {readOnly ? (
             <Link href={shareUrl()} className={buttonClass('secondary')}>
               Open a copy in the editor
