@@ -5,7 +5,7 @@ const config = [
   ...nextCoreWebVitals,
   ...nextTypescript,
   {
-    ignores: ['node_modules/**', '.next/**', '.data/**', 'playwright-report/**', 'test-results/**', 'next-env.d.ts', 'coverage/**'],
+    ignores: ['node_modules/**', '.next/**', '.next-*/**', '.data/**', 'playwright-report/**', 'test-results/**', 'next-env.d.ts', 'coverage/**'],
   },
   {
     files: ['dsp/**/*.ts'],
