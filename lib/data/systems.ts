@@ -1,4 +1,4 @@
-import { Op, type WhereOptions } from 'sequelize';
+import { col, fn, Op, type OrderItem, type WhereOptions } from 'sequelize';
 import { callerWorkspaces, requireMembership, type Caller } from '@/lib/access';
 import { db } from '@/lib/db';
 import { conflict, notFound } from '@/lib/errors';
@@ -78,7 +78,9 @@ export async function listSystems(caller: Caller, query: SystemListQuery): Promi
     ...(query.q ? { name: { [Op.iLike]: `%${escapeLike(query.q)}%` } } : {}),
     ...(query.tag ? { tags: { [Op.contains]: [query.tag] } } : {}),
   };
-  const order: [string, string][] = query.sort.endsWith('name') ? [['name', query.sort.startsWith('-') ? 'DESC' : 'ASC']] : [['updatedAt', query.sort.startsWith('-') ? 'DESC' : 'ASC']];
+  const direction = query.sort.startsWith('-') ? 'DESC' : 'ASC';
+  // By name: case-insensitive (the database collates bytewise, which would put "alder" after "Cedar").
+  const order: OrderItem[] = query.sort.endsWith('name') ? [[fn('lower', col('System.name')), direction]] : [['updatedAt', direction]];
   const { rows, count } = await System.findAndCountAll({
     where,
     include,

@@ -19,3 +19,8 @@ export const systemListQuerySchema = z.object({
 });
 export const copySchema = z.object({ workspaceId: z.string().uuid('workspaceId must be a workspace id'), name: systemNameSchema.optional() });
 export type SystemListQuery = z.infer<typeof systemListQuerySchema>;
+export const systemDuplicateSchema = z.object({ name: systemNameSchema.optional(), workspaceId: z.string().uuid('workspaceId must be a workspace id').optional() });
+/** Restoring an old revision saves it as a new one; `revision` is the current revision the caller last read. */
+export const revisionRestoreSchema = z.object({ revision: z.number({ error: 'revision must be the revision you last read' }).int().min(1) });
+export const revisionParamSchema = z.coerce.number({ error: 'revision must be a whole number' }).int().min(1).max(1_000_000);
+export const exportQuerySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'format must be json or csv' }).default('json') });
