@@ -9,6 +9,7 @@ import { migration as createInvitations } from './20261201000700-create-invitati
 import { migration as createPasswordResetTokens } from './20261201000800-create-password-reset-tokens';
 import { migration as createRateLimits } from './20261201000900-create-rate-limits';
 import { migration as createDevMessages } from './20261201001000-create-dev-messages';
+import { migration as createSpeakerProfiles } from './20261201002000-create-speaker-profiles';
 
 /** Every migration in the order it runs; a new migration is added at the end. */
 export const migrations: Migration[] = [
@@ -22,4 +23,5 @@ export const migrations: Migration[] = [
   createPasswordResetTokens,
   createRateLimits,
   createDevMessages,
+  createSpeakerProfiles,
 ];

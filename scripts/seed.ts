@@ -3,10 +3,13 @@
  * Idempotent: finds what exists by e-mail and name, creates only what is missing.
  */
 import { db } from '../lib/db';
+import { ensureProfile } from '../lib/data/profiles';
 import { createSystem } from '../lib/data/systems';
 import { createUserWithWorkspace, findUserByEmail } from '../lib/data/users';
 import { addMember } from '../lib/data/workspaces';
+import { DEMO_PROFILES } from '../lib/demo/profiles';
 import { juniperLaneDocument, lindenStreetDocument } from '../lib/demo/systems';
+import { profileFieldsSchema } from '../lib/validations/profile';
 import { systemDocumentSchema } from '../lib/validations/system';
 import { Membership, System, Workspace } from '../models';
 
@@ -50,5 +53,12 @@ export async function seedDemo(): Promise<string> {
       made.push(name);
     }
   }
-  return `workspace "${DEMO_WORKSPACE}" ready; ${made.length ? `created ${made.join(', ')}` : 'Systems already present'}`;
+
+  // The invented demo Speaker profiles, in the workspace's Library (by name and kind, once).
+  let profilesAdded = 0;
+  for (const profile of DEMO_PROFILES) {
+    if (await ensureProfile(workspace.id, owner.id, profileFieldsSchema.parse(profile))) profilesAdded++;
+  }
+
+  return `workspace "${DEMO_WORKSPACE}" ready; ${made.length ? `created ${made.join(', ')}` : 'Systems already present'}; ${profilesAdded ? `added ${profilesAdded} Speaker profiles` : 'Speaker profiles already present'}`;
 }
