@@ -64,7 +64,6 @@ function playwrightTally(report: string, exitOk: boolean): Tally {
 
 async function main() {
   const started = Date.now();
-  const only = process.argv[2]; // optional: "unit" or "e2e"
   if (!existsSync('/usr/bin/chromium')) aptInstall(['chromium']);
 
   const dbPort = await freePort();
@@ -91,6 +90,14 @@ async function main() {
 
   const tallies: Tally[] = [];
   let server: ChildProcess | null = null;
+  // Interrupted: stop the throw-away server and remove its data before leaving.
+  for (const signal of ['SIGINT', 'SIGTERM'] as const) {
+    process.once(signal, () => {
+      server?.kill('SIGTERM');
+      stopPostgres(databaseUrl, { dataDir, remove: true });
+      process.exit(130);
+    });
+  }
   let catcher: { close: (cb: () => void) => void } | null = null;
   try {
     console.log(`• throw-away PostgreSQL on 127.0.0.1:${dbPort}`);
@@ -101,25 +108,25 @@ async function main() {
     const { startMailCatcher } = await import('./mail-catcher');
     catcher = await startMailCatcher(env.SMTP_URL, databaseUrl);
 
-    if (!only || only === 'unit') {
-      tallies.push(step('lint', bin('eslint'), ['--max-warnings=0', '.'], env));
-      tallies.push(step('type-check', bin('tsc'), ['--noEmit', '-p', '.'], env));
-      console.log('\n━━ vitest: unit, property and integration ━━');
-      const vitestReport = path.join(reports, 'vitest.json');
-      const v = spawnSync(bin('vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`], { cwd: projectRoot, stdio: 'inherit', env });
-      tallies.push(vitestTally(vitestReport, v.status === 0));
-    }
+    tallies.push(step('lint', bin('eslint'), ['--max-warnings=0', '.'], env));
+    tallies.push(step('type-check', bin('tsc'), ['--noEmit', '-p', '.'], env));
+    // The app is built and served first, so integration tests can call it over HTTP with real sessions.
+    const build = step('production build', bin('next'), ['build'], { ...env, NODE_ENV: 'production' });
+    tallies.push(build);
+    if (build.failed === 0) server = await serveApp(appPort, env, { quiet: true });
 
-    if (!only || only === 'e2e') {
-      const build = step('production build', bin('next'), ['build'], { ...env, NODE_ENV: 'production' });
-      tallies.push(build);
-      if (build.failed === 0) {
-        server = await serveApp(appPort, env, { quiet: true });
-        console.log('\n━━ playwright: end-to-end in Debian Chromium ━━');
-        const pwReport = path.join(reports, 'playwright.json');
-        const p = spawnSync(bin('playwright'), ['test'], { cwd: projectRoot, stdio: 'inherit', env: { ...env, CI_REPORT: pwReport } });
-        tallies.push(playwrightTally(pwReport, p.status === 0));
-      }
+    console.log('\n━━ vitest: unit, property and integration ━━');
+    const vitestReport = path.join(reports, 'vitest.json');
+    const v = spawnSync(bin('vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`], { cwd: projectRoot, stdio: 'inherit', env });
+    tallies.push(vitestTally(vitestReport, v.status === 0));
+
+    if (server) {
+      console.log('\n━━ playwright: end-to-end in Debian Chromium ━━');
+      const pwReport = path.join(reports, 'playwright.json');
+      const p = spawnSync(bin('playwright'), ['test'], { cwd: projectRoot, stdio: 'inherit', env: { ...env, CI_REPORT: pwReport } });
+      tallies.push(playwrightTally(pwReport, p.status === 0));
+      // Last, because it stops and restarts the database under the running app.
+      tallies.push(step('database outage (test:fault)', bin('tsx'), [path.join('scripts', 'test-fault.ts')], env));
     }
   } catch (e) {
     console.error(`\nthe test set-up failed: ${e instanceof Error ? e.message : e}`);

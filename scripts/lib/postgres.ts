@@ -56,6 +56,11 @@ function asPostgres(bin: string, args: string[]): void {
   else run(bin, args);
 }
 
+/** The postgres options our servers run with (also used to restart one, e.g. in the fault test). */
+export function serverOptions(host: string, port: number, dataDir: string): string {
+  return `-c listen_addresses=${host} -c port=${port} -c unix_socket_directories='${dataDir}' -c max_connections=200`;
+}
+
 function quoteIdent(s: string) {
   return `"${s.replace(/"/g, '""')}"`;
 }
@@ -104,7 +109,7 @@ export async function ensurePostgres(databaseUrl: string, options: { dataDir?: s
   log(`• starting PostgreSQL on ${host}:${target.port}`);
   asPostgres(path.join(bin, 'pg_ctl'), [
     '-D', dataDir, '-l', logFile, '-w', '-t', '60', 'start',
-    '-o', `-c listen_addresses=${host} -c port=${target.port} -c unix_socket_directories=${dataDir} -c max_connections=200 -c fsync=on`,
+    '-o', serverOptions(host, target.port, dataDir),
   ]);
   await ensureRoleAndDatabase(target, dataDir);
 }
