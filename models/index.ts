@@ -9,6 +9,7 @@ import { SystemRevision } from './system-revision';
 import { User } from './user';
 import { Workspace } from './workspace';
 import { SpeakerProfileRow } from './speaker-profile';
+import { Measurement } from './measurement';
 
 export { DevMessage, Invitation, Membership, PasswordResetToken, ShareLink, System, SystemRevision, User, Workspace };
 export type { SiteRole } from './user';
@@ -16,6 +17,9 @@ export type { WorkspaceRole } from './membership';
 export type { ShareTarget } from './share-link';
 export { SpeakerProfileRow };
 export type { SpeakerProfileKind } from './speaker-profile';
+
+export { Measurement };
+export type { MeasurementData } from './measurement';
 
 // Per module instance: bundlers may load this module more than once around one shared Sequelize.
 let initialisedWith: Sequelize | null = null;
@@ -41,4 +45,8 @@ export function initModels(sequelize: Sequelize): void {
   SpeakerProfileRow.initModel(sequelize);
   SpeakerProfileRow.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
   SpeakerProfileRow.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  Measurement.initModel(sequelize);
+  Measurement.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  Measurement.belongsTo(System, { foreignKey: 'systemId', as: 'system' });
+  Measurement.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
 }

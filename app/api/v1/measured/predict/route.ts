@@ -1,0 +1,26 @@
+import { getCaller } from '@/lib/auth';
+import { getMeasurement } from '@/lib/data/measurements';
+import { unauthorized } from '@/lib/errors';
+import { json, parseJson, route } from '@/lib/http';
+import { computeMeasuredPrediction, type CurvePoints } from '@/lib/system-model/measured';
+import { predictRequestSchema, type MeasuredCurveInput } from '@/lib/validations/measurement';
+
+/** Inline curves can be long: up to 20 000 points each. */
+const PREDICT_BODY_LIMIT_BYTES = 2 * 1024 * 1024;
+
+/** Inline points need no session; a `measurementId` is read with the caller's workspace rights. */
+async function curvePoints(curve: MeasuredCurveInput): Promise<CurvePoints> {
+  if ('measurementId' in curve) {
+    const caller = await getCaller();
+    if (!caller) throw unauthorized('Sign in to predict from stored measurements, or send the points inline.');
+    const m = await getMeasurement(caller, curve.measurementId);
+    return { frequencyHz: m.frequencyHz, magnitudeDb: m.magnitudeDb, phaseDeg: m.phaseDeg };
+  }
+  return { frequencyHz: curve.frequencyHz, magnitudeDb: curve.magnitudeDb, phaseDeg: curve.phaseDeg ?? null };
+}
+
+export const POST = route(async (request) => {
+  const input = await parseJson(request, predictRequestSchema, PREDICT_BODY_LIMIT_BYTES);
+  const [mains, sub] = await Promise.all([curvePoints(input.mains.curve), curvePoints(input.sub.curve)]);
+  return json(computeMeasuredPrediction(input, { mains, sub }));
+});

@@ -1,0 +1,154 @@
+import { Op, type WhereOptions } from 'sequelize';
+import { callerWorkspaces, requireMembership, type Caller } from '@/lib/access';
+import { db } from '@/lib/db';
+import { notFound } from '@/lib/errors';
+import type { ParsedMeasurement } from '@/lib/measurements/parse-measurement';
+import type { MeasurementListQuery, MeasurementUploadFields } from '@/lib/validations/measurement';
+import { Measurement, System, User, Workspace, type MeasurementData } from '@/models';
+import { personalWorkspaceId } from './systems';
+
+/** A measurement without its points (list rows, upload answers). */
+export interface AppMeasurementSummary {
+  id: string;
+  workspaceId: string;
+  workspaceName: string;
+  systemId: string | null;
+  name: string;
+  seat: string | null;
+  role: string | null;
+  pointCount: number;
+  startHz: number;
+  stopHz: number;
+  hasPhase: boolean;
+  createdByName: string | null;
+  createdAt: string;
+}
+
+/** A measurement with every point exactly as uploaded. */
+export interface AppMeasurement extends AppMeasurementSummary, MeasurementData {}
+
+type Row = Measurement & { workspace?: Workspace; createdBy?: User | null };
+
+const include = [
+  { model: Workspace, as: 'workspace', attributes: ['id', 'name'] },
+  { model: User, as: 'createdBy', attributes: ['id', 'name'] },
+];
+
+function toSummary(r: Row): AppMeasurementSummary {
+  return {
+    id: r.id,
+    workspaceId: r.workspaceId,
+    workspaceName: r.workspace?.name ?? '',
+    systemId: r.systemId,
+    name: r.name,
+    seat: r.seat,
+    role: r.role,
+    pointCount: r.pointCount,
+    startHz: r.startHz,
+    stopHz: r.stopHz,
+    hasPhase: r.hasPhase,
+    createdByName: r.createdBy?.name ?? null,
+    createdAt: r.createdAt.toISOString(),
+  };
+}
+
+function toApp(r: Row): AppMeasurement {
+  const d = r.data;
+  return { ...toSummary(r), frequencyHz: d.frequencyHz, magnitudeDb: d.magnitudeDb, phaseDeg: d.phaseDeg ?? null };
+}
+
+async function findRow(id: string, withData: boolean): Promise<Row> {
+  db();
+  if (!/^[0-9a-f-]{36}$/i.test(id)) throw notFound('That measurement');
+  const r = (await Measurement.findByPk(id, { include, ...(withData ? {} : { attributes: { exclude: ['data'] } }) })) as Row | null;
+  if (!r) throw notFound('That measurement');
+  return r;
+}
+
+/** Measurements of every workspace the caller belongs to (or of one, or of one System), newest first. */
+export async function listMeasurements(caller: Caller, query: MeasurementListQuery): Promise<{ items: AppMeasurementSummary[] }> {
+  const workspaces = await callerWorkspaces(caller);
+  let ids = [...workspaces.keys()];
+  if (query.workspaceId) ids = ids.filter((id) => id === query.workspaceId);
+  if (!ids.length) return { items: [] };
+  const where: WhereOptions = { workspaceId: { [Op.in]: ids }, ...(query.systemId ? { systemId: query.systemId } : {}) };
+  const rows = (await Measurement.findAll({ where, include, attributes: { exclude: ['data'] }, order: [['createdAt', 'DESC'], ['id', 'ASC']], limit: 500 })) as Row[];
+  return { items: rows.map(toSummary) };
+}
+
+export async function getMeasurement(caller: Caller, id: string): Promise<AppMeasurement> {
+  const r = await findRow(id, true);
+  await requireMembership(caller, r.workspaceId, 'viewer', 'That measurement');
+  return toApp(r);
+}
+
+/**
+ * Where an upload goes: the System's workspace when a systemId is given (editor there), else the
+ * named workspace, else the caller's personal one. Resolved before the file is read, so a refused
+ * caller learns nothing from the file's checks.
+ */
+export async function uploadTarget(caller: Caller, fields: Pick<MeasurementUploadFields, 'systemId' | 'workspaceId'>): Promise<{ workspaceId: string; systemId: string | null }> {
+  db();
+  if (fields.systemId) {
+    const system = await System.findByPk(fields.systemId, { attributes: ['id', 'workspaceId', 'deletedAt'] });
+    if (!system || system.deletedAt) throw notFound('That System');
+    await requireMembership(caller, system.workspaceId, 'editor', 'That System');
+    return { workspaceId: system.workspaceId, systemId: system.id };
+  }
+  const workspaceId = fields.workspaceId ?? (await personalWorkspaceId(caller));
+  await requireMembership(caller, workspaceId, 'editor', 'That workspace');
+  return { workspaceId, systemId: null };
+}
+
+export async function createMeasurement(
+  caller: Caller,
+  target: { workspaceId: string; systemId: string | null },
+  fields: { name: string; seat?: string; role?: string },
+  parsed: ParsedMeasurement,
+): Promise<AppMeasurementSummary> {
+  await requireMembership(caller, target.workspaceId, 'editor', 'That workspace');
+  const created = await Measurement.create({
+    workspaceId: target.workspaceId,
+    systemId: target.systemId,
+    createdById: caller.id,
+    name: fields.name,
+    seat: fields.seat ?? null,
+    role: fields.role ?? null,
+    pointCount: parsed.pointCount,
+    startHz: parsed.startHz,
+    stopHz: parsed.stopHz,
+    hasPhase: parsed.hasPhase,
+    data: { frequencyHz: parsed.frequencyHz, magnitudeDb: parsed.magnitudeDb, phaseDeg: parsed.phaseDeg },
+  });
+  return toSummary(await findRow(created.id, false));
+}
+
+export async function deleteMeasurement(caller: Caller, id: string): Promise<void> {
+  const r = await findRow(id, false);
+  await requireMembership(caller, r.workspaceId, 'editor', 'That measurement');
+  await Measurement.destroy({ where: { id } });
+}
+
+/** For the demo seed: adds a measurement to a workspace unless one of that name is there. */
+export async function ensureMeasurement(
+  workspaceId: string,
+  systemId: string | null,
+  createdById: string | null,
+  fields: { name: string; seat: string; role: string },
+  parsed: ParsedMeasurement,
+): Promise<boolean> {
+  db();
+  if (await Measurement.findOne({ where: { workspaceId, name: fields.name }, attributes: ['id'] })) return false;
+  await Measurement.create({
+    workspaceId,
+    systemId,
+    createdById,
+    ...fields,
+    pointCount: parsed.pointCount,
+    startHz: parsed.startHz,
+    stopHz: parsed.stopHz,
+    hasPhase: parsed.hasPhase,
+    data: { frequencyHz: parsed.frequencyHz, magnitudeDb: parsed.magnitudeDb, phaseDeg: parsed.phaseDeg },
+  });
+  return true;
+}

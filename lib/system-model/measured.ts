@@ -1,0 +1,231 @@
+/**
+ * Measured: the compute behind POST /api/v1/measured/predict, the document → request glue, and
+ * applying the measured-pair recommendation back to the document. The mathematics (resampling,
+ * minimum phase, applying a path, the complex sum, the delay scan and Timing window, smoothing)
+ * is dsp's; here only the shared grid, processor bookkeeping and rounding.
+ */
+import {
+  bestMeasuredAlignment,
+  logFrequencyGridHz,
+  predictMeasuredBlend,
+  resampleCurve,
+  smoothFractionalOctave,
+  type MeasuredPathInput,
+  type PathSpec,
+} from '@/dsp';
+import { invalid } from '@/lib/errors';
+import type { PredictRequest, PredictRequestInput } from '@/lib/validations/measurement';
+import type { SystemDocument } from '@/lib/validations/system';
+import { blendMainSpeaker } from './index';
+import { roundTo } from './blend-compute';
+
+/** The points of one curve, as stored or sent inline. */
+export interface CurvePoints {
+  frequencyHz: readonly number[];
+  magnitudeDb: readonly number[];
+  phaseDeg: readonly number[] | null;
+}
+
+export interface PredictTrace {
+  name: string;
+  magnitudeDb: number[];
+  phaseDeg: number[];
+  /** True when this trace's phase is a minimum-phase estimate (the file had none). */
+  phaseEstimated: boolean;
+}
+
+export interface PredictAnswer {
+  /** The shared log grid: the two curves' common range within 10 Hz … max(1 kHz, 4.5·fc). */
+  frequencyHz: number[];
+  smoothingFraction: number;
+  /** True when either file had no phase and its minimum-phase estimate was used. */
+  phaseEstimated: boolean;
+  /** Each measurement on the shared grid, as measured (nothing applied). */
+  measured: PredictTrace[];
+  /** Each measurement with the System's filter, gain, delay and polarity applied. */
+  paths: PredictTrace[];
+  /** The two processed paths summed: what the System's settings would give at this seat. */
+  predictedSum: { magnitudeDb: number[]; phaseDeg: number[] };
+  /** The two measurements summed as they are (no processing): the seat as measured. */
+  measuredSum: { magnitudeDb: number[]; phaseDeg: number[] };
+  /** Best extra delay and sub polarity found on the measured pair; null when the curves do not cover fc/2 … 4fc. */
+  alignment: null | {
+    addTo: 'sub' | 'mains';
+    addDelayMs: number;
+    subDelayMs: number;
+    mainsDelayMs: number;
+    invert: boolean;
+    flipPolarity: boolean;
+    phaseDifferenceDeg: number;
+    phaseDifferenceAfterDeg: number;
+    crossoverLevelDb: number;
+    flatnessBeforeDb: number;
+    flatnessDb: number;
+    /** Timing window in sub-minus-mains delay settings, ms. */
+    timingWindowMs: [number, number];
+    levelVersusDelay: { subMinusMainsDelayMs: number[]; normalDb: number[]; invertedDb: number[] };
+    /** The predicted sum with the recommendation applied. */
+    recommendedSum: { magnitudeDb: number[] };
+  };
+  /** Why there is no alignment, when there is none. */
+  alignmentNote: string | null;
+}
+
+const r3 = (v: number) => roundTo(v, 3);
+const r2 = (v: number) => roundTo(v, 2);
+const list = (a: ArrayLike<number>, round: (v: number) => number) => Array.from(a, round);
+
+export const PREDICT_MIN_HZ = 10;
+
+/** Predicts the blend at the measurement seat from two measured curves and the System's settings. */
+export function computeMeasuredPrediction(req: PredictRequest, curves: { mains: CurvePoints; sub: CurvePoints }): PredictAnswer {
+  const { mains, sub } = curves;
+  const topHz = Math.max(1000, 4.5 * req.crossoverHz);
+  const startHz = Math.max(PREDICT_MIN_HZ, mains.frequencyHz[0] as number, sub.frequencyHz[0] as number);
+  const stopHz = Math.min(topHz, mains.frequencyHz[mains.frequencyHz.length - 1] as number, sub.frequencyHz[sub.frequencyHz.length - 1] as number);
+  if (!(stopHz >= 2 * startHz)) {
+    throw invalid(`The two measurements share only ${r2(startHz)}–${r2(stopHz)} Hz (within ${PREDICT_MIN_HZ}–${topHz} Hz); at least one octave in common is needed.`, [
+      { path: 'sub.curve', message: `shares less than an octave with the mains curve (${r2(startHz)}–${r2(stopHz)} Hz)` },
+    ]);
+  }
+  const grid = logFrequencyGridHz({ startHz, stopHz: stopHz * (1 + 1e-12), pointsPerOctave: req.pointsPerOctave });
+  const onGrid = (c: CurvePoints) =>
+    resampleCurve({ frequencyHz: c.frequencyHz, magnitudeDb: c.magnitudeDb, ...(c.phaseDeg ? { phaseDeg: c.phaseDeg } : {}), targetHz: grid });
+  const m = onGrid(mains);
+  const s = onGrid(sub);
+
+  const mainsPath: PathSpec = {
+    name: req.mains.name,
+    filter: { family: req.mainsHighpass.family, order: req.mainsHighpass.order, response: 'highpass', cornerHz: req.crossoverHz },
+    gainDb: req.mains.gainDb,
+    delayMs: req.mains.delayMs,
+    invert: req.mains.invert,
+  };
+  const subPathSpec: PathSpec = {
+    name: req.sub.name,
+    filter: { family: req.subLowpass.family, order: req.subLowpass.order, response: 'lowpass', cornerHz: req.crossoverHz },
+    gainDb: req.sub.gainDb,
+    delayMs: req.sub.delayMs,
+    invert: req.sub.invert,
+  };
+  const input = (c: typeof m, path: PathSpec): MeasuredPathInput => ({ magnitudeDb: c.magnitudeDb, ...(c.phaseDeg ? { phaseDeg: c.phaseDeg } : {}), path });
+  const wire = (path: PathSpec): PathSpec => ({ ...path, filter: { ...path.filter, response: 'none' }, gainDb: 0, delayMs: 0, invert: false });
+
+  const predicted = predictMeasuredBlend({ frequencyHz: grid, measured: [input(m, mainsPath), input(s, subPathSpec)], temperatureC: req.temperatureC });
+  const asMeasured = predictMeasuredBlend({ frequencyHz: grid, measured: [input(m, wire(mainsPath)), input(s, wire(subPathSpec))], temperatureC: req.temperatureC });
+
+  const fraction = req.smoothingFraction;
+  const smooth = (db: Float64Array): number[] => list(fraction > 0 ? smoothFractionalOctave({ frequencyHz: grid, magnitudeDb: db, fraction }).magnitudeDb : db, r3);
+
+  let alignment: PredictAnswer['alignment'] = null;
+  let alignmentNote: string | null = null;
+  const needLo = req.crossoverHz / 2;
+  const needHi = 4 * req.crossoverHz;
+  if (startHz > needLo * (1 + 1e-9) || stopHz < needHi * (1 - 1e-9)) {
+    alignmentNote = `The best delay needs both curves to cover ${r2(needLo)}–${r2(needHi)} Hz (half to four times the crossover); they share ${r2(startHz)}–${r2(stopHz)} Hz.`;
+  } else {
+    const a = bestMeasuredAlignment({
+      frequencyHz: grid,
+      mains: input(m, mainsPath),
+      sub: input(s, subPathSpec),
+      crossoverHz: req.crossoverHz,
+      temperatureC: req.temperatureC,
+      maxDelayMs: req.maxDelayMs,
+    });
+    // Processor bookkeeping as on Timing: delays are "sub minus mains" settings, one side stays at 0.
+    const offsetMs = req.sub.delayMs - req.mains.delayMs;
+    const next = offsetMs + a.relativeDelayMs;
+    const subDelayMs = Math.max(0, next);
+    const mainsDelayMs = Math.max(0, -next);
+    const recommended = predictMeasuredBlend({
+      frequencyHz: grid,
+      measured: [input(m, { ...mainsPath, delayMs: mainsDelayMs }), input(s, { ...subPathSpec, delayMs: subDelayMs, invert: a.invertSub })],
+      temperatureC: req.temperatureC,
+    });
+    alignment = {
+      addTo: next >= offsetMs ? 'sub' : 'mains',
+      addDelayMs: r3(Math.abs(a.relativeDelayMs)),
+      subDelayMs: r3(subDelayMs),
+      mainsDelayMs: r3(mainsDelayMs),
+      invert: a.invertSub,
+      flipPolarity: a.flipPolarity,
+      phaseDifferenceDeg: r2(a.phaseDifferenceDeg),
+      phaseDifferenceAfterDeg: r2(a.phaseDifferenceAfterDeg),
+      crossoverLevelDb: r3(a.crossoverLevelDb),
+      flatnessBeforeDb: r3(a.flatnessBeforeDb),
+      flatnessDb: r3(a.flatnessDb),
+      timingWindowMs: [r3(offsetMs + a.windowMs[0]), r3(offsetMs + a.windowMs[1])],
+      levelVersusDelay: {
+        subMinusMainsDelayMs: list(a.levelVersusDelay.delayMs, (d) => r3(offsetMs + d)),
+        normalDb: list(a.levelVersusDelay.normalDb, r3),
+        invertedDb: list(a.levelVersusDelay.invertedDb, r3),
+      },
+      recommendedSum: { magnitudeDb: smooth(recommended.sum.magnitudeDb) },
+    };
+    if (predicted.phaseEstimated) alignmentNote = 'At least one curve has no measured phase: its minimum-phase estimate holds no arrival time, so treat the best delay as a rough guide and measure with phase to confirm.';
+  }
+
+  // As measured: the file's phase, or the minimum-phase estimate (the "wire" paths add nothing to it).
+  const asIs = (c: typeof m, i: number, name: string): PredictTrace => ({
+    name,
+    magnitudeDb: smooth(c.magnitudeDb),
+    phaseDeg: list(c.phaseDeg ?? asMeasured.paths[i]!.phaseDeg, r2),
+    phaseEstimated: !c.phaseDeg,
+  });
+  return {
+    frequencyHz: list(grid, (f) => Number(f.toPrecision(6))),
+    smoothingFraction: fraction,
+    phaseEstimated: predicted.phaseEstimated,
+    measured: [asIs(m, 0, req.mains.name), asIs(s, 1, req.sub.name)],
+    paths: predicted.paths.map((p) => ({ name: p.name, magnitudeDb: smooth(p.magnitudeDb), phaseDeg: list(p.phaseDeg, r2), phaseEstimated: p.phaseEstimated })),
+    predictedSum: { magnitudeDb: smooth(predicted.sum.magnitudeDb), phaseDeg: list(predicted.sum.phaseDeg, r2) },
+    measuredSum: { magnitudeDb: smooth(asMeasured.sum.magnitudeDb), phaseDeg: list(asMeasured.sum.phaseDeg, r2) },
+    alignment,
+    alignmentNote,
+  };
+}
+
+/** Which System sub a sub measurement stands for, and which main channel the mains measurement. */
+export interface PredictTarget {
+  channel?: string;
+  subIndex: number;
+}
+
+/** The predict body for two curves with the System's current settings (the mains channel's trim, the chosen sub's gain, delay and polarity). */
+export function predictRequestFromDocument(
+  doc: SystemDocument,
+  curves: { mains: PredictRequestInput['mains']['curve']; sub: PredictRequestInput['sub']['curve'] },
+  target: PredictTarget,
+  options: { smoothingFraction?: number } = {},
+): PredictRequestInput | null {
+  const speaker = blendMainSpeaker(doc, target.channel);
+  const sub = doc.subs[target.subIndex];
+  if (!speaker || !sub) return null;
+  const bm = doc.bassManagement;
+  return {
+    temperatureC: doc.room.temperatureC,
+    crossoverHz: bm.crossoverHz,
+    mainsHighpass: { family: bm.mainsHighpass.family, order: bm.mainsHighpass.order },
+    subLowpass: { family: bm.subLowpass.family, order: bm.subLowpass.order },
+    mains: { name: speaker.channel, curve: curves.mains, gainDb: speaker.trimDb, delayMs: bm.mainsDelayMs, invert: false },
+    sub: { name: sub.name, curve: curves.sub, gainDb: sub.gainDb, delayMs: sub.delayMs, invert: sub.invert },
+    smoothingFraction: options.smoothingFraction ?? 0,
+  };
+}
+
+/**
+ * Writes the measured-pair recommendation into the document: the chosen sub's delay and polarity
+ * and the mains delay. When the mains delay moves, the other subs move by the same amount so their
+ * own alignment to the mains is kept; then what every path has in common is taken out.
+ */
+export function applyMeasuredRecommendation(doc: SystemDocument, subIndex: number, rec: { subDelayMs: number; mainsDelayMs: number; invert: boolean }): SystemDocument {
+  const clamp = (v: number) => Math.min(100, Math.max(0, roundTo(v, 2)));
+  const mainsShift = rec.mainsDelayMs - doc.bassManagement.mainsDelayMs;
+  const subs = doc.subs.map((s, k) => (k === subIndex ? { ...s, delayMs: rec.subDelayMs, invert: rec.invert } : { ...s, delayMs: s.delayMs + mainsShift }));
+  const common = Math.min(rec.mainsDelayMs, ...subs.map((s) => s.delayMs));
+  return {
+    ...doc,
+    bassManagement: { ...doc.bassManagement, mainsDelayMs: clamp(rec.mainsDelayMs - common) },
+    subs: subs.map((s) => ({ ...s, delayMs: clamp(s.delayMs - common) })),
+  };
+}

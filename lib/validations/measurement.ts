@@ -1,0 +1,85 @@
+import { z } from 'zod';
+import { filterFamilySchema } from './compute-blend';
+import { num, temperatureCSchema } from './compute-common';
+import { MAX_ABS_MAGNITUDE_DB, MAX_ABS_PHASE_DEG, MIN_MEASUREMENT_POINTS } from '@/lib/measurements/parse-measurement';
+
+/**
+ * Measurements (issue 6): the text fields of an upload, the list query, and the body of
+ * POST /api/v1/measured/predict. The file itself is checked by lib/measurements/parse-measurement.
+ */
+
+const uuid = (what: string) => z.string().uuid(`${what} must be an id`);
+
+/** `mains`, `sub`, `sum` or another channel label (L, C, SL…). */
+export const measurementRoleSchema = z
+  .string()
+  .trim()
+  .regex(/^[A-Za-z0-9 _+-]{1,20}$/, 'role must be 1–20 letters, digits, spaces, +, - or _ (e.g. mains, sub, L)');
+
+export const measurementUploadFieldsSchema = z.strictObject({
+  name: z.string().trim().min(1, 'name must not be empty').max(120, 'name must be at most 120 characters').optional(),
+  systemId: uuid('systemId').optional(),
+  workspaceId: uuid('workspaceId').optional(),
+  seat: z.string().trim().min(1, 'seat must not be empty').max(60, 'seat must be at most 60 characters').optional(),
+  role: measurementRoleSchema.optional(),
+});
+export type MeasurementUploadFields = z.infer<typeof measurementUploadFieldsSchema>;
+
+export const measurementListQuerySchema = z.object({
+  workspaceId: uuid('workspaceId').optional(),
+  systemId: uuid('systemId').optional(),
+});
+export type MeasurementListQuery = z.infer<typeof measurementListQuerySchema>;
+
+/** Most points of an inline curve sent to the predict route. */
+export const MAX_INLINE_POINTS = 20_000;
+
+/** A curve sent inline; the same limits as an uploaded file. */
+export const inlineCurveSchema = z
+  .strictObject({
+    frequencyHz: z.array(num(1e-6, 1e6, 'Hz')).min(MIN_MEASUREMENT_POINTS, `must hold at least ${MIN_MEASUREMENT_POINTS} points`).max(MAX_INLINE_POINTS, `must hold at most ${MAX_INLINE_POINTS} points`),
+    magnitudeDb: z.array(num(-MAX_ABS_MAGNITUDE_DB, MAX_ABS_MAGNITUDE_DB, 'dB')),
+    phaseDeg: z.array(num(-MAX_ABS_PHASE_DEG, MAX_ABS_PHASE_DEG, '°')).nullable().optional(),
+  })
+  .superRefine((c, ctx) => {
+    if (c.magnitudeDb.length !== c.frequencyHz.length) ctx.addIssue({ code: 'custom', path: ['magnitudeDb'], message: `must hold as many values as frequencyHz (${c.frequencyHz.length})` });
+    if (c.phaseDeg && c.phaseDeg.length !== c.frequencyHz.length) ctx.addIssue({ code: 'custom', path: ['phaseDeg'], message: `must hold as many values as frequencyHz (${c.frequencyHz.length})` });
+    for (let i = 1; i < c.frequencyHz.length; i++) {
+      if ((c.frequencyHz[i] as number) <= (c.frequencyHz[i - 1] as number)) {
+        ctx.addIssue({ code: 'custom', path: ['frequencyHz', i], message: 'frequencies must strictly increase' });
+        break;
+      }
+    }
+  });
+
+/** A measured curve: a stored measurement the caller may read, or the points themselves. */
+export const measuredCurveSchema = z.union([z.strictObject({ measurementId: uuid('measurementId') }), inlineCurveSchema], {
+  error: 'must be { measurementId } or { frequencyHz, magnitudeDb, phaseDeg? }',
+});
+
+const settingsSchema = {
+  gainDb: num(-60, 60, 'dB'),
+  delayMs: num(0, 1000, 'ms'),
+  invert: z.boolean({ error: 'must be true or false' }),
+};
+
+export const predictRequestSchema = z.strictObject({
+  temperatureC: temperatureCSchema,
+  crossoverHz: num(20, 300, 'Hz'),
+  mainsHighpass: z.strictObject({ family: filterFamilySchema, order: num(1, 8).int('must be a whole number') }),
+  subLowpass: z.strictObject({ family: filterFamilySchema, order: num(1, 8).int('must be a whole number') }),
+  mains: z.strictObject({ name: z.string().trim().min(1).max(60).default('mains'), curve: measuredCurveSchema, ...settingsSchema }),
+  sub: z.strictObject({ name: z.string().trim().min(1).max(60).default('sub'), curve: measuredCurveSchema, ...settingsSchema }),
+  /** Display smoothing of every returned curve: 0 (none) or N of 1/N octave. */
+  smoothingFraction: num(0, 48).int('must be a whole number').default(0),
+  /** Points per octave of the shared grid the curves are resampled to. */
+  pointsPerOctave: num(6, 96).int('must be a whole number').default(48),
+  maxDelayMs: num(1, 50, 'ms').default(20),
+}).superRefine((r, ctx) => {
+  for (const [key, slope] of [['mainsHighpass', r.mainsHighpass], ['subLowpass', r.subLowpass]] as const) {
+    if (slope.family === 'linkwitz-riley' && ![2, 4, 8].includes(slope.order)) ctx.addIssue({ code: 'custom', path: [key, 'order'], message: 'Linkwitz–Riley order must be 2, 4 or 8' });
+  }
+});
+export type PredictRequest = z.infer<typeof predictRequestSchema>;
+export type PredictRequestInput = z.input<typeof predictRequestSchema>;
+export type MeasuredCurveInput = z.infer<typeof measuredCurveSchema>;
