@@ -6,6 +6,9 @@
  */
 import { arrivalTimeMs, blendMetrics, blendResponse, crossoverSweep, logFrequencyGridHz, speedOfSoundMps, type FilterShape, type PathSpec } from '@/dsp';
 import { DEFAULT_SWEEP_CANDIDATES_HZ, type BlendRequest, type CrossoverSweepRequest } from '@/lib/validations/compute-blend';
+import { compareSweepRows } from './blend-sweep';
+
+export { compareSweepRows };
 
 /** Rounds to `decimals` places (keeps −300 dB silence and integers exact; bodies stay small). */
 export function roundTo(value: number, decimals: number): number {
@@ -183,9 +186,4 @@ export function computeCrossoverSweep(req: CrossoverSweepRequest): CrossoverSwee
     candidatesHz,
     rows: rows.map((r, i) => ({ rank: i + 1, ...r })),
   };
-}
-
-/** The sweep's ranking: flattest first, then the shallower dip, then the lower crossover. */
-export function compareSweepRows(a: Pick<CrossoverSweepAnswerRow, 'flatnessDb' | 'deepestDipDb' | 'crossoverHz'>, b: Pick<CrossoverSweepAnswerRow, 'flatnessDb' | 'deepestDipDb' | 'crossoverHz'>): number {
-  return a.flatnessDb - b.flatnessDb || b.deepestDipDb - a.deepestDipDb || a.crossoverHz - b.crossoverHz;
 }

@@ -1,0 +1,248 @@
+'use client';
+
+import { useId, useMemo, useState } from 'react';
+import { formatHzReadout, formatNumber, formatSigned } from '@/components/charts';
+import { useSystem } from '@/components/editor/system-context';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { NumberField } from '@/components/ui/number-field';
+import { DEMO_PROFILES } from '@/lib/demo/profiles';
+import { useCrossoverSweep } from '@/lib/hooks/use-crossover-sweep';
+import { blendMainSpeaker, profileById } from '@/lib/system-model';
+import type { CrossoverSweepAnswerRow } from '@/lib/system-model/blend-compute';
+import { applySweepRow, candidateRangeHz, sweepRequestFromDocument } from '@/lib/system-model/blend-sweep';
+import type { Slope, SpeakerProfile } from '@/lib/validations/system';
+import { slopeShortName } from './slope-select';
+
+type Pairing = { mainsFilter: Slope; subFilter: Slope };
+
+const LR = (order: number): Slope => ({ family: 'linkwitz-riley', order });
+const BW = (order: number): Slope => ({ family: 'butterworth', order });
+/** Slope pairings a sweep can try besides the System's own. */
+const PAIRINGS: Pairing[] = [
+  { mainsFilter: LR(4), subFilter: LR(4) },
+  { mainsFilter: BW(2), subFilter: LR(4) },
+  { mainsFilter: LR(2), subFilter: LR(2) },
+  { mainsFilter: BW(2), subFilter: BW(2) },
+  { mainsFilter: BW(3), subFilter: BW(3) },
+  { mainsFilter: BW(4), subFilter: BW(4) },
+  { mainsFilter: LR(8), subFilter: LR(8) },
+];
+const pairingKey = (p: Pairing) => `${slopeShortName(p.mainsFilter)}/${slopeShortName(p.subFilter)}`;
+const MAX_PAIRINGS = 6;
+
+type SortKey = 'rank' | 'crossoverHz' | 'flatnessDb' | 'deepestDipDb' | 'relativeDelayMs' | 'mainsLowBassDb';
+const COLUMNS: { key: SortKey | null; label: string; title?: string }[] = [
+  { key: 'rank', label: 'Rank' },
+  { key: 'crossoverHz', label: 'Crossover' },
+  { key: null, label: 'Slopes', title: 'mains high-pass / sub low-pass' },
+  { key: 'flatnessDb', label: 'Flatness', title: 'largest deviation of the sum within ±1 octave of the crossover, at the best delay and polarity' },
+  { key: 'deepestDipDb', label: 'Deepest dip' },
+  { key: 'relativeDelayMs', label: 'Delay to set', title: 'processor delay for these distances (only positive delays)' },
+  { key: null, label: 'Sub polarity' },
+  { key: 'mainsLowBassDb', label: 'Mains at fc/2', title: 'how much low bass the mains still carry: their level one octave below the crossover against two octaves above' },
+  { key: null, label: '' },
+];
+
+function profileOptions(docProfiles: SpeakerProfile[], kind: 'main' | 'sub'): SpeakerProfile[] {
+  const seen = new Set<string>();
+  return [...docProfiles, ...DEMO_PROFILES].filter((p) => p.kind === kind && !seen.has(p.id) && (seen.add(p.id), true));
+}
+
+/** Crossover sweep: candidate points for one pairing (a main and a sub profile), ranked; a row applies its settings to the System. */
+export function CrossoverSweep({ channel }: { channel?: string }) {
+  const { doc, update, readOnly } = useSystem();
+  const id = useId();
+  const speaker = blendMainSpeaker(doc, channel);
+  const mains = profileOptions(doc.profiles, 'main');
+  const subs = profileOptions(doc.profiles, 'sub');
+  const [mainsId, setMainsId] = useState(() => speaker?.profileId ?? mains[0]?.id ?? '');
+  const [subId, setSubId] = useState(() => doc.subs[0]?.profileId ?? subs[0]?.id ?? '');
+  const [fromHz, setFromHz] = useState(40);
+  const [toHz, setToHz] = useState(150);
+  const [stepHz, setStepHz] = useState(5);
+  const current: Pairing = { mainsFilter: doc.bassManagement.mainsHighpass, subFilter: doc.bassManagement.subLowpass };
+  const choices = useMemo(() => [current, ...PAIRINGS.filter((p) => pairingKey(p) !== pairingKey(current))], [current.mainsFilter.family, current.mainsFilter.order, current.subFilter.family, current.subFilter.order]); // eslint-disable-line react-hooks/exhaustive-deps -- keyed on the slopes
+  const [picked, setPicked] = useState<ReadonlySet<string>>(() => new Set([pairingKey(current), 'LR4/LR4']));
+  const [sort, setSort] = useState<{ key: SortKey; descending: boolean }>({ key: 'rank', descending: false });
+  const [applied, setApplied] = useState<string | null>(null);
+  const [showAll, setShowAll] = useState(false);
+  const sweep = useCrossoverSweep();
+
+  const candidatesHz = candidateRangeHz(fromHz, toHz, stepHz);
+  const pairings = choices.filter((p) => picked.has(pairingKey(p)));
+  const rowsNeeded = candidatesHz.length * pairings.length;
+  const rangeProblem = toHz < fromHz ? 'The last candidate must not be below the first.' : candidatesHz.length > 60 ? 'At most 60 candidate points; widen the step.' : rowsNeeded > 120 ? 'Candidates × slope pairings must stay at or below 120 rows; pick fewer pairings or a wider step.' : pairings.length === 0 ? 'Pick at least one slope pairing.' : null;
+  const mainsProfile = mains.find((p) => p.id === mainsId);
+  const subProfile = subs.find((p) => p.id === subId);
+
+  const run = () => {
+    setApplied(null);
+    void sweep.run(sweepRequestFromDocument(doc, { channel: speaker?.channel, mainsProfile, subProfile, pairings, candidatesHz }));
+  };
+
+  const rows = useMemo(() => {
+    const sorted = [...sweep.rows];
+    const { key, descending } = sort;
+    sorted.sort((a, b) => (key === 'relativeDelayMs' ? Math.abs(a[key]) - Math.abs(b[key]) : a[key] - b[key]) * (descending ? -1 : 1));
+    return sorted;
+  }, [sweep.rows, sort]);
+
+  const apply = (row: CrossoverSweepAnswerRow) => {
+    update((d) => {
+      let next = applySweepRow(d, row, speaker?.channel);
+      // Sweeping another profile than the System's means using it: copy it in and point the speakers/subs at it.
+      const addProfile = (p: SpeakerProfile | undefined) => {
+        if (p && !profileById(next, p.id)) next = { ...next, profiles: [...next.profiles, structuredClone(p)] };
+      };
+      addProfile(mainsProfile);
+      addProfile(subProfile);
+      if (mainsProfile && speaker && speaker.profileId !== mainsProfile.id) next = { ...next, speakers: next.speakers.map((s) => (s.profileId === speaker.profileId ? { ...s, profileId: mainsProfile.id } : s)) };
+      if (subProfile) next = { ...next, subs: next.subs.map((s) => ({ ...s, profileId: subProfile.id })) };
+      return next;
+    });
+    setApplied(`${formatHzReadout(row.crossoverHz)}, ${pairingKey(row)}, ${row.subDelayMs > 0 ? `sub delay ${formatNumber(row.subDelayMs, 2)} ms` : `mains delay ${formatNumber(row.mainsDelayMs, 2)} ms`}, sub ${row.invertSub ? 'inverted' : 'normal'}`);
+  };
+
+  const headerSort = (key: SortKey) => setSort((s) => ({ key, descending: s.key === key ? !s.descending : false }));
+
+  return (
+    <section aria-labelledby={`${id}-title`} className="flex flex-col gap-4 rounded-lg border border-line bg-white p-4">
+      <div>
+        <h3 id={`${id}-title`} className="text-base font-semibold">
+          Crossover sweep
+        </h3>
+        <p className="text-sm text-ink-soft">Try candidate crossover points for one pairing of a main and a sub profile; each row is at its best sub delay and polarity for the distances of {speaker?.channel ?? 'the mains'} and {doc.subs[0]?.name ?? 'the sub'}.</p>
+      </div>
+      <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-[1fr_1fr_auto_auto_auto]">
+        <div className="flex flex-col gap-1">
+          <label htmlFor={`${id}-mains`} className="text-xs font-medium text-ink-soft">
+            Main speaker profile
+          </label>
+          <select id={`${id}-mains`} value={mainsId} onChange={(e) => setMainsId(e.target.value)} className="rounded-md border border-line bg-white px-2 py-1.5 text-sm" data-testid="sweep-mains-profile">
+            {mains.map((p) => (
+              <option key={p.id} value={p.id}>
+                {p.name}
+              </option>
+            ))}
+          </select>
+        </div>
+        <div className="flex flex-col gap-1">
+          <label htmlFor={`${id}-sub`} className="text-xs font-medium text-ink-soft">
+            Sub profile
+          </label>
+          <select id={`${id}-sub`} value={subId} onChange={(e) => setSubId(e.target.value)} className="rounded-md border border-line bg-white px-2 py-1.5 text-sm" data-testid="sweep-sub-profile">
+            {subs.map((p) => (
+              <option key={p.id} value={p.id}>
+                {p.name}
+              </option>
+            ))}
+          </select>
+        </div>
+        <NumberField label="From" unit="Hz" value={fromHz} min={20} max={300} step={1} onChange={setFromHz} testId="sweep-from-hz" />
+        <NumberField label="To" unit="Hz" value={toHz} min={20} max={300} step={1} onChange={setToHz} testId="sweep-to-hz" />
+        <NumberField label="Step" unit="Hz" value={stepHz} min={1} max={50} step={1} onChange={setStepHz} testId="sweep-step-hz" />
+      </div>
+      <fieldset className="flex flex-col gap-2">
+        <legend className="text-xs font-medium text-ink-soft">Slope pairings to try (mains high-pass / sub low-pass, up to {MAX_PAIRINGS})</legend>
+        <div className="flex flex-wrap gap-2">
+          {choices.map((p, i) => {
+            const key = pairingKey(p);
+            const on = picked.has(key);
+            return (
+              <label key={key} className={`flex items-center gap-2 rounded-md border px-2.5 py-1 text-sm ${on ? 'border-mains bg-[#EEF7F6]' : 'border-line bg-white'}`}>
+                <input
+                  type="checkbox"
+                  checked={on}
+                  disabled={!on && picked.size >= MAX_PAIRINGS}
+                  onChange={() =>
+                    setPicked((s) => {
+                      const next = new Set(s);
+                      if (next.has(key)) next.delete(key);
+                      else next.add(key);
+                      return next;
+                    })
+                  }
+                  className="h-4 w-4 accent-[#0F766E]"
+                />
+                <span className="num">{key}</span>
+                {i === 0 ? <span className="text-xs text-ink-faint">(this System)</span> : null}
+              </label>
+            );
+          })}
+        </div>
+      </fieldset>
+      <div className="flex flex-wrap items-center gap-3">
+        <Button onClick={run} disabled={Boolean(rangeProblem) || sweep.running} data-testid="sweep-run">
+          {sweep.running ? 'Sweeping…' : `Run the sweep (${rowsNeeded} rows)`}
+        </Button>
+        {sweep.total > 0 ? (
+          <div className="flex items-center gap-2 text-sm text-ink-soft">
+            <progress max={sweep.total} value={sweep.done} aria-label="Crossover sweep progress" className="h-2 w-40 accent-[#0F766E]" />
+            <span className="num" aria-live="polite">
+              {sweep.done} of {sweep.total} batches
+            </span>
+          </div>
+        ) : null}
+        {rangeProblem ? <p className="text-sm text-fail">{rangeProblem}</p> : null}
+      </div>
+      {sweep.error ? (
+        <Notice kind="error" title="The sweep stopped">
+          {sweep.error.issues[0] ? `${sweep.error.issues[0].path}: ${sweep.error.issues[0].message}` : sweep.error.message}
+        </Notice>
+      ) : null}
+      {applied ? <Notice kind="ok">Applied to the System: {applied}.</Notice> : null}
+      {rows.length ? (
+        <div className="overflow-x-auto">
+          <table className="w-full min-w-[52rem] border-collapse text-sm" data-testid="sweep-table">
+            <caption className="sr-only">Crossover sweep results, {sort.key === 'rank' ? 'best first' : `sorted by ${sort.key}`}</caption>
+            <thead>
+              <tr className="border-b border-line text-left text-xs text-ink-soft">
+                {COLUMNS.map((c, i) => (
+                  <th key={i} scope="col" title={c.title} aria-sort={c.key && sort.key === c.key ? (sort.descending ? 'descending' : 'ascending') : undefined} className="px-2 py-1.5 font-medium">
+                    {c.key ? (
+                      <button type="button" onClick={() => headerSort(c.key as SortKey)} className="inline-flex items-center gap-1 hover:text-ink">
+                        {c.label}
+                        <span aria-hidden="true">{sort.key === c.key ? (sort.descending ? '▼' : '▲') : '↕'}</span>
+                      </button>
+                    ) : (
+                      c.label
+                    )}
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody className="num whitespace-nowrap">
+              {(showAll ? rows : rows.slice(0, 10)).map((r) => (
+                <tr key={`${pairingKey(r)}-${r.crossoverHz}`} className={`border-b border-line ${r.rank === 1 ? 'bg-[#EEF7F6]' : ''}`} data-testid={`sweep-row-${r.rank}`}>
+                  <td className="px-2 py-1.5">{r.rank}</td>
+                  <td className="px-2 py-1.5">{formatHzReadout(r.crossoverHz)}</td>
+                  <td className="px-2 py-1.5">{pairingKey(r)}</td>
+                  <td className="px-2 py-1.5">±{formatNumber(r.flatnessDb, 2)} dB</td>
+                  <td className="px-2 py-1.5">
+                    {formatSigned(r.deepestDipDb, 'dB', 1)} <span className="text-ink-faint">at {formatHzReadout(r.dipHz)}</span>
+                  </td>
+                  <td className="px-2 py-1.5">{r.subDelayMs > 0 ? `sub +${formatNumber(r.subDelayMs, 2)} ms` : r.mainsDelayMs > 0 ? `mains +${formatNumber(r.mainsDelayMs, 2)} ms` : 'none'}</td>
+                  <td className="px-2 py-1.5">{r.invertSub ? 'inverted' : 'normal'}</td>
+                  <td className="px-2 py-1.5">{formatSigned(r.mainsLowBassDb, 'dB', 1)}</td>
+                  <td className="px-2 py-1">
+                    <Button variant="secondary" className="px-2.5 py-1" disabled={readOnly} onClick={() => apply(r)} aria-label={`Apply ${formatHzReadout(r.crossoverHz)} ${pairingKey(r)} to the System`} data-testid={`sweep-apply-${r.rank}`}>
+                      Apply
+                    </Button>
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+          {rows.length > 10 ? (
+            <Button variant="ghost" className="mt-2" aria-expanded={showAll} onClick={() => setShowAll((v) => !v)}>
+              {showAll ? 'Show the top 10 only' : `Show all ${rows.length} rows`}
+            </Button>
+          ) : null}
+        </div>
+      ) : !sweep.running ? (
+        <p className="text-sm text-ink-faint">Default candidates: 40–150 Hz in 5 Hz steps. Lower flatness is better; a more negative &quot;Mains at fc/2&quot; means the mains carry less of the deep bass.</p>
+      ) : null}
+    </section>
+  );
+}
