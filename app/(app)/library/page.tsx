@@ -1,50 +1,68 @@
 import Link from 'next/link';
 import { pageCaller } from '@/components/shell/require-caller';
-import { listSystems } from '@/lib/data/systems';
+import { LibraryTabs } from '@/components/library/library-tabs';
+import { ProfilesSection } from '@/components/library/profiles-section';
+import { SystemsTable } from '@/components/library/systems-table';
+import { buttonClass } from '@/components/ui/button';
+import { listSystems, listTags } from '@/lib/data/systems';
+import { listWorkspaces } from '@/lib/data/workspaces';
+import { systemListQuerySchema } from '@/lib/validations/library';
 
 export const dynamic = 'force-dynamic';
 export const metadata = { title: 'Library' };
 
-export default async function LibraryPage() {
+type Search = Record<string, string | string[] | undefined>;
+
+export default async function LibraryPage({ searchParams }: { searchParams: Promise<Search> }) {
   const caller = await pageCaller('/library');
-  const { items, total } = await listSystems(caller, { sort: '-updated', page: 1, pageSize: 50, deleted: '0' });
+  const raw = await searchParams;
+  const one = (k: string) => (typeof raw[k] === 'string' ? (raw[k] as string) : undefined);
+  const view = one('view') === 'deleted' ? 'deleted' : one('view') === 'profiles' ? 'profiles' : 'systems';
+  const workspaces = await listWorkspaces(caller);
+  const writable = workspaces.filter((w) => w.role !== 'viewer').map((w) => ({ id: w.id, name: w.name }));
+
+  if (view === 'profiles') {
+    return (
+      <div className="flex flex-col gap-4">
+        <LibraryHeader />
+        <LibraryTabs view={view} />
+        <ProfilesSection workspaces={workspaces.map((w) => ({ id: w.id, name: w.name, role: w.role }))} />
+      </div>
+    );
+  }
+
+  // A bad parameter in the address falls back to the default rather than failing the page.
+  const parsed = systemListQuerySchema.safeParse({ q: one('q') || undefined, tag: one('tag') || undefined, sort: one('sort') || undefined, page: one('page') || undefined, pageSize: 20, deleted: view === 'deleted' ? '1' : '0' });
+  const query = parsed.success ? parsed.data : systemListQuerySchema.parse({ deleted: view === 'deleted' ? '1' : '0' });
+  const [{ items, total, page, pageSize }, tags] = await Promise.all([listSystems(caller, query), listTags(caller)]);
+  const roles = Object.fromEntries(workspaces.map((w) => [w.id, w.role]));
+
   return (
-    <div>
-      <div className="flex flex-wrap items-center gap-3">
-        <h1 className="text-2xl font-semibold">Library</h1>
-        <span className="text-sm text-ink-faint">{total} System{total === 1 ? '' : 's'}</span>
-        <Link href="/systems/new" className="ml-auto rounded-md bg-mains px-3 py-2 text-sm font-medium text-white">
-          New System
-        </Link>
-      </div>
-      <div className="mt-4 overflow-x-auto rounded-lg border border-line bg-white">
-        <table className="w-full text-left text-sm">
-          <thead className="border-b border-line bg-[#FAF9F5] text-xs uppercase tracking-wide text-ink-faint">
-            <tr>
-              <th className="px-3 py-2">Name</th>
-              <th className="px-3 py-2">Workspace</th>
-              <th className="px-3 py-2">Tags</th>
-              <th className="px-3 py-2">Last change</th>
-            </tr>
-          </thead>
-          <tbody>
-            {items.map((s) => (
-              <tr key={s.id} className="border-b border-line last:border-0">
-                <td className="px-3 py-2">
-                  <Link href={`/systems/${s.id}`} className="font-medium text-mains underline">
-                    {s.name}
-                  </Link>
-                </td>
-                <td className="px-3 py-2">{s.workspaceName}</td>
-                <td className="px-3 py-2">{s.tags.join(', ')}</td>
-                <td className="num px-3 py-2">
-                  {s.updatedAt.slice(0, 16).replace('T', ' ')} · {s.lastEditorName}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+    <div className="flex flex-col gap-4">
+      <LibraryHeader />
+      <LibraryTabs view={view} />
+      <SystemsTable
+        view={view}
+        items={items.map((s) => ({ ...s, canEdit: roles[s.workspaceId] === 'owner' || roles[s.workspaceId] === 'editor' }))}
+        total={total}
+        page={page}
+        pageSize={pageSize}
+        query={{ q: query.q ?? '', tag: query.tag ?? '', sort: query.sort }}
+        tags={tags}
+        canCreate={writable.length > 0}
+      />
+    </div>
+  );
+}
+
+function LibraryHeader() {
+  return (
+    <div className="flex flex-wrap items-center gap-3">
+      <h1 className="text-2xl font-semibold">Library</h1>
+      <p className="text-sm text-ink-faint">Your workspaces&rsquo; Systems, their history, and Speaker profiles.</p>
+      <Link href="/systems/new" className={buttonClass('primary', 'ml-auto')}>
+        New System
+      </Link>
     </div>
   );
 }
