@@ -6,9 +6,9 @@ export { arrivalTimeMs, type ArrivalTimeOptions } from './air/arrival-time';
 export { logFrequencyGridHz, MAX_GRID_POINTS, type LogFrequencyGridOptions } from './grid/log-frequency-grid';
 export { fractionalOctaveBands, OCTAVE_RATIO_BASE_TEN, type FractionalOctaveBands, type FractionalOctaveBandsOptions } from './grid/fractional-octave-bands';
 
-export type { FilterFamily, FilterResponseKind, FilterSpec, FilterShape, RolloffSpec, SectionKind, AnalogSection, ComplexResponse } from './filters/filter-types';
+export type { FilterFamily, FilterResponseKind, FilterSpec, FilterShape, RolloffSpec, RolloffChain, SectionKind, AnalogSection, ComplexResponse } from './filters/filter-types';
 export { butterworthQ } from './filters/butterworth-q';
-export { filterSections, rolloffSections, LINKWITZ_RILEY_ORDERS, MAX_SECTION_Q } from './filters/analog-sections';
+export { filterSections, rolloffSections, LINKWITZ_RILEY_ORDERS, MAX_SECTION_Q, MAX_ROLLOFFS } from './filters/analog-sections';
 export {
   filterResponse,
   rolloffResponse,
@@ -21,6 +21,8 @@ export {
 
 export { MAX_PATHS, SILENCE_DB, type PathSpec, type ResponseCurves, type PathCurves, type BlendResult, type BlendOptions } from './blend/blend-types';
 export { blendResponse } from './blend/blend-response';
+export { blendSumResponse, type BlendSumOptions, type BlendSumResult } from './blend/blend-sum';
+export { blendGrid, isBlendGrid, type BlendGrid } from './blend/blend-kernel';
 export { blendMetrics, type BlendMetrics, type BlendMetricsOptions } from './blend/blend-metrics';
 export { crossoverSweep, type CrossoverSweepOptions, type CrossoverSweepRow, type CrossoverSweepResult } from './blend/crossover-sweep';
 

@@ -1,10 +1,12 @@
-import type { FilterSpec, RolloffSpec } from '../filters/filter-types';
+import type { FilterSpec, RolloffChain } from '../filters/filter-types';
+import type { BlendGrid } from './blend-kernel';
 
-/** One signal path: crossover filter × natural roll-off × gain × polarity × delay (delayMs + distanceM / c). */
+/** One signal path: crossover filter × natural roll-off(s) × gain × polarity × delay (delayMs + distanceM / c). */
 export interface PathSpec {
   readonly name: string;
   readonly filter: FilterSpec;
-  readonly rolloff?: RolloffSpec;
+  /** The speaker's natural roll-off, or several applied together (a sub: [low roll-off, upper roll-off]). */
+  readonly rolloff?: RolloffChain;
   readonly gainDb: number;
   /** Processor delay, ms, ≥ 0. */
   readonly delayMs: number;
@@ -38,7 +40,8 @@ export interface BlendResult {
 /** Options of blendResponse. */
 export interface BlendOptions {
   readonly temperatureC: number;
-  readonly frequencyHz: Float64Array | readonly number[];
+  /** Hz, each > 0; or a grid prepared once by blendGrid. */
+  readonly frequencyHz: Float64Array | readonly number[] | BlendGrid;
   readonly paths: readonly PathSpec[];
 }
 

@@ -4,6 +4,8 @@ import type { AnalogSection } from '../filters/filter-types';
 // kindCode: 0 low-pass 1st order, 1 high-pass 1st, 2 low-pass 2nd, 3 high-pass 2nd.
 export interface SectionPlan {
   readonly packed: Float64Array;
+  /** The same sections for the blend kernel, stride 3 = [kindCode, 1/ω0 (s/rad), 1/Q]. */
+  readonly kernel: Float64Array;
   readonly count: number;
   /** Linear gain including polarity sign. */
   readonly gain: number;
@@ -15,16 +17,20 @@ const CODES: Record<AnalogSection['kind'], number> = { lowpass1: 0, highpass1: 1
 
 export function compileSections(sections: readonly AnalogSection[], gain: number): SectionPlan {
   const packed = new Float64Array(sections.length * 3);
+  const kernel = new Float64Array(sections.length * 3);
   let numeratorPower = 0;
   sections.forEach((s, i) => {
     const code = CODES[s.kind];
     packed[3 * i] = code;
     packed[3 * i + 1] = 2 * Math.PI * s.cornerHz;
     packed[3 * i + 2] = 1 / s.q;
+    kernel[3 * i] = code;
+    kernel[3 * i + 1] = 1 / (2 * Math.PI * s.cornerHz);
+    kernel[3 * i + 2] = 1 / s.q;
     if (code === 1) numeratorPower += 1;
     else if (code === 3) numeratorPower += 2;
   });
-  return { packed, count: sections.length, gain, numeratorPower };
+  return { packed, kernel, count: sections.length, gain, numeratorPower };
 }
 
 /**

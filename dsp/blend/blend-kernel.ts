@@ -1,0 +1,290 @@
+import { LN_POWER_TO_DB, RAD_TO_DEG } from '../internal/angles';
+import * as fastMath from '../internal/fast-math';
+import { positiveFrequencies } from '../internal/guards';
+import type { ResponseCurves } from './blend-types';
+import { SILENCE_DB } from './blend-types';
+import type { CompiledPath } from './path-plan';
+
+// The hot loops of a blend, written out by hand: the analog sections of every path are evaluated with inlined
+// complex arithmetic (product rule for H′), the relative delay is one polynomial sin/cos pair per point, and the
+// sum's magnitude, phase and group delay come from S and S′ with one log and one atan2 per point. Nothing is
+// allocated per point; with a BlendGrid nothing is allocated per call beyond the result object.
+
+// Local binding: some loaders turn imports into getter calls, which hot loops should not pay for.
+const { fastAtan2 } = fastMath;
+
+const SILENT_POWER = Math.pow(10, SILENCE_DB / 10);
+const TWO_PI = 2 * Math.PI;
+const INV_TWO_PI = 1 / TWO_PI;
+const INV_360 = 1 / 360;
+const PIO2_HI = 1.5707963267341256;
+const PIO2_LO = 6.077100506506192e-11;
+const TWO_OVER_PI = 2 / Math.PI;
+
+/**
+ * A validated frequency grid prepared for repeated blends: ω = 2πf computed once and scratch buffers reused by
+ * every call (calls are synchronous, so one grid may serve any number of calls in turn). Do not mutate its arrays.
+ */
+export interface BlendGrid {
+  readonly kind: 'blend-grid';
+  /** A private copy of the validated grid, Hz. */
+  readonly frequencyHz: Float64Array;
+  /** 2π·frequencyHz, rad/s. */
+  readonly omega: Float64Array;
+  /** Internal scratch (S, S′ and one path's H and H′/H per point). */
+  readonly scratch: Float64Array;
+}
+
+/**
+ * Validates a grid once and precomputes ω for {@link blendSumResponse} / blendResponse.
+ * @example const g = blendGrid(logFrequencyGridHz({ startHz: 10, stopHz: 20000, pointsPerOctave: 48 })); // g.omega.length 527
+ */
+export function blendGrid(frequencyHz: Float64Array | readonly number[]): BlendGrid {
+  const f = Float64Array.from(positiveFrequencies('frequencyHz', frequencyHz));
+  const omega = new Float64Array(f.length);
+  for (let i = 0; i < f.length; i++) omega[i] = TWO_PI * (f[i] as number);
+  return { kind: 'blend-grid', frequencyHz: f, omega, scratch: new Float64Array(8 * f.length) };
+}
+
+/** True when `value` is a grid made by {@link blendGrid}. */
+export function isBlendGrid(value: unknown): value is BlendGrid {
+  return typeof value === 'object' && value !== null && (value as { kind?: unknown }).kind === 'blend-grid' && (value as BlendGrid).omega instanceof Float64Array;
+}
+
+/** The grid of a call: a prepared BlendGrid as is, else a fresh one (validated). */
+export function toBlendGrid(frequencyHz: Float64Array | readonly number[] | BlendGrid): BlendGrid {
+  return isBlendGrid(frequencyHz) ? frequencyHz : blendGrid(frequencyHz);
+}
+
+/**
+ * Adds one path to the running sum, relative to the earliest path (G = H·e^(−jωΔ), G′ = G·(H′/H − jΔ)), and, when
+ * `keep` is set, stores the path's own H and Im(H′/H) into scratch rows 4..6. Scratch rows: 0 Re S, 1 Im S,
+ * 2 Re S′, 3 Im S′, 4 Re H, 5 Im H, 6 Im H′/H. `first` overwrites the sum instead of adding to it.
+ */
+export function accumulatePath(path: CompiledPath, delta: number, grid: BlendGrid, first: boolean, keep: boolean): void {
+  const omega = grid.omega;
+  const n = omega.length;
+  const s = grid.scratch;
+  const plan = path.plan;
+  const k = plan.kernel;
+  const kn = plan.count * 3;
+  const gain = plan.gain;
+  const m = plan.numeratorPower & 3;
+  const numeratorPower = plan.numeratorPower;
+  const rotate = delta !== 0;
+  for (let i = 0; i < n; i++) {
+    const w = omega[i] as number;
+    let pr = 1;
+    let pi = 0;
+    let dpr = 0;
+    let dpi = 0;
+    let numMag = gain;
+    for (let j = 0; j < kn; j += 3) {
+      const code = k[j] as number;
+      const iw = k[j + 1] as number;
+      const u = w * iw;
+      let dr: number;
+      let di: number;
+      let ddr: number;
+      let ddi: number;
+      if (code < 2) {
+        dr = 1;
+        di = u;
+        ddr = 0;
+        ddi = iw;
+        if (code === 1) numMag *= u;
+      } else {
+        const invQ = k[j + 2] as number;
+        dr = 1 - u * u;
+        di = u * invQ;
+        ddr = -2 * u * iw;
+        ddi = invQ * iw;
+        if (code === 3) numMag *= u * u;
+      }
+      const npr = dpr * dr - dpi * di + pr * ddr - pi * ddi;
+      const npi = dpr * di + dpi * dr + pr * ddi + pi * ddr;
+      const qr = pr * dr - pi * di;
+      pi = pr * di + pi * dr;
+      pr = qr;
+      dpr = npr;
+      dpi = npi;
+    }
+    const inv = 1 / (pr * pr + pi * pi);
+    let hr = pr * inv * numMag;
+    let hi = -pi * inv * numMag;
+    if (m === 1) {
+      const t = hr;
+      hr = -hi;
+      hi = t;
+    } else if (m === 2) {
+      hr = -hr;
+      hi = -hi;
+    } else if (m === 3) {
+      const t = hr;
+      hr = hi;
+      hi = -t;
+    }
+    const dr = numeratorPower / w - (dpr * pr + dpi * pi) * inv;
+    const di = -(dpi * pr - dpr * pi) * inv;
+    if (keep) {
+      s[4 * n + i] = hr;
+      s[5 * n + i] = hi;
+      s[6 * n + i] = di;
+    }
+    let gr = hr;
+    let gi = hi;
+    let gdi = di;
+    if (rotate) {
+      // sin/cos of ωΔ: Cody–Waite reduction by π/2, Taylor series on |r| ≤ π/4 (as fast-math's sinCos).
+      const x = w * delta;
+      let sn: number;
+      let cs: number;
+      if (Math.abs(x) < 1e6) {
+        const q = Math.round(x * TWO_OVER_PI);
+        const r = x - q * PIO2_HI - q * PIO2_LO;
+        const r2 = r * r;
+        const ps =
+          r *
+          (1 +
+            r2 *
+              (-1 / 6 +
+                r2 * (1 / 120 + r2 * (-1 / 5040 + r2 * (1 / 362880 + r2 * (-1 / 39916800 + r2 * (1 / 6227020800 + r2 * (-1 / 1307674368000))))))));
+        const pc =
+          1 +
+          r2 *
+            (-0.5 +
+              r2 *
+                (1 / 24 +
+                  r2 * (-1 / 720 + r2 * (1 / 40320 + r2 * (-1 / 3628800 + r2 * (1 / 479001600 + r2 * (-1 / 87178291200 + r2 / 20922789888000)))))));
+        const quadrant = q & 3;
+        if (quadrant === 0) {
+          sn = ps;
+          cs = pc;
+        } else if (quadrant === 1) {
+          sn = pc;
+          cs = -ps;
+        } else if (quadrant === 2) {
+          sn = -ps;
+          cs = -pc;
+        } else {
+          sn = -pc;
+          cs = ps;
+        }
+      } else {
+        sn = Math.sin(x);
+        cs = Math.cos(x);
+      }
+      gr = hr * cs + hi * sn;
+      gi = hi * cs - hr * sn;
+      gdi = di - delta;
+    }
+    if (first) {
+      s[i] = gr;
+      s[n + i] = gi;
+      s[2 * n + i] = gr * dr - gi * gdi;
+      s[3 * n + i] = gr * gdi + gi * dr;
+    } else {
+      s[i] = (s[i] as number) + gr;
+      s[n + i] = (s[n + i] as number) + gi;
+      s[2 * n + i] = (s[2 * n + i] as number) + gr * dr - gi * gdi;
+      s[3 * n + i] = (s[3 * n + i] as number) + gr * gdi + gi * dr;
+    }
+  }
+}
+
+/** Writes one path's curves from scratch rows 4..6 (its H and Im H′/H) and its total delay tau, seconds. */
+export function finishPath(grid: BlendGrid, tau: number, mag: Float64Array, ph: Float64Array, un: Float64Array, gd: Float64Array): void {
+  const omega = grid.omega;
+  const n = omega.length;
+  const s = grid.scratch;
+  let prevWrapped = 0;
+  let prevUnwrapped = 0;
+  let prevGroup = 0;
+  let prevOmega = 0;
+  for (let i = 0; i < n; i++) {
+    const w = omega[i] as number;
+    const hr = s[4 * n + i] as number;
+    const hi = s[5 * n + i] as number;
+    const p = hr * hr + hi * hi;
+    let phase = 0;
+    if (p > SILENT_POWER) {
+      mag[i] = LN_POWER_TO_DB * Math.log(p);
+      phase = fastAtan2(hi, hr);
+    } else {
+      mag[i] = SILENCE_DB;
+    }
+    const group = -(s[6 * n + i] as number);
+    let unwrapped = phase;
+    if (i > 0) {
+      const predicted = -0.5 * (prevGroup + group) * (w - prevOmega);
+      const step = phase - prevWrapped - predicted;
+      unwrapped = prevUnwrapped + predicted + step - TWO_PI * Math.round(step * INV_TWO_PI);
+    }
+    prevWrapped = phase;
+    prevUnwrapped = unwrapped;
+    prevGroup = group;
+    prevOmega = w;
+    const delayRad = w * tau;
+    const deg = RAD_TO_DEG * (phase - delayRad);
+    let wrapped = deg - 360 * Math.round(deg * INV_360);
+    if (wrapped <= -180) wrapped += 360;
+    ph[i] = wrapped;
+    un[i] = RAD_TO_DEG * (unwrapped - delayRad);
+    gd[i] = 1000 * (group + tau);
+  }
+}
+
+/** Writes the sum's curves from scratch rows 0..3 (S and S′ relative to the earliest path, whose delay is tau0). */
+export function finishSum(grid: BlendGrid, tau0: number, out: ResponseCurves): void {
+  const omega = grid.omega;
+  const n = omega.length;
+  const s = grid.scratch;
+  const mag = out.magnitudeDb;
+  const ph = out.phaseDeg;
+  const un = out.unwrappedPhaseDeg;
+  const gd = out.groupDelayMs;
+  let prevWrapped = 0;
+  let prevUnwrapped = 0;
+  let prevGroup = 0;
+  let prevOmega = 0;
+  for (let i = 0; i < n; i++) {
+    const w = omega[i] as number;
+    const r = s[i] as number;
+    const m = s[n + i] as number;
+    const p = r * r + m * m;
+    let phase = 0;
+    let relGroup = 0;
+    if (p > SILENT_POWER) {
+      mag[i] = LN_POWER_TO_DB * Math.log(p);
+      phase = fastAtan2(m, r);
+      // −Im(S′/S) = −(S′_im·S_re − S′_re·S_im)/|S|²
+      relGroup = -((s[3 * n + i] as number) * r - (s[2 * n + i] as number) * m) / p;
+    } else {
+      mag[i] = SILENCE_DB;
+    }
+    let unwrapped = phase;
+    if (i > 0) {
+      const predicted = -0.5 * (prevGroup + relGroup) * (w - prevOmega);
+      const step = phase - prevWrapped - predicted;
+      unwrapped = prevUnwrapped + predicted + step - TWO_PI * Math.round(step * INV_TWO_PI);
+    }
+    prevWrapped = phase;
+    prevUnwrapped = unwrapped;
+    prevGroup = relGroup;
+    prevOmega = w;
+    const delayRad = w * tau0;
+    const deg = RAD_TO_DEG * (phase - delayRad);
+    let wrapped = deg - 360 * Math.round(deg * INV_360);
+    if (wrapped <= -180) wrapped += 360;
+    ph[i] = wrapped;
+    un[i] = RAD_TO_DEG * (unwrapped - delayRad);
+    gd[i] = p > SILENT_POWER ? 1000 * (relGroup + tau0) : 0;
+  }
+}
+
+/** Fresh curves of length n in one allocation. */
+export function newCurves(n: number): ResponseCurves {
+  const b = new Float64Array(4 * n);
+  return { magnitudeDb: b.subarray(0, n), phaseDeg: b.subarray(n, 2 * n), unwrappedPhaseDeg: b.subarray(2 * n, 3 * n), groupDelayMs: b.subarray(3 * n, 4 * n) };
+}
+
