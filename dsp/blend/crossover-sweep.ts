@@ -1,5 +1,5 @@
 import { speedOfSoundMps } from '../air/speed-of-sound';
-import type { FilterShape, RolloffSpec } from '../filters/filter-types';
+import type { FilterShape, RolloffChain } from '../filters/filter-types';
 import { LN_POWER_TO_DB } from '../internal/angles';
 import { assertFinite, assertPositive } from '../internal/guards';
 import { delaySearchLimits } from '../timing/align-sub-to-mains';
@@ -10,8 +10,10 @@ import { compilePath } from './path-plan';
 /** Options of {@link crossoverSweep}. */
 export interface CrossoverSweepOptions {
   readonly temperatureC: number;
-  readonly mainsRolloff: RolloffSpec;
-  readonly subRolloff: RolloffSpec;
+  /** The mains' natural roll-off(s). */
+  readonly mainsRolloff: RolloffChain;
+  /** The sub's natural roll-off(s), e.g. [low roll-off, upper roll-off]. */
+  readonly subRolloff: RolloffChain;
   readonly mainsFilter: FilterShape;
   readonly subFilter: FilterShape;
   /** Candidate crossover points, Hz (the product's default: 40–150 Hz). */

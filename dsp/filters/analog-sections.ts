@@ -1,6 +1,6 @@
 import { assertIntegerInRange, assertPositive } from '../internal/guards';
 import { butterworthQ } from './butterworth-q';
-import type { AnalogSection, FilterSpec, RolloffSpec } from './filter-types';
+import type { AnalogSection, FilterSpec, RolloffChain, RolloffSpec } from './filter-types';
 
 /** Butterworth orders allowed: 1..8; Linkwitz–Riley: 2, 4, 8. */
 export const LINKWITZ_RILEY_ORDERS: readonly number[] = [2, 4, 8];
@@ -41,26 +41,43 @@ export function filterSections(filter: FilterSpec): AnalogSection[] {
 /** Highest quality factor a roll-off or section may have. */
 export const MAX_SECTION_Q = 50;
 
-/**
- * The analog sections of a speaker's natural roll-off: sealed = second-order high-pass (Small, J. Audio Eng.
- * Soc. 20, 1972), vented = fourth-order Butterworth (B4) high-pass (Thiele, J. Audio Eng. Soc. 19, 1971),
- * lowpass = second-order low-pass (a sub's upper roll-off), none = no sections.
- * @example rolloffSections({ kind: 'sealed', cornerHz: 50, q: 0.707 }).length // 1
- */
-export function rolloffSections(rolloff: RolloffSpec | undefined): AnalogSection[] {
-  if (rolloff === undefined || rolloff.kind === 'none') return [];
+/** Most roll-offs one path may chain (e.g. a sub's natural low roll-off and its upper roll-off). */
+export const MAX_ROLLOFFS = 4;
+
+function singleRolloffSections(rolloff: RolloffSpec | undefined, name: string): AnalogSection[] {
+  if (rolloff === undefined || rolloff === null) return [];
+  if (typeof rolloff !== 'object') throw new RangeError(`${name} must be an object with a kind`);
+  if (rolloff.kind === 'none') return [];
   switch (rolloff.kind) {
     case 'sealed':
     case 'lowpass': {
-      assertPositive('rolloff.cornerHz', rolloff.cornerHz);
-      assertPositive('rolloff.q', rolloff.q);
-      if (rolloff.q > MAX_SECTION_Q) throw new RangeError(`rolloff.q must be at most ${MAX_SECTION_Q} (got ${rolloff.q})`);
+      assertPositive(`${name}.cornerHz`, rolloff.cornerHz);
+      assertPositive(`${name}.q`, rolloff.q);
+      if (rolloff.q > MAX_SECTION_Q) throw new RangeError(`${name}.q must be at most ${MAX_SECTION_Q} (got ${rolloff.q})`);
       return [{ kind: rolloff.kind === 'sealed' ? 'highpass2' : 'lowpass2', cornerHz: rolloff.cornerHz, q: rolloff.q }];
     }
     case 'vented':
-      assertPositive('rolloff.cornerHz', rolloff.cornerHz);
+      assertPositive(`${name}.cornerHz`, rolloff.cornerHz);
       return butterworthSections('highpass', 4, rolloff.cornerHz);
     default:
-      throw new RangeError(`rolloff.kind must be 'none', 'sealed', 'vented' or 'lowpass' (got ${String((rolloff as { kind: unknown }).kind)})`);
+      throw new RangeError(`${name}.kind must be 'none', 'sealed', 'vented' or 'lowpass' (got ${String((rolloff as { kind: unknown }).kind)})`);
   }
+}
+
+/**
+ * The analog sections of a speaker's natural roll-off: sealed = second-order high-pass (Small, J. Audio Eng.
+ * Soc. 20, 1972), vented = fourth-order Butterworth (B4) high-pass (Thiele, J. Audio Eng. Soc. 19, 1971),
+ * lowpass = second-order low-pass (a sub's upper roll-off), none = no sections. A list (at most MAX_ROLLOFFS)
+ * applies every roll-off in it: the product of their sections, e.g. a sub's low roll-off and its upper roll-off.
+ * Errors name `rolloff.…` for one roll-off and `rolloff[i].…` for a list.
+ * @example rolloffSections({ kind: 'sealed', cornerHz: 50, q: 0.707 }).length // 1
+ * @example rolloffSections([{ kind: 'vented', cornerHz: 22 }, { kind: 'lowpass', cornerHz: 160, q: 0.7 }]).length // 3
+ */
+export function rolloffSections(rolloff: RolloffChain | undefined): AnalogSection[] {
+  if (!Array.isArray(rolloff)) return singleRolloffSections(rolloff as RolloffSpec | undefined, 'rolloff');
+  const list = rolloff as readonly RolloffSpec[];
+  if (list.length > MAX_ROLLOFFS) throw new RangeError(`rolloff must hold at most ${MAX_ROLLOFFS} roll-offs (got ${list.length})`);
+  const sections: AnalogSection[] = [];
+  list.forEach((r, i) => sections.push(...singleRolloffSections(r, `rolloff[${i}]`)));
+  return sections;
 }

@@ -2,7 +2,7 @@ import { LN_POWER_TO_DB, RAD_TO_DEG } from '../internal/angles';
 import { assertPositive, positiveFrequencies } from '../internal/guards';
 import { compileSections, evaluatePlan } from '../internal/section-plan';
 import { filterSections, MAX_SECTION_Q, rolloffSections } from './analog-sections';
-import type { AnalogSection, ComplexResponse, FilterSpec, RolloffSpec } from './filter-types';
+import type { AnalogSection, ComplexResponse, FilterSpec, RolloffChain } from './filter-types';
 
 /** Complex response of a product of analog sections on a grid (analytic group delay). */
 export function sectionsResponse(sections: readonly AnalogSection[], frequencyHz: Float64Array | readonly number[]): ComplexResponse {
@@ -46,7 +46,8 @@ export function filterResponse({ filter, frequencyHz }: FilterResponseOptions): 
 
 /** Options of {@link rolloffResponse}. */
 export interface RolloffResponseOptions {
-  readonly rolloff: RolloffSpec;
+  /** One roll-off or a list applied together. */
+  readonly rolloff: RolloffChain;
   readonly frequencyHz: Float64Array | readonly number[];
 }
 

@@ -28,6 +28,9 @@ export type RolloffSpec =
   | { readonly kind: 'vented'; readonly cornerHz: number }
   | { readonly kind: 'lowpass'; readonly cornerHz: number; readonly q: number };
 
+/** One roll-off, or several applied together (the product of their sections), e.g. a sub's [low, upper] roll-offs. */
+export type RolloffChain = RolloffSpec | readonly RolloffSpec[];
+
 /** Kind of a first- or second-order analog section. */
 export type SectionKind = 'lowpass1' | 'highpass1' | 'lowpass2' | 'highpass2';
 

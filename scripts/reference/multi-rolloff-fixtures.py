@@ -1,0 +1,93 @@
+#!/usr/bin/env python3
+"""Reference fixtures for paths with several natural roll-offs (a sub's low roll-off AND its upper roll-off; a
+main speaker's low roll-off given as a one-element list), evaluated with scipy.signal (reference library).
+
+Each roll-off is an analog B(s)/A(s) (sealed: s^2/(s^2 + s*w0/Q + w0^2); vented: Butterworth 4th-order high-pass;
+lowpass: w0^2/(s^2 + s*w0/Q + w0^2)); a path multiplies its crossover filter by every roll-off in its list
+(numpy.polymul), then gain, polarity and e^(-j w tau). The sum and its group delay are formed exactly as in
+two-way-fixtures.py, whose helpers this script reuses.
+
+Run: python3 scripts/reference/multi-rolloff-fixtures.py > tests/dsp/fixtures/multi-rolloff-systems.json
+"""
+import importlib.util
+import json
+import os
+import sys
+
+import numpy as np
+import scipy
+from scipy import signal
+
+_spec = importlib.util.spec_from_file_location('two_way', os.path.join(os.path.dirname(__file__), 'two-way-fixtures.py'))
+two_way = importlib.util.module_from_spec(_spec)
+_spec.loader.exec_module(two_way)
+
+SEED = 20241202
+COUNT = 24
+
+
+def path_response(path, w, speed):
+    f = path['filter']
+    b, a = two_way.filter_ba(f['family'], f['order'], f['response'], f['cornerHz'])
+    for rolloff in path['rolloff']:
+        rb, ra = two_way.rolloff_ba(rolloff)
+        b, a = np.polymul(b, rb), np.polymul(a, ra)
+    _, h = signal.freqs(b, a, worN=w)
+    tau = path['delayMs'] / 1000 + path.get('distanceM', 0.0) / speed
+    gain = 10 ** (path['gainDb'] / 20) * (-1 if path['invert'] else 1)
+    s = 1j * w
+    dlog = 1j * (np.polyval(np.polyder(b), s) / np.polyval(b, s) - np.polyval(np.polyder(a), s) / np.polyval(a, s)) - 1j * tau
+    hk = gain * h * np.exp(-1j * w * tau)
+    return hk, hk * dlog
+
+
+def low_rolloff(rng, low_hz, high_hz):
+    if rng.random() < 0.5:
+        return {'kind': 'sealed', 'cornerHz': float(np.round(rng.uniform(low_hz, high_hz), 3)), 'q': float(np.round(rng.uniform(0.5, 1.2), 4))}
+    return {'kind': 'vented', 'cornerHz': float(np.round(rng.uniform(low_hz, high_hz), 3))}
+
+
+def main():
+    rng = np.random.default_rng(SEED)
+    freq = 10.0 * 2.0 ** (np.arange(0, int(np.floor(np.log2(20000 / 10) * 12)) + 1) / 12)
+    w = 2 * np.pi * freq
+    systems = []
+    for k in range(COUNT):
+        temperature_c = float(np.round(rng.uniform(5, 35), 2))
+        speed = 331.3 * np.sqrt(1 + temperature_c / 273.15)
+        mains = {'name': 'mains', 'filter': two_way.random_filter(rng, 'highpass'), 'rolloff': [low_rolloff(rng, 35, 90)],
+                 'gainDb': float(np.round(rng.uniform(-6, 6), 3)), 'delayMs': float(np.round(rng.uniform(0, 10), 4)),
+                 'invert': False, 'distanceM': float(np.round(rng.uniform(0.5, 6), 3))}
+        sub_rolloffs = [low_rolloff(rng, 15, 35),
+                        {'kind': 'lowpass', 'cornerHz': float(np.round(rng.uniform(120, 400), 3)), 'q': float(np.round(rng.uniform(0.5, 1.2), 4))}]
+        if k % 4 == 3:
+            sub_rolloffs.append({'kind': 'none'})
+        sub = {'name': 'sub', 'filter': two_way.random_filter(rng, 'lowpass'), 'rolloff': sub_rolloffs,
+               'gainDb': float(np.round(rng.uniform(-6, 6), 3)), 'delayMs': float(np.round(rng.uniform(0, 10), 4)),
+               'invert': bool(rng.random() < 0.5), 'distanceM': float(np.round(rng.uniform(0.5, 6), 3))}
+        paths = [mains, sub]
+        total = np.zeros_like(w, dtype=complex)
+        total_d = np.zeros_like(w, dtype=complex)
+        sub_only = None
+        for path in paths:
+            hk, dk = path_response(path, w, speed)
+            total += hk
+            total_d += dk
+            sub_only = hk
+        systems.append({
+            'temperatureC': temperature_c,
+            'paths': paths,
+            'subMagnitudeDb': [float(x) for x in 20 * np.log10(np.abs(sub_only))],
+            'sum': {
+                'magnitudeDb': [float(x) for x in 20 * np.log10(np.abs(total))],
+                'phaseDeg': [float(x) for x in np.angle(total, deg=True)],
+                'groupDelayMs': [float(x) for x in -np.imag(total_d / total) * 1000],
+            },
+        })
+    json.dump({'source': 'scipy.signal.freqs ' + scipy.__version__ + ', numpy ' + np.__version__,
+               'generator': 'scripts/reference/multi-rolloff-fixtures.py', 'seed': SEED,
+               'frequencyHz': [float(x) for x in freq], 'systems': systems}, sys.stdout, separators=(',', ':'))
+
+
+if __name__ == '__main__':
+    main()
