@@ -3,6 +3,9 @@
  * Idempotent: finds what exists by e-mail and name, creates only what is missing.
  */
 import { db } from '../lib/db';
+import { ensureMeasurement } from '../lib/data/measurements';
+import { parseMeasurementText } from '../lib/measurements/parse-measurement';
+import { demoMeasurementFiles } from './demo-measurements';
 import { ensureProfile } from '../lib/data/profiles';
 import { createSystem } from '../lib/data/systems';
 import { createUserWithWorkspace, findUserByEmail } from '../lib/data/users';
@@ -60,5 +63,15 @@ export async function seedDemo(): Promise<string> {
     if (await ensureProfile(workspace.id, owner.id, profileFieldsSchema.parse(profile))) profilesAdded++;
   }
 
-  return `workspace "${DEMO_WORKSPACE}" ready; ${made.length ? `created ${made.join(', ')}` : 'Systems already present'}; ${profilesAdded ? `added ${profilesAdded} Speaker profiles` : 'Speaker profiles already present'}`;
+  // Invented measured files of the Juniper Lane room (scripts/demo-measurements.ts), by name, once.
+  let measurementsAdded = 0;
+  const juniper = await System.findOne({ where: { workspaceId: workspace.id, name: 'Juniper Lane screening room' }, attributes: ['id'] });
+  for (const file of demoMeasurementFiles()) {
+    const parsed = parseMeasurementText(file.text);
+    if (!parsed.ok) throw new Error(`demo measurement ${file.fileName}: ${parsed.message}`);
+    if (await ensureMeasurement(workspace.id, juniper?.id ?? null, owner.id, { name: file.name, seat: file.seat, role: file.role }, parsed.measurement)) measurementsAdded++;
+  }
+  const measurementsSummary = measurementsAdded ? `added ${measurementsAdded} invented measurements` : 'measurements already present';
+
+  return `workspace "${DEMO_WORKSPACE}" ready; ${made.length ? `created ${made.join(', ')}` : 'Systems already present'}; ${profilesAdded ? `added ${profilesAdded} Speaker profiles` : 'Speaker profiles already present'}; ${measurementsSummary}`;
 }

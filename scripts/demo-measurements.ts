@@ -1,0 +1,161 @@
+/**
+ * Invented measured files for the invented "Juniper Lane screening room" (SPEC §8), generated from
+ * the model: each speaker's natural roll-off and air path to the seat (dsp), a seat-specific room
+ * ripple taken from the modal sum at that seat (dsp summedModalResponse, as a minimum-phase
+ * deviation below ~300 Hz), and seeded noise. Deterministic: the same seed gives the same bytes.
+ * Not a real measurement of anything; every file says so in its first line.
+ *
+ *   npx tsx scripts/demo-measurements.ts [out-dir]   writes the files (default: print a summary)
+ */
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import {
+  arrivalTimeMs,
+  logFrequencyGridHz,
+  minimumPhaseDeg,
+  rolloffResponse,
+  smoothFractionalOctave,
+  summedModalResponse,
+  unwrapDeg,
+  type PointM,
+  type RolloffSpec,
+} from '../dsp';
+import { juniperLaneDocument } from '../lib/demo/systems';
+import type { Seat, SystemDocument } from '../lib/validations/system';
+
+export interface DemoMeasurementFile {
+  /** File name, e.g. `juniper-lane-mlp-mains.csv`. */
+  fileName: string;
+  name: string;
+  seat: string;
+  role: 'mains' | 'sub';
+  hasPhase: boolean;
+  text: string;
+}
+
+/** mulberry32: a small seeded generator (public domain), uniform in [0, 1). */
+function seeded(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+/** Roughly normal noise (sum of four uniforms, unit variance). */
+const gaussian = (rand: () => number) => (rand() + rand() + rand() + rand() - 2) * Math.sqrt(3);
+
+const toPoint = (p: { xM: number; yM: number; zM: number }): PointM => ({ x: p.xM, y: p.yM, z: p.zM });
+
+/** Room ripple at a seat: the modal sum's deviation from its own octave-smoothed trend, faded out from 150 to 400 Hz. */
+function roomRippleDb(doc: SystemDocument, sources: PointM[], seat: Seat, grid: Float64Array, depth: number): Float64Array {
+  const { lengthM, widthM, heightM, rt60S, temperatureC } = doc.room;
+  const modal = summedModalResponse({
+    room: { lengthM, widthM, heightM },
+    sources: sources.map((positionM) => ({ positionM })),
+    receiverM: toPoint(seat),
+    frequencyHz: grid,
+    rt60S,
+    temperatureC,
+    maxModeHz: 500,
+  });
+  const trend = smoothFractionalOctave({ frequencyHz: grid, magnitudeDb: modal.sum.magnitudeDb, fraction: 1 }).magnitudeDb;
+  return Float64Array.from(grid, (f, i) => {
+    const w = f <= 150 ? 1 : f >= 400 ? 0 : Math.log(400 / f) / Math.log(400 / 150);
+    const d = (modal.sum.magnitudeDb[i]! - trend[i]!) * depth * w;
+    return Math.max(-15, Math.min(12, d));
+  });
+}
+
+function curveText(header: string[], grid: Float64Array, magnitudeDb: Float64Array, phaseDeg: Float64Array | null): string {
+  const lines = [...header.map((h) => `# ${h}`), phaseDeg ? 'Frequency (Hz),Magnitude (dB),Phase (deg)' : 'Frequency (Hz),Magnitude (dB)'];
+  grid.forEach((f, i) => {
+    const cells = [Number(f.toPrecision(6)), magnitudeDb[i]!.toFixed(3)];
+    if (phaseDeg) cells.push(phaseDeg[i]!.toFixed(2));
+    lines.push(cells.join(','));
+  });
+  return `${lines.join('\n')}\n`;
+}
+
+interface SourceModel {
+  positionsM: PointM[];
+  rolloff: RolloffSpec[];
+  /** Level of the invented speaker at the seat, dB (arbitrary reference). */
+  levelDb: number;
+  rippleDepth: number;
+}
+
+function measuredCurve(doc: SystemDocument, seat: Seat, model: SourceModel, grid: Float64Array, rand: () => number, withPhase: boolean) {
+  const speaker = rolloffResponse({ rolloff: model.rolloff, frequencyHz: grid });
+  const ripple = roomRippleDb(doc, model.positionsM, seat, grid, model.rippleDepth);
+  const ripplePhase = minimumPhaseDeg({ frequencyHz: grid, magnitudeDb: ripple }).unwrappedPhaseDeg;
+  // The nearest source's air path: the time of flight a measurement with phase holds.
+  const distanceM = Math.min(...model.positionsM.map((p) => Math.hypot(p.x - seat.xM, p.y - seat.yM, p.z - seat.zM)));
+  const delayMs = arrivalTimeMs({ distanceM, temperatureC: doc.room.temperatureC });
+  const speakerPhase = unwrapDeg(speaker.phaseDeg);
+  const magnitudeDb = Float64Array.from(grid, (_f, i) => model.levelDb + speaker.magnitudeDb[i]! + ripple[i]! + 0.25 * gaussian(rand));
+  const phaseDeg = Float64Array.from(grid, (f, i) => {
+    const p = speakerPhase[i]! + ripplePhase[i]! - 0.36 * f * delayMs + 1.5 * gaussian(rand);
+    return p - 360 * Math.round(p / 360);
+  });
+  return { magnitudeDb, phaseDeg: withPhase ? phaseDeg : null, distanceM };
+}
+
+/**
+ * The invented files: per seat of the Juniper Lane room, the left main speaker alone and both subs
+ * together, measured from 10 Hz. The left seat's pair has no phase column (a magnitude-only
+ * measurement), so the Measured panel shows its estimated phase.
+ */
+export function demoMeasurementFiles(seed = 20261201): DemoMeasurementFile[] {
+  const doc = juniperLaneDocument();
+  const rand = seeded(seed);
+  const left = doc.speakers.find((s) => s.channel === 'L')!;
+  const mainProfile = doc.profiles.find((p) => p.id === left.profileId)!;
+  const subProfile = doc.profiles.find((p) => p.id === doc.subs[0]!.profileId)!;
+  const mains: SourceModel = { positionsM: [toPoint(left)], rolloff: [mainProfile.lowRolloff], levelDb: 84, rippleDepth: 0.5 };
+  const subs: SourceModel = { positionsM: doc.subs.map(toPoint), rolloff: [subProfile.lowRolloff, subProfile.highRolloff], levelDb: 87, rippleDepth: 0.8 };
+  const mainsGrid = logFrequencyGridHz({ startHz: 10, stopHz: 20000, pointsPerOctave: 24 });
+  const subGrid = logFrequencyGridHz({ startHz: 10, stopHz: 500, pointsPerOctave: 48 });
+  const files: DemoMeasurementFile[] = [];
+  for (const seat of doc.seats) {
+    const withPhase = seat.id !== 'left';
+    for (const [role, model, grid] of [['mains', mains, mainsGrid], ['sub', subs, subGrid]] as const) {
+      const c = measuredCurve(doc, seat, model, grid, rand, withPhase);
+      const what = role === 'mains' ? 'L main speaker alone' : 'both subs together';
+      const name = `${seat.name}: ${role === 'mains' ? 'L mains' : 'subs'} (invented)`;
+      files.push({
+        fileName: `juniper-lane-${seat.id}-${role}${withPhase ? '' : '-no-phase'}.csv`,
+        name,
+        seat: seat.name,
+        role,
+        hasPhase: withPhase,
+        text: curveText(
+          [
+            'Invented demo data, not a real measurement: generated by Seamline from its own model.',
+            `Juniper Lane screening room (invented), ${seat.name}, ${what}, no processing.`,
+            `Nearest source ${c.distanceM.toFixed(2)} m away; room ripple from the modal sum at this seat; seeded noise.`,
+          ],
+          grid,
+          c.magnitudeDb,
+          c.phaseDeg,
+        ),
+      });
+    }
+  }
+  return files;
+}
+
+if (process.argv[1] && /demo-measurements\.ts$/.test(process.argv[1])) {
+  const out = process.argv[2];
+  const files = demoMeasurementFiles();
+  for (const f of files) {
+    if (out) {
+      mkdirSync(out, { recursive: true });
+      writeFileSync(join(out, f.fileName), f.text);
+    }
+    console.log(`${f.fileName}  ${f.text.length} bytes  ${f.name}`);
+  }
+}
