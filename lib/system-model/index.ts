@@ -39,6 +39,11 @@ export function subRolloff(profile: SpeakerProfile | undefined): RolloffSpec {
   return profile?.highRolloff ?? { kind: 'none' };
 }
 
+/** Both natural roll-offs of a sub, applied together on its path: [low roll-off (sealed/vented/none), upper roll-off]. */
+export function subRolloffs(profile: SpeakerProfile | undefined): RolloffSpec[] {
+  return [profile?.lowRolloff ?? { kind: 'none' }, subRolloff(profile)];
+}
+
 /** The mains path: high-pass at the crossover, the speaker's roll-off, trim, mains delay, distance. */
 export function mainsPath(doc: SystemDocument, speaker: Speaker): PathSpec {
   const bm = doc.bassManagement;
@@ -53,13 +58,13 @@ export function mainsPath(doc: SystemDocument, speaker: Speaker): PathSpec {
   };
 }
 
-/** One path per sub: low-pass at the crossover, the sub's upper roll-off, gain, delay, polarity, distance. */
+/** One path per sub: low-pass at the crossover, the sub's low and upper roll-offs, gain, delay, polarity, distance. */
 export function subPath(doc: SystemDocument, sub: Sub): PathSpec {
   const bm = doc.bassManagement;
   return {
     name: sub.name,
     filter: { family: bm.subLowpass.family, order: bm.subLowpass.order, response: 'lowpass', cornerHz: bm.crossoverHz },
-    rolloff: subRolloff(profileById(doc, sub.profileId)),
+    rolloff: subRolloffs(profileById(doc, sub.profileId)),
     gainDb: sub.gainDb + 20 * Math.log10(sub.count),
     delayMs: sub.delayMs,
     invert: sub.invert,
