@@ -2,11 +2,11 @@
  * Crossover sweep glue for the editor: ranking rows, the request for a pairing chosen from the
  * document, and writing a chosen row back into the System. Arrival times come from dsp.
  */
-import { arrivalTimeMs, type RolloffSpec } from '@/dsp';
+import { arrivalTimeMs, type RolloffChain, type RolloffSpec } from '@/dsp';
 import type { CrossoverSweepAnswerRow } from '@/lib/system-model/blend-compute';
 import type { CrossoverSweepRequest } from '@/lib/validations/compute-blend';
 import type { SpeakerProfile, SystemDocument } from '@/lib/validations/system';
-import { blendMainSpeaker, distanceToSeatM } from './index';
+import { blendMainSpeaker, distanceToSeatM, mainsRolloff, subRolloff } from './index';
 
 type Rankable = Pick<CrossoverSweepAnswerRow, 'flatnessDb' | 'deepestDipDb' | 'crossoverHz'>;
 
@@ -23,11 +23,7 @@ export function candidateRangeHz(fromHz: number, toHz: number, stepHz: number): 
   return out;
 }
 
-const mainsRolloffOf = (p: SpeakerProfile | undefined): CrossoverSweepRequest['mainsRolloff'] => p?.lowRolloff ?? { kind: 'none' };
-const subRolloffOf = (p: SpeakerProfile | undefined): CrossoverSweepRequest['subRolloff'] => {
-  const r: RolloffSpec = p?.highRolloff ?? { kind: 'none' };
-  return r.kind === 'lowpass' ? r : { kind: 'none' };
-};
+const chain = (r: RolloffChain): RolloffSpec | RolloffSpec[] => (Array.isArray(r) ? [...r] : (r as RolloffSpec));
 
 /**
  * The sweep request for a main profile and a sub profile in this System: the shown channel's trim
@@ -43,8 +39,9 @@ export function sweepRequestFromDocument(
   const amplitude = doc.subs.reduce((sum, s) => sum + s.count * 10 ** (s.gainDb / 20), 0);
   return {
     temperatureC: doc.room.temperatureC,
-    mainsRolloff: mainsRolloffOf(options.mainsProfile),
-    subRolloff: subRolloffOf(options.subProfile),
+    // The profiles' roll-offs exactly as the System's paths use them (lib/system-model).
+    mainsRolloff: chain(mainsRolloff(options.mainsProfile)) as CrossoverSweepRequest['mainsRolloff'],
+    subRolloff: chain(subRolloff(options.subProfile)),
     pairings: options.pairings,
     candidatesHz: options.candidatesHz,
     mainsGainDb: speaker?.trimDb ?? 0,

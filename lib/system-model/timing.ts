@@ -4,7 +4,7 @@
  * Timing window, several subs) is dsp's; here only processor bookkeeping: delays are settings
  * of "sub minus mains", and a processor takes only positive delays, so one side stays at 0.
  */
-import { alignSubToMains, alignSubs, arrivalTimeMs, speedOfSoundMps, type PathSpec } from '@/dsp';
+import { alignSubToMains, alignSubs, arrivalTimeMs, speedOfSoundMps, type PathSpec, type RolloffChain, type RolloffSpec } from '@/dsp';
 import { wrapDeg } from '@/dsp/internal/angles';
 import type { TimingRequest } from '@/lib/validations/compute-blend';
 import type { SystemDocument } from '@/lib/validations/system';
@@ -68,6 +68,9 @@ export interface TimingAnswer {
 }
 
 const r3 = (v: number) => roundTo(v, 3);
+
+/** A roll-off chain as the request schema takes it (a plain array). */
+export const asChain = (r: RolloffChain): RolloffSpec | RolloffSpec[] => (Array.isArray(r) ? [...r] : (r as RolloffSpec));
 
 export function computeTiming(req: TimingRequest): TimingAnswer {
   const { temperatureC, crossoverHz } = req;
@@ -152,22 +155,20 @@ export function timingRequestFromDocument(doc: SystemDocument, channel?: string)
   const speaker = blendMainSpeaker(doc, channel);
   if (!speaker || doc.subs.length === 0) return null;
   const bm = doc.bassManagement;
-  const mr = mainsRolloff(profileById(doc, speaker.profileId));
   return {
     temperatureC: doc.room.temperatureC,
     crossoverHz: bm.crossoverHz,
     mainsHighpass: { family: bm.mainsHighpass.family, order: bm.mainsHighpass.order },
     subLowpass: { family: bm.subLowpass.family, order: bm.subLowpass.order },
-    mains: { name: speaker.channel, distanceM: roundTo(distanceToSeatM(doc, speaker), 4), delayMs: bm.mainsDelayMs, gainDb: speaker.trimDb, rolloff: mr.kind === 'lowpass' ? { kind: 'none' } : mr },
+    mains: { name: speaker.channel, distanceM: roundTo(distanceToSeatM(doc, speaker), 4), delayMs: bm.mainsDelayMs, gainDb: speaker.trimDb, rolloff: asChain(mainsRolloff(profileById(doc, speaker.profileId))) as TimingRequest['mains']['rolloff'] },
     subs: doc.subs.map((s) => {
-      const sr = subRolloff(profileById(doc, s.profileId));
       return {
         name: s.name,
         distanceM: roundTo(distanceToSeatM(doc, s), 4),
         delayMs: s.delayMs,
         gainDb: s.gainDb + 20 * Math.log10(s.count),
         invert: s.invert,
-        rolloff: sr.kind === 'lowpass' ? sr : { kind: 'none' },
+        rolloff: asChain(subRolloff(profileById(doc, s.profileId))),
       };
     }),
     maxDelayMs: 20,

@@ -46,6 +46,22 @@ export const rolloffSchema = z.discriminatedUnion(
   { error: "kind must be 'none', 'sealed', 'vented' or 'lowpass'" },
 );
 
+/**
+ * One roll-off or a chain of up to 4 applied together (e.g. a sub's low and upper roll-offs).
+ * Checked by hand so a bad field keeps its exact path (`paths.1.rolloff.q`, `paths.1.rolloff.0.q`).
+ */
+function chainOf<T extends z.ZodType>(one: T) {
+  const many = z.array(one).min(1, 'must hold at least one roll-off').max(4, 'must hold at most 4 roll-offs');
+  return z.unknown().transform((value, ctx): z.output<T> | z.output<T>[] => {
+    const parsed = Array.isArray(value) ? many.safeParse(value) : one.safeParse(value);
+    if (!parsed.success) {
+      for (const issue of parsed.error.issues) ctx.addIssue({ code: 'custom', message: issue.message, path: issue.path });
+      return z.NEVER;
+    }
+    return parsed.data as z.output<T> | z.output<T>[];
+  });
+}
+
 /** Main speakers roll off at the bottom: none, sealed or vented. */
 export const mainsRolloffSchema = z.discriminatedUnion(
   'kind',
@@ -57,13 +73,6 @@ export const mainsRolloffSchema = z.discriminatedUnion(
   { error: "kind must be 'none', 'sealed' or 'vented'" },
 );
 
-/** A sub's upper roll-off: none or a second-order low-pass. */
-export const subRolloffSchema = z.discriminatedUnion(
-  'kind',
-  [z.strictObject({ kind: z.literal('none') }), z.strictObject({ kind: z.literal('lowpass'), cornerHz: hz(10, 24000), q })],
-  { error: "kind must be 'none' or 'lowpass'" },
-);
-
 const nameSchema = z.string({ error: 'must be a string' }).trim().min(1, 'must not be empty').max(60, 'must be at most 60 characters');
 const gainDbSchema = num(-60, 60, 'dB');
 const delayMsSchema = num(0, 1000, 'ms');
@@ -73,7 +82,7 @@ const invertSchema = z.boolean({ error: 'must be true or false' });
 export const blendPathSchema = z.strictObject({
   name: nameSchema,
   filter: filterSpecSchema,
-  rolloff: rolloffSchema.optional(),
+  rolloff: chainOf(rolloffSchema).optional(),
   gainDb: gainDbSchema,
   delayMs: delayMsSchema,
   invert: invertSchema,
@@ -108,8 +117,8 @@ export const SWEEP_LIMITS = { maxCandidates: 60, maxPairings: 6, maxRows: 120, m
 export const crossoverSweepRequestSchema = z
   .strictObject({
     temperatureC: temperatureCSchema.default(20),
-    mainsRolloff: mainsRolloffSchema,
-    subRolloff: subRolloffSchema,
+    mainsRolloff: chainOf(mainsRolloffSchema),
+    subRolloff: chainOf(rolloffSchema),
     pairings: z.array(pairingSchema).min(1, 'must hold at least one pairing').max(SWEEP_LIMITS.maxPairings, `must hold at most ${SWEEP_LIMITS.maxPairings} pairings`),
     candidatesHz: z
       .array(hz(SWEEP_LIMITS.minHz, SWEEP_LIMITS.maxHz))
@@ -136,7 +145,7 @@ const timingMainsSchema = z.strictObject({
   distanceM: distanceMSchema,
   delayMs: delayMsSchema.default(0),
   gainDb: gainDbSchema.default(0),
-  rolloff: mainsRolloffSchema.default({ kind: 'none' }),
+  rolloff: chainOf(mainsRolloffSchema).default({ kind: 'none' }),
 });
 
 const timingSubSchema = z.strictObject({
@@ -145,7 +154,7 @@ const timingSubSchema = z.strictObject({
   delayMs: delayMsSchema.default(0),
   gainDb: gainDbSchema.default(0),
   invert: invertSchema.default(false),
-  rolloff: subRolloffSchema.default({ kind: 'none' }),
+  rolloff: chainOf(rolloffSchema).default({ kind: 'none' }),
 });
 
 /** POST /api/v1/timing. */
@@ -161,3 +170,8 @@ export const timingRequestSchema = z.strictObject({
 });
 
 export type TimingRequest = z.infer<typeof timingRequestSchema>;
+
+/** What a client may send (before defaults and roll-off chains are filled in). */
+export type BlendRequestInput = z.input<typeof blendRequestSchema>;
+export type TimingRequestInput = z.input<typeof timingRequestSchema>;
+export type CrossoverSweepRequestInput = z.input<typeof crossoverSweepRequestSchema>;
