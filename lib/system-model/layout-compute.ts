@@ -85,7 +85,7 @@ function describe(channel: LayoutChannel | undefined, check: ReturnType<typeof c
     const mag = Math.abs(azimuthDeg);
     parts.push(channel.side === 'centre' ? `${check.azimuthOffDeg.toFixed(1)}° off centre` : `azimuth ${mag.toFixed(1)}° is ${mag < channel.azimuthDeg.min ? 'below' : 'above'} ${mag < channel.azimuthDeg.min ? channel.azimuthDeg.min : channel.azimuthDeg.max}°`);
   }
-  if (check.elevationOffDeg > 0) parts.push(`elevation ${elevationDeg.toFixed(1)}° is outside ${channel.elevationDeg.min}°–${channel.elevationDeg.max}°`);
+  if (check.elevationOffDeg > 0) parts.push(`elevation ${elevationDeg.toFixed(1).replace('-', '−')}° is outside ${channel.elevationDeg.min}°–${channel.elevationDeg.max}°`);
   return parts.join('; ');
 }
 
