@@ -1,0 +1,119 @@
+'use client';
+
+import { useEffect, useMemo } from 'react';
+import { FrequencyPlot, traceStyles, chartColors, type FrequencyMarker, type PlotTrace } from '@/components/charts';
+import { applySweepValue, formatSweepValue, sweepValueAt } from '@/lib/system-model/lesson-sweep';
+import { axialModesHz, lessonFrame, FRAME_START_HZ } from '@/lib/system-model/lesson-frame';
+import type { LessonPanel, LessonTrace, Sweep } from '@/lib/validations/lesson';
+import type { SystemDocument } from '@/lib/validations/system';
+
+export interface StepPlotStep {
+  document: SystemDocument;
+  panel: LessonPanel;
+  traces: LessonTrace[];
+  sweep: Sweep | null;
+  title: string;
+}
+
+const SUB_STYLES = [traceStyles.sub, traceStyles.sub2];
+
+declare global {
+  interface Window {
+    /** Frames the Lesson plot has drawn (read by scripts/bench-ui-sweep.ts and the e2e test). */
+    __seamlineLessonFrames?: number;
+  }
+}
+
+const fmt = (v: number | null | undefined, digits = 1, unit = '') =>
+  v == null || !Number.isFinite(v) ? '—' : `${v < 0 ? '\u2212' : ''}${Math.abs(v).toFixed(digits)}${unit ? `\u2009${unit}` : ''}`;
+
+/** Levels below −60 dB read as a null (an exact cancellation is −300 dB in dsp/). */
+const fmtDb = (v: number) => (Number.isFinite(v) && v < -60 ? 'null (below −60 dB)' : `${v > 0.05 ? '+' : ''}${fmt(v, 1, 'dB')}`);
+
+/**
+ * The plot of one Step at one moment of its sweep (`progress` 0–1): magnitude of the mains, each
+ * sub and the sum, the phase when asked, and the read-outs at the crossover. Recomputed from dsp/
+ * in the browser on every call, so a sweep animates frame by frame.
+ */
+export function StepPlot({ step, progress = 0, emphasis = 'default', compact = false }: { step: StepPlotStep; progress?: number; emphasis?: 'default' | 'projector'; compact?: boolean }) {
+  const { sweep } = step;
+  const value = useMemo(() => (sweep ? sweepValueAt(sweep, progress) : null), [sweep, progress]);
+  const doc = useMemo(() => (sweep && value ? applySweepValue(step.document, sweep, value) : step.document), [step.document, sweep, value]);
+  const frame = useMemo(() => lessonFrame(doc), [doc]);
+  const modes = useMemo(() => (step.panel === 'modes' ? axialModesHz(step.document, 200) : []), [step.panel, step.document]);
+
+  // Count drawn frames for the frame-rate bench (after commit; never during render).
+  useEffect(() => {
+    window.__seamlineLessonFrames = (window.__seamlineLessonFrames ?? 0) + 1;
+  }, [frame]);
+
+  if (!frame) return <p className="text-ink-soft">This Step&apos;s System has no main speakers, so there is no blend to show.</p>;
+  const { result, metrics } = frame;
+  const show = new Set(step.traces);
+  const traces: PlotTrace[] = [];
+  const first = result.paths[0];
+  if (show.has('mains') && first) traces.push({ id: 'mains', label: `Mains (${first.name})`, values: first.magnitudeDb, ...traceStyles.mains });
+  if (show.has('subs')) {
+    result.paths.slice(1).forEach((p, i) => traces.push({ id: `sub-${i}`, label: p.name, values: p.magnitudeDb, ...(SUB_STYLES[i % 2] ?? traceStyles.sub) }));
+  }
+  if (show.has('sum') || traces.length === 0) traces.push({ id: 'sum', label: 'Sum', values: result.sum.magnitudeDb, ...traceStyles.sum });
+  const markers: FrequencyMarker[] = [{ hz: frame.crossoverHz, label: `Crossover ${Math.round(frame.crossoverHz)} Hz`, dashed: true }];
+  for (const m of modes.slice(0, 8)) markers.push({ hz: m.hz, label: undefined, color: chartColors.inkMuted, dashed: true });
+  const references = show.has('target') && metrics ? [{ value: metrics.referenceLevelDb, label: 'Flat' }] : [];
+  const phaseTraces: PlotTrace[] = [];
+  if (show.has('phase')) {
+    if (first) phaseTraces.push({ id: 'mains-phase', label: 'Mains phase', values: first.phaseDeg, ...traceStyles.mains });
+    result.paths.slice(1).forEach((p, i) => phaseTraces.push({ id: `sub-${i}-phase`, label: `${p.name} phase`, values: p.phaseDeg, ...(SUB_STYLES[i % 2] ?? traceStyles.sub) }));
+  }
+  const big = emphasis === 'projector';
+  const readouts: { label: string; value: string; id: string }[] = metrics
+    ? [
+        { id: 'sum', label: 'Sum at crossover', value: fmtDb(metrics.sumLevelDb) },
+        { id: 'phase', label: 'Phase difference there', value: fmt(metrics.phaseDifferenceDeg, 0, '°') },
+        { id: 'dip', label: 'Deepest dip (±1 octave)', value: `${fmtDb(metrics.deepestDipDb)} at ${Math.round(metrics.deepestDipHz)}\u2009Hz` },
+      ]
+    : [];
+  if (step.panel === 'timing') {
+    readouts.push({ id: 'distances', label: 'Distances to the MLP', value: `mains ${frame.mainsDistanceM.toFixed(2)} m · sub ${frame.subDistancesM.map((d) => d.toFixed(2)).join(', ')} m` });
+  }
+
+  return (
+    <div className="flex flex-col gap-3" data-testid="step-plot">
+      {sweep && value ? (
+        <p className={`num font-semibold text-ink ${big ? 'text-5xl' : 'text-2xl'}`} data-testid="sweep-value" aria-live="off">
+          {formatSweepValue(sweep, value)}
+        </p>
+      ) : null}
+      <FrequencyPlot
+        title={`${step.title}: level of mains, sub and sum`}
+        quantity="magnitude"
+        frequencyHz={result.frequencyHz}
+        minHz={FRAME_START_HZ}
+        maxHz={1000}
+        yDomain={[-30, 10]}
+        yTicks={[-30, -24, -18, -12, -6, 0, 6]}
+        traces={traces}
+        references={references}
+        markers={markers}
+        emphasis={emphasis}
+        aspect={compact ? 0.45 : big ? 0.42 : 0.5}
+      />
+      {phaseTraces.length ? <FrequencyPlot title={`${step.title}: phase`} quantity="phase" frequencyHz={result.frequencyHz} minHz={FRAME_START_HZ} maxHz={1000} traces={phaseTraces} emphasis={emphasis} aspect={0.3} /> : null}
+      {readouts.length ? (
+        <dl className={`grid gap-x-6 gap-y-1 ${big ? 'grid-cols-3 text-2xl' : 'grid-cols-1 text-sm sm:grid-cols-3'}`}>
+          {readouts.map((r) => (
+            <div key={r.id} className="flex flex-col">
+              <dt className="text-ink-soft">{r.label}</dt>
+              <dd className="num font-semibold" data-testid={`readout-${r.id}`}>
+                {r.value}
+              </dd>
+            </div>
+          ))}
+        </dl>
+      ) : null}
+      {step.panel === 'modes' && modes.length ? (
+        <p className={big ? 'text-xl text-ink-soft' : 'text-xs text-ink-soft'}>Dashed grey lines: the room&apos;s first axial modes ({modes.slice(0, 8).map((m) => `${m.hz.toFixed(0)} Hz`).join(', ')}).</p>
+      ) : null}
+    </div>
+  );
+}
