@@ -8,7 +8,7 @@ import { alignSubToMains, alignSubs, arrivalTimeMs, speedOfSoundMps, type PathSp
 import { wrapDeg } from '@/dsp/internal/angles';
 import type { TimingRequest } from '@/lib/validations/compute-blend';
 import type { SystemDocument } from '@/lib/validations/system';
-import { blendMainSpeaker, distanceToSeatM, mainsRolloff, profileById, subRolloff } from './index';
+import { blendMainSpeaker, distanceToSeatM, mainsRolloff, profileById, subRolloffs } from './index';
 import { roundTo } from './blend-compute';
 
 export interface TimingArrival {
@@ -95,7 +95,7 @@ export function computeTiming(req: TimingRequest): TimingAnswer {
   }));
   const arrival = (name: string, distanceM: number, delayMs: number): TimingArrival => {
     const arrivalMs = arrivalTimeMs({ distanceM, temperatureC });
-    return { name, distanceM: r3(distanceM), arrivalMs: r3(arrivalMs), delayMs: r3(delayMs), totalMs: r3(arrivalMs + delayMs) };
+    return { name, distanceM: roundTo(distanceM, 4), arrivalMs: r3(arrivalMs), delayMs: r3(delayMs), totalMs: r3(arrivalMs + delayMs) };
   };
   const mainsArrival = arrival(req.mains.name, req.mains.distanceM, req.mains.delayMs);
   const mainsTotalMs = arrivalTimeMs({ distanceM: req.mains.distanceM, temperatureC }) + req.mains.delayMs;
@@ -168,7 +168,7 @@ export function timingRequestFromDocument(doc: SystemDocument, channel?: string)
         delayMs: s.delayMs,
         gainDb: s.gainDb + 20 * Math.log10(s.count),
         invert: s.invert,
-        rolloff: asChain(subRolloff(profileById(doc, s.profileId))),
+        rolloff: asChain(subRolloffs(profileById(doc, s.profileId))),
       };
     }),
     maxDelayMs: 20,
