@@ -78,7 +78,7 @@ export function crossoverSweep(options: CrossoverSweepOptions): CrossoverSweepRe
     const a = pathComplex(mains, grid.omega);
     const b = pathComplex(sub, grid.omega);
     const input = { omega: grid.omega, aRe: a.re, aIm: a.im, bRe: b.re, bIm: b.im, bandCount: grid.bandCount, refIndex: grid.refIndex, crossoverIndex: grid.crossoverIndex };
-    const { best } = searchRelativeDelay(input, maxDelayS, stepS);
+    const { best } = searchRelativeDelay(input, maxDelayS, stepS, false);
     // Dip at the chosen setting.
     const sign = best.flipped ? -1 : 1;
     const power = (i: number): number => {

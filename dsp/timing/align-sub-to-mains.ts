@@ -3,7 +3,7 @@ import { speedOfSoundMps } from '../air/speed-of-sound';
 import { RAD_TO_DEG, wrapDeg } from '../internal/angles';
 import { assertPositive } from '../internal/guards';
 import { alignmentGrid, pathComplex } from './alignment-grid';
-import { scanRelativeDelay, searchRelativeDelay, type DelayScan, type DelayScanInput } from './delay-scan';
+import { flatnessAt, scanRelativeDelay, searchRelativeDelay, type DelayScan, type DelayScanInput } from './delay-scan';
 import type { AlignmentResult, AlignSubToMainsOptions } from './timing-types';
 
 /** Validated maxDelayMs / stepMs. */
@@ -21,7 +21,6 @@ export function delaySearchLimits(maxDelayMs = 20, stepMs = 0.05): { maxDelayS: 
  */
 export function alignmentFromScanInput(input: DelayScanInput, subInverted: boolean, maxDelayS: number, stepS: number): AlignmentResult {
   const { coarse, best } = searchRelativeDelay(input, maxDelayS, stepS);
-  const before = scanRelativeDelay(input, 0, stepS, 1);
   const x = input.crossoverIndex;
   const phaseOf = (re: number, im: number): number => Math.atan2(im, re) * RAD_TO_DEG;
   const phaseDifferenceDeg = wrapDeg(phaseOf(input.aRe[x] as number, input.aIm[x] as number) - phaseOf(input.bRe[x] as number, input.bIm[x] as number));
@@ -43,7 +42,7 @@ export function alignmentFromScanInput(input: DelayScanInput, subInverted: boole
     flipPolarity: best.flipped,
     phaseDifferenceDeg,
     phaseDifferenceAfterDeg,
-    flatnessBeforeDb: before.flatnessSameDb[0] as number,
+    flatnessBeforeDb: flatnessAt(input, 0, false),
     flatnessDb: best.flatnessDb,
     crossoverLevelDb,
     windowMs,

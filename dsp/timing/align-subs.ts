@@ -4,7 +4,7 @@ import { MAX_PATHS } from '../blend/blend-types';
 import { assertPositive } from '../internal/guards';
 import { alignmentGrid, pathComplex } from './alignment-grid';
 import { delaySearchLimits } from './align-sub-to-mains';
-import { scanRelativeDelay, searchRelativeDelay, type DelayScanInput } from './delay-scan';
+import { flatnessAt, searchRelativeDelay, type DelayScanInput } from './delay-scan';
 import type { AlignSubsOptions, AlignSubsResult } from './timing-types';
 
 /**
@@ -36,7 +36,7 @@ export function alignSubs(options: AlignSubsOptions): AlignSubsResult {
       referencePower[i] = sum * sum + 1e-300;
     }
     const input: DelayScanInput = { omega: grid.omega, aRe: first.re, aIm: first.im, bRe: b.re, bIm: b.im, bandCount: grid.bandCount, refIndex: grid.refIndex, crossoverIndex: grid.crossoverIndex, referencePower };
-    const { best } = searchRelativeDelay(input, maxDelayS, stepS);
+    const { best } = searchRelativeDelay(input, maxDelayS, stepS, false);
     relDelayS.push(best.delayS);
     flipped.push(best.flipped);
     const sign = best.flipped ? -1 : 1;
@@ -49,7 +49,7 @@ export function alignSubs(options: AlignSubsOptions): AlignSubsResult {
     }
   }
   const toMains: DelayScanInput = { omega: grid.omega, aRe: mains.re, aIm: mains.im, bRe: groupRe, bIm: groupIm, bandCount: grid.bandCount, refIndex: grid.refIndex, crossoverIndex: grid.crossoverIndex };
-  const { best } = searchRelativeDelay(toMains, maxDelayS, stepS);
+  const { best } = searchRelativeDelay(toMains, maxDelayS, stepS, false);
   // Before: the subs as they are, summed with the mains.
   const beforeRe = new Float64Array(n);
   const beforeIm = new Float64Array(n);
@@ -57,7 +57,6 @@ export function alignSubs(options: AlignSubsOptions): AlignSubsResult {
     beforeRe[i] = (beforeRe[i] as number) + (s.re[i] as number);
     beforeIm[i] = (beforeIm[i] as number) + (s.im[i] as number);
   }
-  const before = scanRelativeDelay({ ...toMains, bRe: beforeRe, bIm: beforeIm }, 0, stepS, 1);
   const extras = relDelayS.map((d) => d + best.delayS);
   const shift = Math.max(0, -Math.min(...extras));
   const result = options.subs.map((s, k) => {
@@ -65,5 +64,5 @@ export function alignSubs(options: AlignSubsOptions): AlignSubsResult {
     const invert = (flipped[k] as boolean) !== best.flipped ? !s.invert : s.invert;
     return { name: String(s.name), addDelayMs, delayMs: s.delayMs + addDelayMs, invert };
   });
-  return { subs: result, mainsAddDelayMs: shift * 1000, flatnessBeforeDb: before.flatnessSameDb[0] as number, flatnessDb: best.flatnessDb };
+  return { subs: result, mainsAddDelayMs: shift * 1000, flatnessBeforeDb: flatnessAt({ ...toMains, bRe: beforeRe, bIm: beforeIm }, 0, false), flatnessDb: best.flatnessDb };
 }

@@ -31,93 +31,160 @@ export interface DelayScan {
 
 const TINY = 1e-300;
 
-/** |A ± B·phasor|² at one point. */
-function sumPower(input: DelayScanInput, phRe: Float64Array, phIm: Float64Array, idx: number, sign: number): number {
-  const pr = phRe[idx] as number;
-  const pi = phIm[idx] as number;
-  const b = input.bRe[idx] as number;
-  const c = input.bIm[idx] as number;
-  const sr = (input.aRe[idx] as number) + sign * (b * pr - c * pi);
-  const si = (input.aIm[idx] as number) + sign * (b * pi + c * pr);
-  return sr * sr + si * si + TINY;
-}
-
-export function scanRelativeDelay(input: DelayScanInput, firstS: number, stepS: number, steps: number): DelayScan {
+/**
+ * Scans `steps` relative delays firstS + k·stepS. Inside the band the two powers are formed as
+ * |A ± B·Φ|² = (|A|² + |B|²) ± 2·Re(conj(A)·B·Φ), with Z = 2·conj(A)·B·Φ carried by a complex rotation per step
+ * (re-anchored every 64 steps), so each point and step costs one complex product and two additions. The reference
+ * and crossover points keep the direct form. `withLevels` = false leaves the crossover levels at 0 (the sweep).
+ */
+export function scanRelativeDelay(input: DelayScanInput, firstS: number, stepS: number, steps: number, withLevels = true): DelayScan {
   const { omega, aRe, aIm, bRe, bIm, bandCount, refIndex, crossoverIndex, referencePower } = input;
-  const n = omega.length;
-  const rotRe = new Float64Array(n);
-  const rotIm = new Float64Array(n);
-  const phRe = new Float64Array(n);
-  const phIm = new Float64Array(n);
+  const rotRe = new Float64Array(bandCount);
+  const rotIm = new Float64Array(bandCount);
+  const zRe = new Float64Array(bandCount);
+  const zIm = new Float64Array(bandCount);
+  const kRe = new Float64Array(bandCount);
+  const kIm = new Float64Array(bandCount);
+  const base = new Float64Array(bandCount);
   const sc = new Float64Array(2);
-  for (let i = 0; i < n; i++) {
+  const scale = new Float64Array(bandCount);
+  for (let i = 0; i < bandCount; i++) {
+    const ar = aRe[i] as number;
+    const ai = aIm[i] as number;
+    const br = bRe[i] as number;
+    const bi = bIm[i] as number;
+    base[i] = ar * ar + ai * ai + br * br + bi * bi + TINY;
+    kRe[i] = 2 * (ar * br + ai * bi);
+    kIm[i] = 2 * (ar * bi - ai * br);
+    scale[i] = referencePower ? 1 / (referencePower[i] as number) : 1;
     const w = omega[i] as number;
     sinCos(-w * stepS, sc, 0);
     rotRe[i] = sc[1] as number;
     rotIm[i] = sc[0] as number;
-    sinCos(-w * firstS, sc, 0);
-    phRe[i] = sc[1] as number;
-    phIm[i] = sc[0] as number;
   }
+  // Direct phasors of the reference and crossover points (same recurrence as the band's, kept apart).
+  const special = [refIndex, crossoverIndex];
+  const sRotRe = new Float64Array(2);
+  const sRotIm = new Float64Array(2);
+  const sPhRe = new Float64Array(2);
+  const sPhIm = new Float64Array(2);
+  for (let j = 0; j < 2; j++) {
+    const w = omega[special[j] as number] as number;
+    sinCos(-w * stepS, sc, 0);
+    sRotRe[j] = sc[1] as number;
+    sRotIm[j] = sc[0] as number;
+  }
+  const anchor = (k: number): void => {
+    const d = k === 0 ? firstS : firstS + k * stepS;
+    for (let i = 0; i < bandCount; i++) {
+      sinCos(-(omega[i] as number) * d, sc, 0);
+      const pr = sc[1] as number;
+      const pi = sc[0] as number;
+      const kr = kRe[i] as number;
+      const ki = kIm[i] as number;
+      zRe[i] = kr * pr - ki * pi;
+      zIm[i] = kr * pi + ki * pr;
+    }
+    for (let j = 0; j < 2; j++) {
+      sinCos(-(omega[special[j] as number] as number) * d, sc, 0);
+      sPhRe[j] = sc[1] as number;
+      sPhIm[j] = sc[0] as number;
+    }
+  };
+  const direct = (idx: number, j: number, sign: number): number => {
+    const pr = sPhRe[j] as number;
+    const pi = sPhIm[j] as number;
+    const b = bRe[idx] as number;
+    const c = bIm[idx] as number;
+    const sr = (aRe[idx] as number) + sign * (b * pr - c * pi);
+    const si = (aIm[idx] as number) + sign * (b * pi + c * pr);
+    return sr * sr + si * si + TINY;
+  };
   const delayS = new Float64Array(steps);
   const flatnessSameDb = new Float64Array(steps);
   const flatnessFlippedDb = new Float64Array(steps);
   const levelSameDb = new Float64Array(steps);
   const levelFlippedDb = new Float64Array(steps);
+  anchor(0);
   for (let k = 0; k < steps; k++) {
-    if (k > 0 && k % 64 === 0) {
-      // Re-anchor the recurrence now and then so rounding cannot drift.
-      for (let i = 0; i < n; i++) {
-        sinCos(-(omega[i] as number) * (firstS + k * stepS), sc, 0);
-        phRe[i] = sc[1] as number;
-        phIm[i] = sc[0] as number;
-      }
-    }
-    const refSame = sumPower(input, phRe, phIm, refIndex, 1);
-    const refFlipped = sumPower(input, phRe, phIm, refIndex, -1);
+    // Re-anchor the recurrence now and then so rounding cannot drift.
+    if (k > 0 && k % 64 === 0) anchor(k);
     let minSame = Infinity;
     let maxSame = 0;
     let minFlipped = Infinity;
     let maxFlipped = 0;
     for (let i = 0; i < bandCount; i++) {
-      const pr = phRe[i] as number;
-      const pi = phIm[i] as number;
-      const br = (bRe[i] as number) * pr - (bIm[i] as number) * pi;
-      const bi = (bRe[i] as number) * pi + (bIm[i] as number) * pr;
-      const ar = aRe[i] as number;
-      const ai = aIm[i] as number;
-      let ps = (ar + br) * (ar + br) + (ai + bi) * (ai + bi) + TINY;
-      let pf = (ar - br) * (ar - br) + (ai - bi) * (ai - bi) + TINY;
-      if (referencePower) {
-        const r = referencePower[i] as number;
-        ps /= r;
-        pf /= r;
-      }
+      const zr = zRe[i] as number;
+      const zi = zIm[i] as number;
+      const p = base[i] as number;
+      const f = scale[i] as number;
+      // Rounding can leave a deep null at or below zero here; floor it like the direct form's TINY.
+      const ps = (p + zr > TINY ? p + zr : TINY) * f;
+      const pf = (p - zr > TINY ? p - zr : TINY) * f;
       if (ps < minSame) minSame = ps;
       if (ps > maxSame) maxSame = ps;
       if (pf < minFlipped) minFlipped = pf;
       if (pf > maxFlipped) maxFlipped = pf;
-    }
-    if (referencePower) {
-      flatnessSameDb[k] = LN_POWER_TO_DB * Math.max(Math.log(maxSame), -Math.log(minSame));
-      flatnessFlippedDb[k] = LN_POWER_TO_DB * Math.max(Math.log(maxFlipped), -Math.log(minFlipped));
-    } else {
-      flatnessSameDb[k] = LN_POWER_TO_DB * Math.max(Math.log(maxSame / refSame), Math.log(refSame / minSame));
-      flatnessFlippedDb[k] = LN_POWER_TO_DB * Math.max(Math.log(maxFlipped / refFlipped), Math.log(refFlipped / minFlipped));
-    }
-    levelSameDb[k] = LN_POWER_TO_DB * Math.log(sumPower(input, phRe, phIm, crossoverIndex, 1));
-    levelFlippedDb[k] = LN_POWER_TO_DB * Math.log(sumPower(input, phRe, phIm, crossoverIndex, -1));
-    delayS[k] = firstS + k * stepS;
-    for (let i = 0; i < n; i++) {
-      const pr = phRe[i] as number;
-      const pi = phIm[i] as number;
       const rr = rotRe[i] as number;
       const ri = rotIm[i] as number;
-      phRe[i] = pr * rr - pi * ri;
-      phIm[i] = pr * ri + pi * rr;
+      zRe[i] = zr * rr - zi * ri;
+      zIm[i] = zr * ri + zi * rr;
+    }
+    if (referencePower) {
+      flatnessSameDb[k] = LN_POWER_TO_DB * Math.log(Math.max(maxSame, 1 / minSame));
+      flatnessFlippedDb[k] = LN_POWER_TO_DB * Math.log(Math.max(maxFlipped, 1 / minFlipped));
+    } else {
+      const refSame = direct(refIndex, 0, 1);
+      const refFlipped = direct(refIndex, 0, -1);
+      flatnessSameDb[k] = LN_POWER_TO_DB * Math.log(Math.max(maxSame / refSame, refSame / minSame));
+      flatnessFlippedDb[k] = LN_POWER_TO_DB * Math.log(Math.max(maxFlipped / refFlipped, refFlipped / minFlipped));
+    }
+    if (withLevels) {
+      levelSameDb[k] = LN_POWER_TO_DB * Math.log(direct(crossoverIndex, 1, 1));
+      levelFlippedDb[k] = LN_POWER_TO_DB * Math.log(direct(crossoverIndex, 1, -1));
+    }
+    delayS[k] = firstS + k * stepS;
+    for (let j = 0; j < 2; j++) {
+      const pr = sPhRe[j] as number;
+      const pi = sPhIm[j] as number;
+      const rr = sRotRe[j] as number;
+      const ri = sRotIm[j] as number;
+      sPhRe[j] = pr * rr - pi * ri;
+      sPhIm[j] = pr * ri + pi * rr;
     }
   }
   return { delayS, flatnessSameDb, flatnessFlippedDb, levelSameDb, levelFlippedDb };
+}
+
+/**
+ * Flatness at one relative delay and polarity by the direct form |A ± B·e^(−jωd)|² at every band point (what a
+ * scan approximates to rounding); used to report the chosen setting.
+ */
+export function flatnessAt(input: DelayScanInput, delayS: number, flipped: boolean): number {
+  const { omega, aRe, aIm, bRe, bIm, bandCount, refIndex, referencePower } = input;
+  const sc = new Float64Array(2);
+  const sign = flipped ? -1 : 1;
+  const power = (i: number): number => {
+    sinCos(-(omega[i] as number) * delayS, sc, 0);
+    const pr = sc[1] as number;
+    const pi = sc[0] as number;
+    const b = bRe[i] as number;
+    const c = bIm[i] as number;
+    const sr = (aRe[i] as number) + sign * (b * pr - c * pi);
+    const si = (aIm[i] as number) + sign * (b * pi + c * pr);
+    return sr * sr + si * si + TINY;
+  };
+  let min = Infinity;
+  let max = 0;
+  for (let i = 0; i < bandCount; i++) {
+    let p = power(i);
+    if (referencePower) p /= referencePower[i] as number;
+    if (p < min) min = p;
+    if (p > max) max = p;
+  }
+  if (referencePower) return LN_POWER_TO_DB * Math.max(Math.log(max), -Math.log(min));
+  const ref = power(refIndex);
+  return LN_POWER_TO_DB * Math.max(Math.log(max / ref), Math.log(ref / min));
 }
 
 /** The best (flattest) entry of a scan; ties go to the smaller |delay|. */
@@ -143,17 +210,21 @@ export function bestOfScan(scan: DelayScan): ScanBest {
   return best;
 }
 
-/** Coarse scan, then a fine scan ±1 coarse step around the best; returns the fine best and the coarse scan. */
-export function searchRelativeDelay(input: DelayScanInput, maxDelayS: number, stepS: number): { coarse: DelayScan; best: ScanBest } {
+/**
+ * Coarse scan, then a fine scan ±1 coarse step around the best; returns the fine best (its flatness re-evaluated by
+ * the direct form) and the coarse scan. `withLevels` = false skips the crossover levels (not needed by the sweep).
+ */
+export function searchRelativeDelay(input: DelayScanInput, maxDelayS: number, stepS: number, withLevels = true): { coarse: DelayScan; best: ScanBest } {
   const steps = 2 * Math.round(maxDelayS / stepS) + 1;
   const first = -stepS * Math.round(maxDelayS / stepS);
-  const coarse = scanRelativeDelay(input, first, stepS, steps);
+  const coarse = scanRelativeDelay(input, first, stepS, steps, withLevels);
   const rough = bestOfScan(coarse);
   const fineSteps = 41;
   const fineStep = (2 * stepS) / (fineSteps - 1);
   const lo = Math.max(first, rough.delayS - stepS);
-  const fine = scanRelativeDelay(input, lo, fineStep, fineSteps);
+  const fine = scanRelativeDelay(input, lo, fineStep, fineSteps, false);
   const polished = bestOfScan(fine);
-  const best = polished.flatnessDb <= rough.flatnessDb ? polished : rough;
+  const chosen = polished.flatnessDb <= rough.flatnessDb ? polished : rough;
+  const best = { ...chosen, flatnessDb: flatnessAt(input, chosen.delayS, chosen.flipped) };
   return { coarse, best };
 }
