@@ -148,9 +148,9 @@ export const ROOM_DOCS: ApiRouteDoc[] = [
           room: ROOM,
           listener: { xM: 2.45, yM: 3.7, zM: 1.1 },
           speakers: [
-            { channel: 'L', xM: 1.2, yM: 1.5351, zM: 1.1 },
+            { channel: 'L', xM: 1.2, yM: 1.5349, zM: 1.1 },
             { channel: 'C', xM: 2.45, yM: 1.2, zM: 1.1 },
-            { channel: 'R', xM: 3.7, yM: 1.5351, zM: 1.1 },
+            { channel: 'R', xM: 3.7, yM: 1.5349, zM: 1.1 },
             { channel: 'SL', xM: 0.1008, yM: 4.555, zM: 1.1 },
             { channel: 'SR', xM: 4.7992, yM: 4.555, zM: 1.1 },
           ],
