@@ -39,6 +39,7 @@ export { nearCoincidentModes, type CoincidentPair, type NearCoincidentOptions } 
 export { bonelloCheck, type BonelloOptions, type BonelloResult } from './room/bonello-check';
 export { roomProportionCheck, type ProportionCriterion, type RoomProportionResult } from './room/room-proportion-check';
 export { modalTransfer, type ModalTransferOptions, type ModalTransferResult } from './room/modal-transfer';
+export { modalTransfers, MAX_MODAL_PAIRS, type ModalTransfersOptions, type ModalTransfersResult, type ModalTransferCurve } from './room/modal-transfers';
 export { seatSpreadDb, type SeatSpreadOptions, type SeatSpreadResult } from './room/seat-spread';
 export { modePressureMap, type ModePressureMap, type ModePressureMapOptions } from './room/mode-pressure-map';
 export { quarterWaveNotchHz, type QuarterWaveNotchOptions } from './room/quarter-wave-notch';

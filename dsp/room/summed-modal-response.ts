@@ -1,6 +1,6 @@
 import { LN_POWER_TO_DB } from '../internal/angles';
-import { assertFinite, assertNonNegative } from '../internal/guards';
-import { modalTransfer } from './modal-transfer';
+import { assertFinite, assertNonNegative, positiveFrequencies } from '../internal/guards';
+import { assertInsideRoom, assertRoomAndDamping, modalTransfersValidated } from './modal-transfers';
 import type { PointM, RoomDimensions } from './room-types';
 
 /** One source (a sub) of {@link summedModalResponse}: where it is and what the processor does to it. */
@@ -44,30 +44,33 @@ export interface SummedModalResponseResult {
 const toDb = (re: number, im: number): number => LN_POWER_TO_DB * Math.log(re * re + im * im + 1e-300);
 
 /**
- * Pressure at one receiver from several sources in a rectangular room: each source's modal transfer
+ * Pressure at one receiver from several sources in a rectangular room: each source's modal transfer (modes and
+ * resonance terms computed once for all sources)
  * (Kuttruff, "Room Acoustics", ch. 3, damped by δ = 6.91/T60) times g·(±1)·e^(−jωτ), summed as complex numbers.
  * @example summedModalResponse({ room, sources: [{ positionM: { x: 0.3, y: 0.3, z: 0.3 } }, { positionM: { x: 4.6, y: 0.3, z: 0.3 }, delayMs: 1 }], receiverM: { x: 2.45, y: 3.7, z: 1.1 }, frequencyHz: [40], rt60S: 0.4, temperatureC: 20 }).sum.magnitudeDb
  */
 export function summedModalResponse(options: SummedModalResponseOptions): SummedModalResponseResult {
   const { room, sources, receiverM, rt60S, temperatureC, maxModeHz } = options;
   if (!Array.isArray(sources) || sources.length === 0) throw new RangeError('sources must hold at least one source');
-  const perSource: ComplexPressure[] = [];
-  let frequencyHz: Float64Array | null = null;
-  let modeCount = 0;
-  let sumRe: Float64Array | null = null;
-  let sumIm: Float64Array | null = null;
-  sources.forEach((source, s) => {
+  const amplitudes = sources.map((source, s) => {
     const gainDb = source.gainDb ?? 0;
     const delayMs = source.delayMs ?? 0;
     assertFinite(`sources[${s}].gainDb`, gainDb);
     assertNonNegative(`sources[${s}].delayMs`, delayMs);
-    const t = modalTransfer({ room, sourceM: source.positionM, receiverM, frequencyHz: options.frequencyHz, rt60S, temperatureC, maxModeHz });
-    frequencyHz = t.frequencyHz;
-    modeCount = t.modeCount;
-    const n = t.frequencyHz.length;
-    sumRe ??= new Float64Array(n);
-    sumIm ??= new Float64Array(n);
-    const amplitude = Math.pow(10, gainDb / 20) * (source.invert ? -1 : 1);
+    return { amplitude: Math.pow(10, gainDb / 20) * (source.invert ? -1 : 1), delayMs };
+  });
+  assertRoomAndDamping(room, rt60S);
+  sources.forEach((source, s) => assertInsideRoom(`sources[${s}].positionM`, source.positionM, room));
+  assertInsideRoom('receiverM', receiverM, room);
+  const f = positiveFrequencies('frequencyHz', options.frequencyHz);
+  const t = modalTransfersValidated(room, sources.map((s) => s.positionM), [receiverM], f, rt60S, temperatureC, maxModeHz);
+  const n = f.length;
+  const sumRe = new Float64Array(n);
+  const sumIm = new Float64Array(n);
+  const perSource: ComplexPressure[] = [];
+  sources.forEach((_, s) => {
+    const { amplitude, delayMs } = amplitudes[s]!;
+    const transfer = t.transfers[s]![0]!;
     const re = new Float64Array(n);
     const im = new Float64Array(n);
     const magnitudeDb = new Float64Array(n);
@@ -75,19 +78,19 @@ export function summedModalResponse(options: SummedModalResponseOptions): Summed
       const phase = -2 * Math.PI * (t.frequencyHz[i] as number) * (delayMs / 1000);
       const cr = amplitude * Math.cos(phase);
       const ci = amplitude * Math.sin(phase);
-      const a = t.re[i] as number;
-      const b = t.im[i] as number;
-      re[i] = a * cr - b * ci;
-      im[i] = a * ci + b * cr;
-      magnitudeDb[i] = toDb(re[i] as number, im[i] as number);
-      sumRe[i] = (sumRe[i] as number) + (re[i] as number);
-      sumIm[i] = (sumIm[i] as number) + (im[i] as number);
+      const a = transfer.re[i] as number;
+      const b = transfer.im[i] as number;
+      const r = a * cr - b * ci;
+      const m = a * ci + b * cr;
+      re[i] = r;
+      im[i] = m;
+      magnitudeDb[i] = toDb(r, m);
+      sumRe[i] = (sumRe[i] as number) + r;
+      sumIm[i] = (sumIm[i] as number) + m;
     }
     perSource.push({ re, im, magnitudeDb });
   });
-  const re = sumRe as unknown as Float64Array;
-  const im = sumIm as unknown as Float64Array;
-  const magnitudeDb = new Float64Array(re.length);
-  for (let i = 0; i < re.length; i++) magnitudeDb[i] = toDb(re[i] as number, im[i] as number);
-  return { frequencyHz: frequencyHz as unknown as Float64Array, perSource, sum: { re, im, magnitudeDb }, modeCount };
+  const magnitudeDb = new Float64Array(n);
+  for (let i = 0; i < n; i++) magnitudeDb[i] = toDb(sumRe[i] as number, sumIm[i] as number);
+  return { frequencyHz: t.frequencyHz, perSource, sum: { re: sumRe, im: sumIm, magnitudeDb }, modeCount: t.modeCount };
 }
