@@ -82,11 +82,11 @@ export function ModeTable({ modes, selected, onSelect, schroederHz, coincident }
                     <button
                       type="button"
                       aria-pressed={isSelected}
-                      aria-label={`Map mode (${key}) at ${m.frequencyHz.toFixed(1)} Hz`}
                       onClick={() => onSelect([m.indices[0], m.indices[1], m.indices[2]])}
                       className={`rounded border px-2 py-0.5 text-xs ${isSelected ? 'border-mains bg-mains text-white' : 'border-line hover:bg-[#EFECE4]'}`}
                     >
                       {isSelected ? 'Mapped' : 'Map'}
+                      <span className="sr-only">{` mode (${key}) at ${m.frequencyHz.toFixed(1)} Hz`}</span>
                     </button>
                   </td>
                 </tr>
