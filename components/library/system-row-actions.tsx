@@ -6,6 +6,7 @@ import { useState } from 'react';
 import { Button, buttonClass } from '@/components/ui/button';
 import { ApiError } from '@/lib/client/api';
 import { systemsApi } from '@/lib/hooks/use-systems';
+import { ShareDialog } from '@/components/share/share-dialog';
 import { Modal } from './modal';
 
 interface Props {
@@ -64,6 +65,7 @@ export function SystemRowActions({ id, name, revision, canEdit, deleted }: Props
       </Link>
       {canEdit ? (
         <>
+          <ShareDialog systemId={id} variant="ghost" />
           <Button variant="ghost" className="px-2.5 py-1.5" disabled={busy} onClick={() => void run(() => systemsApi.duplicate(id))} aria-label={`Duplicate ${name}`}>
             Duplicate
           </Button>

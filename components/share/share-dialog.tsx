@@ -11,7 +11,7 @@ import { systemsApi, useShareLinks } from '@/lib/hooks/use-systems';
  * The Share dialog: create read-only links to a saved System, copy them, revoke them.
  * A link shows the last saved revision to anyone who has it (no sign-in), until it is revoked.
  */
-export function ShareDialog({ systemId, buttonLabel = 'Share' }: { systemId: string; buttonLabel?: string }) {
+export function ShareDialog({ systemId, buttonLabel = 'Share', variant = 'secondary' }: { systemId: string; buttonLabel?: string; variant?: 'secondary' | 'ghost' }) {
   const [open, setOpen] = useState(false);
   const links = useShareLinks(open ? systemId : null);
   const [busy, setBusy] = useState(false);
@@ -44,7 +44,7 @@ export function ShareDialog({ systemId, buttonLabel = 'Share' }: { systemId: str
   const items = links.data?.items ?? [];
   return (
     <>
-      <Button variant="secondary" onClick={() => setOpen(true)} data-testid="share-open">
+      <Button variant={variant} className={variant === 'ghost' ? 'px-2.5 py-1.5' : ''} onClick={() => setOpen(true)} data-testid="share-open">
         {buttonLabel}
       </Button>
       <Modal open={open} onClose={() => setOpen(false)} title="Share a read-only link" wide>
