@@ -9,6 +9,7 @@ import { LayoutPanel } from '@/components/layout/layout-panel';
 import { AddToLessonButton } from '@/components/lessons/add-to-lesson-button';
 import { MeasuredPanel } from '@/components/measured/measured-panel';
 import { ModesPanel } from '@/components/modes/modes-panel';
+import { ShareDialog } from '@/components/share/share-dialog';
 import { TimingPanel } from '@/components/timing/timing-panel';
 import { Button, buttonClass } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
@@ -224,6 +225,7 @@ export function SystemEditor({ saved, signedIn }: Props) {
               Settings sheet
             </Link>
           ) : null}
+          {saved && !readOnly ? <ShareDialog systemId={saved.id} /> : null}
           {signedIn ? <AddToLessonButton doc={doc} name={name} panel={panel} /> : null}
           {readOnly ? (
             <Link href={shareUrl()} className={buttonClass('secondary')}>
