@@ -41,9 +41,12 @@ const ch = (label: string, name: string, side: ChannelSide, az: [number, number,
 });
 
 // Front pair: ITU-R BS.775-3 puts it at ±30°; home theaters commonly use ±22°–30° (common practice).
-const L = ch('L', 'Front left', 'left', [30, 22, 30], [0, 0, 10], `${BS775}; ±22°–30° ${HOME}`);
-const R = ch('R', 'Front right', 'right', [30, 22, 30], [0, 0, 10], `${BS775}; ±22°–30° ${HOME}`);
-const C = ch('C', 'Centre', 'centre', [0, 0, 0], [0, 0, 10], BS775);
+// Screen channels commonly sit up to 10° below ear height (under or behind a screen) and up to 10°
+// above it (common practice, from memory).
+const SCREEN_EL: [number, number, number] = [0, -10, 10];
+const L = ch('L', 'Front left', 'left', [30, 22, 30], SCREEN_EL, `${BS775}; ±22°–30° and −10°…10° elevation ${HOME}`);
+const R = ch('R', 'Front right', 'right', [30, 22, 30], SCREEN_EL, `${BS775}; ±22°–30° and −10°…10° elevation ${HOME}`);
+const C = ch('C', 'Centre', 'centre', [0, 0, 0], SCREEN_EL, `${BS775}; −10°…10° elevation ${HOME}`);
 const SL5 = ch('SL', 'Surround left', 'left', [110, 100, 120], [0, 0, 15], BS775);
 const SR5 = ch('SR', 'Surround right', 'right', [110, 100, 120], [0, 0, 15], BS775);
 // 7.x: side surrounds and back surrounds (BS.2051-3 system J ranges, from memory).
