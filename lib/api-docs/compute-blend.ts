@@ -60,9 +60,9 @@ export const BLEND_DOCS: ApiRouteDoc[] = [
         },
         status: 200,
         responseExcerpt: {
-          frequencyHz: [10, 10.1455, 10.293],
-          paths: [{ name: 'mains', magnitudeDb: [-72.2493], phaseDeg: [-20.362] }],
-          sum: { magnitudeDb: [-0.0028], phaseDeg: [125.148], groupDelayMs: [15.2738] },
+          frequencyHz: [10, 10.146, 10.293],
+          paths: [{ name: 'mains', magnitudeDb: [-72.249], phaseDeg: [-20.36] }],
+          sum: { magnitudeDb: [-0.003], phaseDeg: [125.15], groupDelayMs: [15.274] },
           metrics: {
             crossoverHz: 80,
             crossoverSource: 'filters',
@@ -92,7 +92,7 @@ export const BLEND_DOCS: ApiRouteDoc[] = [
         responseExcerpt: { error: { code: 'invalid', message: 'paths.0.filter.order: must be at most 8', issues: [{ path: 'paths.0.filter.order', message: 'must be at most 8' }] } },
       },
     ],
-    notes: ['Limits: at most 16 paths and 4 000 grid points, 10 Hz–24 kHz, bodies up to 256 kB (413 beyond), JSON only (415 otherwise). Unknown fields are refused.', 'Numbers in the answer are rounded: levels to 0.0001 dB, phase to 0.001°, group delay to 0.0001 ms.'],
+    notes: ['Limits: at most 16 paths and 4 000 grid points, 10 Hz–24 kHz, bodies up to 256 kB (413 beyond), JSON only (415 otherwise). Unknown fields are refused.', 'Numbers in the answer are rounded: frequencies to 0.001 Hz, levels to 0.001 dB, phase to 0.01°, group delay to 0.001 ms.'],
   },
   {
     id: 'crossover-sweep',

@@ -104,9 +104,10 @@ export function computeBlend(req: BlendRequest): BlendAnswer {
     };
   }
   return {
-    frequencyHz: rounded(result.frequencyHz, 4),
-    paths: result.paths.map((p) => ({ name: p.name, magnitudeDb: rounded(p.magnitudeDb, 4), phaseDeg: rounded(p.phaseDeg, 3) })),
-    sum: { magnitudeDb: rounded(result.sum.magnitudeDb, 4), phaseDeg: rounded(result.sum.phaseDeg, 3), groupDelayMs: rounded(result.sum.groupDelayMs, 4) },
+    // 0.001 Hz, 0.001 dB, 0.01°, 1 µs: finer than any plot or read-out needs, and short to send.
+    frequencyHz: rounded(result.frequencyHz, 3),
+    paths: result.paths.map((p) => ({ name: p.name, magnitudeDb: rounded(p.magnitudeDb, 3), phaseDeg: rounded(p.phaseDeg, 2) })),
+    sum: { magnitudeDb: rounded(result.sum.magnitudeDb, 3), phaseDeg: rounded(result.sum.phaseDeg, 2), groupDelayMs: rounded(result.sum.groupDelayMs, 3) },
     metrics,
   };
 }
