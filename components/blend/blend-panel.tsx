@@ -194,7 +194,7 @@ export function BlendPanel() {
           ))}
           <p className="text-xs text-ink-faint">
             Distances come from Layout (or the measured distance on Timing). Phase and group delay are drawn relative to the first arrival at the MLP
-            {request ? ` (${(request.nearestM).toFixed(2)} m of air path taken off every path)` : ''}. The subs&apos; own low-frequency roll-off is not modelled yet; the plots show their upper roll-off only.
+            {request ? ` (${(request.nearestM).toFixed(2)} m of air path taken off every path)` : ''}. Each speaker&apos;s natural roll-off comes from its Speaker profile.
           </p>
         </form>
 

@@ -6,7 +6,7 @@ import { arrivalTimeMs, type RolloffChain, type RolloffSpec } from '@/dsp';
 import type { CrossoverSweepAnswerRow } from '@/lib/system-model/blend-compute';
 import type { CrossoverSweepRequest } from '@/lib/validations/compute-blend';
 import type { SpeakerProfile, SystemDocument } from '@/lib/validations/system';
-import { blendMainSpeaker, distanceToSeatM, mainsRolloff, subRolloff } from './index';
+import { blendMainSpeaker, distanceToSeatM, mainsRolloff, subRolloffs } from './index';
 
 type Rankable = Pick<CrossoverSweepAnswerRow, 'flatnessDb' | 'deepestDipDb' | 'crossoverHz'>;
 
@@ -41,7 +41,7 @@ export function sweepRequestFromDocument(
     temperatureC: doc.room.temperatureC,
     // The profiles' roll-offs exactly as the System's paths use them (lib/system-model).
     mainsRolloff: chain(mainsRolloff(options.mainsProfile)) as CrossoverSweepRequest['mainsRolloff'],
-    subRolloff: chain(subRolloff(options.subProfile)),
+    subRolloff: chain(subRolloffs(options.subProfile)),
     pairings: options.pairings,
     candidatesHz: options.candidatesHz,
     mainsGainDb: speaker?.trimDb ?? 0,
