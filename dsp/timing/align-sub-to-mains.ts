@@ -3,7 +3,7 @@ import { speedOfSoundMps } from '../air/speed-of-sound';
 import { RAD_TO_DEG, wrapDeg } from '../internal/angles';
 import { assertPositive } from '../internal/guards';
 import { alignmentGrid, pathComplex } from './alignment-grid';
-import { flatnessAt, scanRelativeDelay, searchRelativeDelay, type DelayScan, type DelayScanInput } from './delay-scan';
+import { flatnessAt, scanRelativeDelay, searchRelativeDelay, type DelayLevels, type DelayScanInput } from './delay-scan';
 import type { AlignmentResult, AlignSubToMainsOptions } from './timing-types';
 
 /** Validated maxDelayMs / stepMs. */
@@ -50,7 +50,7 @@ export function alignmentFromScanInput(input: DelayScanInput, subInverted: boole
   };
 }
 
-function timingWindowMs(scan: DelayScan, flipped: boolean, bestDelayS: number, levelDb: number): [number, number] {
+function timingWindowMs(scan: DelayLevels, flipped: boolean, bestDelayS: number, levelDb: number): [number, number] {
   const level = flipped ? scan.levelFlippedDb : scan.levelSameDb;
   const d = scan.delayS;
   const n = d.length;

@@ -210,15 +210,76 @@ export function bestOfScan(scan: DelayScan): ScanBest {
   return best;
 }
 
+/** Every band point whose index is a multiple of this (plus the band's last point) bounds the flatness from below. */
+const BOUND_STRIDE = 4;
+
+/** The scan input restricted to a subset of the band (then the reference and crossover points). */
+function subsetInput(input: DelayScanInput, stride: number): DelayScanInput {
+  const picks: number[] = [];
+  for (let i = 0; i < input.bandCount; i += stride) picks.push(i);
+  if (picks[picks.length - 1] !== input.bandCount - 1) picks.push(input.bandCount - 1);
+  const bandCount = picks.length;
+  picks.push(input.refIndex, input.crossoverIndex);
+  const take = (a: Float64Array): Float64Array => Float64Array.from(picks, (i) => a[i] as number);
+  return {
+    omega: take(input.omega),
+    aRe: take(input.aRe),
+    aIm: take(input.aIm),
+    bRe: take(input.bRe),
+    bIm: take(input.bIm),
+    bandCount,
+    refIndex: bandCount,
+    crossoverIndex: bandCount + 1,
+    referencePower: input.referencePower ? Float64Array.from(picks.slice(0, bandCount), (i) => input.referencePower?.[i] as number) : undefined,
+  };
+}
+
+/** The coarse scan's delays and the sum's level at the crossover for both polarities (what Timing plots). */
+export interface DelayLevels {
+  readonly delayS: Float64Array;
+  readonly levelSameDb: Float64Array;
+  readonly levelFlippedDb: Float64Array;
+}
+
 /**
- * Coarse scan, then a fine scan ±1 coarse step around the best; returns the fine best (its flatness re-evaluated by
- * the direct form) and the coarse scan. `withLevels` = false skips the crossover levels (not needed by the sweep).
+ * Coarse scan (stepS over ±maxDelayS), then a fine scan ±1 coarse step around the coarse best; returns the fine best
+ * (its flatness re-evaluated by the direct form) and the coarse delays with the crossover levels.
+ *
+ * The coarse best is found by branch and bound with the same answer as evaluating every coarse delay: flatness (the
+ * largest |level − reference| over the band) is at least the same quantity over a subset of the band, so every delay
+ * and polarity first gets that lower bound from every 4th band point; then, in increasing order of the bound, the
+ * full band is evaluated until the bound exceeds the best full value found (+1e-9 dB, the tie tolerance).
+ * `withLevels` = false skips the crossover levels (the sweep does not need them).
  */
-export function searchRelativeDelay(input: DelayScanInput, maxDelayS: number, stepS: number, withLevels = true): { coarse: DelayScan; best: ScanBest } {
-  const steps = 2 * Math.round(maxDelayS / stepS) + 1;
-  const first = -stepS * Math.round(maxDelayS / stepS);
-  const coarse = scanRelativeDelay(input, first, stepS, steps, withLevels);
-  const rough = bestOfScan(coarse);
+export function searchRelativeDelay(input: DelayScanInput, maxDelayS: number, stepS: number, withLevels = true): { coarse: DelayLevels; best: ScanBest } {
+  const half = Math.round(maxDelayS / stepS);
+  const steps = 2 * half + 1;
+  const first = -stepS * half;
+  const bounds = scanRelativeDelay(subsetInput(input, BOUND_STRIDE), first, stepS, steps, withLevels);
+  const order = new Int32Array(2 * steps);
+  const bound = new Float64Array(2 * steps);
+  for (let k = 0; k < steps; k++) {
+    order[2 * k] = 2 * k;
+    order[2 * k + 1] = 2 * k + 1;
+    const same = bounds.flatnessSameDb[k] as number;
+    const flipped = bounds.flatnessFlippedDb[k] as number;
+    bound[2 * k] = Number.isNaN(same) ? -Infinity : same;
+    bound[2 * k + 1] = Number.isNaN(flipped) ? -Infinity : flipped;
+  }
+  order.sort((p, q) => (bound[p] as number) - (bound[q] as number) || p - q);
+  // Same rule as bestOfScan: strictly flatter by more than 1e-9 dB, or as flat within 1e-9 dB and a smaller |delay|.
+  let rough: ScanBest = { index: 0, flipped: false, delayS: bounds.delayS[0] as number, flatnessDb: Infinity };
+  for (let j = 0; j < order.length; j++) {
+    const code = order[j] as number;
+    if ((bound[code] as number) > rough.flatnessDb + 1e-9) break;
+    const k = code >> 1;
+    const flipped = (code & 1) === 1;
+    const d = bounds.delayS[k] as number;
+    const value = flatnessAt(input, d, flipped);
+    if (value < rough.flatnessDb - 1e-9 || (Math.abs(value - rough.flatnessDb) <= 1e-9 && (Math.abs(d) < Math.abs(rough.delayS) || (Math.abs(d) === Math.abs(rough.delayS) && (k < rough.index || (k === rough.index && !flipped)))))) {
+      rough = { index: k, flipped, delayS: d, flatnessDb: value };
+    }
+  }
   const fineSteps = 41;
   const fineStep = (2 * stepS) / (fineSteps - 1);
   const lo = Math.max(first, rough.delayS - stepS);
@@ -226,5 +287,5 @@ export function searchRelativeDelay(input: DelayScanInput, maxDelayS: number, st
   const polished = bestOfScan(fine);
   const chosen = polished.flatnessDb <= rough.flatnessDb ? polished : rough;
   const best = { ...chosen, flatnessDb: flatnessAt(input, chosen.delayS, chosen.flipped) };
-  return { coarse, best };
+  return { coarse: { delayS: bounds.delayS, levelSameDb: bounds.levelSameDb, levelFlippedDb: bounds.levelFlippedDb }, best };
 }
