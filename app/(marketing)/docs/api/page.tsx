@@ -50,7 +50,7 @@ export default function ApiDocsPage() {
           Every error has the same shape, with the status 400 (invalid), 401 (sign in), 403 (your role does not allow it), 404 (not found, also for what you may not see), 409
           (revision conflict), 413 (too large), 415 (not JSON), 429 (too many attempts) or 503 (database unavailable; retry).
         </p>
-        <pre className="num mt-2 overflow-x-auto rounded bg-[#FAF9F5] p-3 text-xs">
+        <pre tabIndex={0} className="num mt-2 overflow-x-auto rounded bg-[#FAF9F5] p-3 text-xs">
           {pretty({ error: { code: 'invalid', message: 'paths.1.filter.order: Linkwitz–Riley order must be 2, 4 or 8', issues: [{ path: 'paths.1.filter.order', message: 'Linkwitz–Riley order must be 2, 4 or 8' }] } })}
         </pre>
       </section>
@@ -84,11 +84,11 @@ export default function ApiDocsPage() {
             <div key={ex.title} className="mt-3 grid gap-3 md:grid-cols-2">
               <div>
                 <h3 className="text-sm font-semibold">Example: {ex.title}</h3>
-                <pre className="num mt-1 max-h-96 overflow-auto rounded border border-line bg-white p-3 text-xs">{pretty(ex.request)}</pre>
+                <pre tabIndex={0} className="num mt-1 max-h-96 overflow-auto rounded border border-line bg-white p-3 text-xs">{pretty(ex.request)}</pre>
               </div>
               <div>
                 <h3 className="text-sm font-semibold">Answer ({ex.status}), excerpt</h3>
-                <pre className="num mt-1 max-h-96 overflow-auto rounded border border-line bg-white p-3 text-xs">{pretty(ex.responseExcerpt)}</pre>
+                <pre tabIndex={0} className="num mt-1 max-h-96 overflow-auto rounded border border-line bg-white p-3 text-xs">{pretty(ex.responseExcerpt)}</pre>
               </div>
             </div>
           ))}
