@@ -99,7 +99,7 @@ export function NumberField({ label, value, onChange, unit, min, max, step = 1, 
             setFocused(false);
           }}
           onChange={(e) => commit(e.target.value)}
-          className={`num w-24 rounded-md border bg-white px-2 py-1.5 text-sm ${message ? 'border-fail' : 'border-line'}`}
+          className={`num w-24 rounded-md border bg-white px-2 py-1.5 text-sm disabled:cursor-not-allowed disabled:border-dashed disabled:bg-[#F1EFE9] disabled:text-ink-soft ${message ? 'border-fail' : 'border-line'}`}
         />
         {slider && min !== undefined && max !== undefined ? (
           <input
@@ -116,7 +116,7 @@ export function NumberField({ label, value, onChange, unit, min, max, step = 1, 
               setLocalError(null);
               onChange(fromShown(n));
             }}
-            className="min-w-0 flex-1 accent-[#0F766E]"
+            className="min-w-0 flex-1 accent-[#0F766E] disabled:opacity-50"
           />
         ) : null}
       </div>

@@ -58,6 +58,17 @@ export function mainsPath(doc: SystemDocument, speaker: Speaker): PathSpec {
   };
 }
 
+/**
+ * A sub's gainDb is its trim relative to level-matched subs: at 0 dB all the System's sub units
+ * together match the mains in band, as they do after the processor's level calibration (common
+ * practice). So each unit is modelled at −20·log10(total units) (coherent at low frequency), and a
+ * sub of `count` units adds +20·log10(count).
+ */
+export function subLevelMatchDb(doc: SystemDocument, sub: Sub): number {
+  const totalUnits = doc.subs.reduce((n, s) => n + s.count, 0) || 1;
+  return 20 * Math.log10(sub.count) - 20 * Math.log10(totalUnits);
+}
+
 /** One path per sub: low-pass at the crossover, the sub's low and upper roll-offs, gain, delay, polarity, distance. */
 export function subPath(doc: SystemDocument, sub: Sub): PathSpec {
   const bm = doc.bassManagement;
@@ -65,7 +76,7 @@ export function subPath(doc: SystemDocument, sub: Sub): PathSpec {
     name: sub.name,
     filter: { family: bm.subLowpass.family, order: bm.subLowpass.order, response: 'lowpass', cornerHz: bm.crossoverHz },
     rolloff: subRolloffs(profileById(doc, sub.profileId)),
-    gainDb: sub.gainDb + 20 * Math.log10(sub.count),
+    gainDb: sub.gainDb + subLevelMatchDb(doc, sub),
     delayMs: sub.delayMs,
     invert: sub.invert,
     distanceM: distanceToSeatM(doc, sub),

@@ -8,7 +8,7 @@ import { alignSubToMains, alignSubs, arrivalTimeMs, speedOfSoundMps, type PathSp
 import { wrapDeg } from '@/dsp/internal/angles';
 import type { TimingRequest } from '@/lib/validations/compute-blend';
 import type { SystemDocument } from '@/lib/validations/system';
-import { blendMainSpeaker, distanceToSeatM, mainsRolloff, profileById, subRolloffs } from './index';
+import { blendMainSpeaker, distanceToSeatM, mainsRolloff, profileById, subLevelMatchDb, subRolloffs } from './index';
 import { roundTo } from './blend-compute';
 
 export interface TimingArrival {
@@ -166,7 +166,7 @@ export function timingRequestFromDocument(doc: SystemDocument, channel?: string)
         name: s.name,
         distanceM: roundTo(distanceToSeatM(doc, s), 4),
         delayMs: s.delayMs,
-        gainDb: s.gainDb + 20 * Math.log10(s.count),
+        gainDb: Math.max(-30, Math.min(30, s.gainDb + subLevelMatchDb(doc, s))),
         invert: s.invert,
         rolloff: asChain(subRolloffs(profileById(doc, s.profileId))),
       };
