@@ -160,9 +160,11 @@ export function scanRelativeDelay(input: DelayScanInput, firstS: number, stepS: 
  * Flatness at one relative delay and polarity by the direct form |A ± B·e^(−jωd)|² at every band point (what a
  * scan approximates to rounding); used to report the chosen setting.
  */
+const FLATNESS_SC = new Float64Array(2);
+
 export function flatnessAt(input: DelayScanInput, delayS: number, flipped: boolean): number {
   const { omega, aRe, aIm, bRe, bIm, bandCount, refIndex, referencePower } = input;
-  const sc = new Float64Array(2);
+  const sc = FLATNESS_SC;
   const sign = flipped ? -1 : 1;
   const power = (i: number): number => {
     sinCos(-(omega[i] as number) * delayS, sc, 0);
@@ -247,7 +249,7 @@ export interface DelayLevels {
  *
  * The coarse best is found by branch and bound with the same answer as evaluating every coarse delay: flatness (the
  * largest |level − reference| over the band) is at least the same quantity over a subset of the band, so every delay
- * and polarity first gets that lower bound from every 4th band point; then, in increasing order of the bound, the
+ * and polarity first gets that lower bound from every 4th band point; then, starting from the smallest bound, the
  * full band is evaluated until the bound exceeds the best full value found (+1e-9 dB, the tie tolerance).
  * `withLevels` = false skips the crossover levels (the sweep does not need them).
  */
@@ -256,29 +258,32 @@ export function searchRelativeDelay(input: DelayScanInput, maxDelayS: number, st
   const steps = 2 * half + 1;
   const first = -stepS * half;
   const bounds = scanRelativeDelay(subsetInput(input, BOUND_STRIDE), first, stepS, steps, withLevels);
-  const order = new Int32Array(2 * steps);
   const bound = new Float64Array(2 * steps);
+  let start = 0;
   for (let k = 0; k < steps; k++) {
-    order[2 * k] = 2 * k;
-    order[2 * k + 1] = 2 * k + 1;
     const same = bounds.flatnessSameDb[k] as number;
     const flipped = bounds.flatnessFlippedDb[k] as number;
     bound[2 * k] = Number.isNaN(same) ? -Infinity : same;
     bound[2 * k + 1] = Number.isNaN(flipped) ? -Infinity : flipped;
+    if ((bound[2 * k] as number) < (bound[start] as number)) start = 2 * k;
+    if ((bound[2 * k + 1] as number) < (bound[start] as number)) start = 2 * k + 1;
   }
-  order.sort((p, q) => (bound[p] as number) - (bound[q] as number) || p - q);
-  // Same rule as bestOfScan: strictly flatter by more than 1e-9 dB, or as flat within 1e-9 dB and a smaller |delay|.
+  // Same rule as bestOfScan: strictly flatter by more than 1e-9 dB, or as flat within 1e-9 dB and a smaller |delay|
+  // (equal |delay|: the earlier delay, then the same polarity). Start from the smallest bound, then every delay and
+  // polarity whose bound could still win.
   let rough: ScanBest = { index: 0, flipped: false, delayS: bounds.delayS[0] as number, flatnessDb: Infinity };
-  for (let j = 0; j < order.length; j++) {
-    const code = order[j] as number;
-    if ((bound[code] as number) > rough.flatnessDb + 1e-9) break;
+  const consider = (code: number): void => {
     const k = code >> 1;
     const flipped = (code & 1) === 1;
     const d = bounds.delayS[k] as number;
     const value = flatnessAt(input, d, flipped);
-    if (value < rough.flatnessDb - 1e-9 || (Math.abs(value - rough.flatnessDb) <= 1e-9 && (Math.abs(d) < Math.abs(rough.delayS) || (Math.abs(d) === Math.abs(rough.delayS) && (k < rough.index || (k === rough.index && !flipped)))))) {
-      rough = { index: k, flipped, delayS: d, flatnessDb: value };
-    }
+    const tie = Math.abs(value - rough.flatnessDb) <= 1e-9;
+    const closer = Math.abs(d) < Math.abs(rough.delayS) || (Math.abs(d) === Math.abs(rough.delayS) && (k < rough.index || (k === rough.index && !flipped && rough.flipped)));
+    if (value < rough.flatnessDb - 1e-9 || (tie && closer)) rough = { index: k, flipped, delayS: d, flatnessDb: value };
+  };
+  consider(start);
+  for (let code = 0; code < 2 * steps; code++) {
+    if (code !== start && (bound[code] as number) <= rough.flatnessDb + 1e-9) consider(code);
   }
   const fineSteps = 41;
   const fineStep = (2 * stepS) / (fineSteps - 1);
