@@ -29,6 +29,7 @@ export function AddToLessonButton({ doc, name, panel }: { doc: SystemDocument; n
     setError(null);
     setAdded(null);
     setStepTitle(name);
+    setLessons(null);
     dialogRef.current?.showModal();
     try {
       const { items } = await apiFetch<{ items: AppLessonSummary[] }>('/api/v1/lessons');
@@ -65,7 +66,7 @@ export function AddToLessonButton({ doc, name, panel }: { doc: SystemDocument; n
     }
   }
 
-  const canAdd = !busy && stepTitle.trim() && (choice !== NEW || newTitle.trim());
+  const canAdd = !busy && lessons !== null && stepTitle.trim() && (choice !== NEW || newTitle.trim());
 
   return (
     <>
@@ -102,11 +103,13 @@ export function AddToLessonButton({ doc, name, panel }: { doc: SystemDocument; n
                 </label>
               ))}
             </div>
-            <label className="flex items-center gap-2">
-              <input type="radio" name="lesson" value={NEW} checked={choice === NEW} onChange={() => setChoice(NEW)} />
-              <span>A new Lesson</span>
-            </label>
-            {choice === NEW ? (
+            {lessons !== null ? (
+              <label className="flex items-center gap-2">
+                <input type="radio" name="lesson" value={NEW} checked={choice === NEW} onChange={() => setChoice(NEW)} />
+                <span>A new Lesson</span>
+              </label>
+            ) : null}
+            {lessons !== null && choice === NEW ? (
               <label className="ml-6 flex flex-col gap-1">
                 <span className="text-xs text-ink-soft">New Lesson title</span>
                 <input value={newTitle} maxLength={200} onChange={(e) => setNewTitle(e.target.value)} className="rounded-md border border-line px-3 py-1.5" />

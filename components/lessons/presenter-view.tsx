@@ -1,7 +1,7 @@
 'use client';
 
 import Link from 'next/link';
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { describeSweep } from '@/lib/system-model/lesson-sweep';
 import type { AppLessonStep } from '@/lib/data/lessons';
 import { StepPlot } from './step-plot';
@@ -51,6 +51,8 @@ export function PresenterView({ lessonId, title, steps, initialStep }: Props) {
   }, []);
 
   const { toggle, restart } = player;
+  // The talking points do not change while a sweep plays: render them once per Step, not per frame.
+  const points = useMemo(() => (step ? <TalkingPoints text={step.points} className="text-2xl leading-snug" /> : null), [step]);
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
       if (e.altKey || e.ctrlKey || e.metaKey) return;
@@ -102,7 +104,7 @@ export function PresenterView({ lessonId, title, steps, initialStep }: Props) {
         {showPoints ? (
           <aside aria-label="Talking points (presenter only)" className="w-[30%] max-w-[620px] min-w-[320px] shrink-0 overflow-y-auto border-l border-line bg-white px-8 py-8" data-testid="presenter-points">
             <h2 className="mb-4 text-lg font-semibold tracking-wide text-ink-soft uppercase">Talking points</h2>
-            <TalkingPoints text={step.points} className="text-2xl leading-snug" />
+            {points}
             {steps[index + 1] ? <p className="mt-8 border-t border-line pt-4 text-lg text-ink-soft">Next: {steps[index + 1]?.title}</p> : null}
           </aside>
         ) : null}

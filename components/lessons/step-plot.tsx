@@ -24,8 +24,12 @@ declare global {
   }
 }
 
-const fmt = (v: number | null | undefined, digits = 1, unit = '') =>
-  v == null || !Number.isFinite(v) ? '—' : `${v < 0 ? '\u2212' : ''}${Math.abs(v).toFixed(digits)}${unit ? `\u2009${unit}` : ''}`;
+const fmt = (v: number | null | undefined, digits = 1, unit = '') => {
+  if (v == null || !Number.isFinite(v)) return '—';
+  const text = Math.abs(v).toFixed(digits);
+  // No "−0.0": a value that rounds to zero has no sign.
+  return `${v < 0 && Number(text) !== 0 ? '\u2212' : ''}${text}${unit ? `\u2009${unit}` : ''}`;
+};
 
 /** Levels below −60 dB read as a null (an exact cancellation is −300 dB in dsp/). */
 const fmtDb = (v: number) => (Number.isFinite(v) && v < -60 ? 'null (below −60 dB)' : `${v > 0.05 ? '+' : ''}${fmt(v, 1, 'dB')}`);
@@ -77,6 +81,19 @@ export function StepPlot({ step, progress = 0, emphasis = 'default', compact = f
     readouts.push({ id: 'distances', label: 'Distances to the MLP', value: `mains ${frame.mainsDistanceM.toFixed(2)} m · sub ${frame.subDistancesM.map((d) => d.toFixed(2)).join(', ')} m` });
   }
 
+  const readoutList = readouts.length ? (
+        <dl className={`grid gap-x-6 gap-y-1 ${big ? 'grid-cols-3 text-2xl' : 'grid-cols-1 text-sm sm:grid-cols-3'}`}>
+          {readouts.map((r) => (
+            <div key={r.id} className="flex flex-col">
+              <dt className="text-ink-soft">{r.label}</dt>
+              <dd className="num font-semibold" data-testid={`readout-${r.id}`}>
+                {r.value}
+              </dd>
+            </div>
+          ))}
+        </dl>
+  ) : null;
+
   return (
     <div className="flex flex-col gap-3" data-testid="step-plot">
       {sweep && value ? (
@@ -84,6 +101,7 @@ export function StepPlot({ step, progress = 0, emphasis = 'default', compact = f
           {formatSweepValue(sweep, value)}
         </p>
       ) : null}
+      {big ? readoutList : null}
       <FrequencyPlot
         title={`${step.title}: level of mains, sub and sum`}
         quantity="magnitude"
@@ -96,21 +114,10 @@ export function StepPlot({ step, progress = 0, emphasis = 'default', compact = f
         references={references}
         markers={markers}
         emphasis={emphasis}
-        aspect={compact ? 0.45 : big ? 0.42 : 0.5}
+        aspect={compact ? 0.45 : big ? (phaseTraces.length ? 0.3 : 0.4) : 0.5}
       />
-      {phaseTraces.length ? <FrequencyPlot title={`${step.title}: phase`} quantity="phase" frequencyHz={result.frequencyHz} minHz={FRAME_START_HZ} maxHz={1000} traces={phaseTraces} emphasis={emphasis} aspect={0.3} /> : null}
-      {readouts.length ? (
-        <dl className={`grid gap-x-6 gap-y-1 ${big ? 'grid-cols-3 text-2xl' : 'grid-cols-1 text-sm sm:grid-cols-3'}`}>
-          {readouts.map((r) => (
-            <div key={r.id} className="flex flex-col">
-              <dt className="text-ink-soft">{r.label}</dt>
-              <dd className="num font-semibold" data-testid={`readout-${r.id}`}>
-                {r.value}
-              </dd>
-            </div>
-          ))}
-        </dl>
-      ) : null}
+      {phaseTraces.length ? <FrequencyPlot title={`${step.title}: phase`} quantity="phase" frequencyHz={result.frequencyHz} minHz={FRAME_START_HZ} maxHz={1000} traces={phaseTraces} emphasis={emphasis} aspect={big ? 0.18 : 0.3} /> : null}
+      {!big ? readoutList : null}
       {step.panel === 'modes' && modes.length ? (
         <p className={big ? 'text-xl text-ink-soft' : 'text-xs text-ink-soft'}>Dashed grey lines: the room&apos;s first axial modes ({modes.slice(0, 8).map((m) => `${m.hz.toFixed(0)} Hz`).join(', ')}).</p>
       ) : null}

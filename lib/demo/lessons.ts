@@ -28,7 +28,7 @@ function classroom(change: { slope?: Slope; invert?: boolean; subDistanceM?: num
     profiles: base.profiles.map((p) =>
       p.kind === 'main'
         ? { ...p, id: 'classroom-main', name: 'Classroom main (no natural roll-off; invented)', lowRolloff: { kind: 'none' } }
-        : { ...p, id: 'classroom-sub', name: 'Classroom sub (no natural roll-off; invented)', highRolloff: { kind: 'none' } },
+        : { ...p, id: 'classroom-sub', name: 'Classroom sub (no natural roll-off; invented)', lowRolloff: { kind: 'none' }, highRolloff: { kind: 'none' } },
     ),
     speakers: base.speakers.map((s) => ({ ...s, profileId: 'classroom-main', distanceOverrideM: 3.0, trimDb: 0 })),
     subs: base.subs.map((s) => ({ ...s, profileId: 'classroom-sub', distanceOverrideM: change.subDistanceM ?? 3.0, gainDb: 0, delayMs: 0, invert: change.invert ?? false })),
