@@ -10,6 +10,8 @@ import { migration as createPasswordResetTokens } from './20261201000800-create-
 import { migration as createRateLimits } from './20261201000900-create-rate-limits';
 import { migration as createDevMessages } from './20261201001000-create-dev-messages';
 import { migration as createSpeakerProfiles } from './20261201002000-create-speaker-profiles';
+import { migration as createLessons } from './20261201004000-create-lessons';
+import { migration as createLessonSteps } from './20261201004100-create-lesson-steps';
 import { migration as createMeasurements } from './20261201003000-create-measurements';
 
 /** Every migration in the order it runs; a new migration is added at the end. */
@@ -25,5 +27,7 @@ export const migrations: Migration[] = [
   createRateLimits,
   createDevMessages,
   createSpeakerProfiles,
+  createLessons,
+  createLessonSteps,
   createMeasurements,
 ];

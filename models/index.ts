@@ -9,6 +9,8 @@ import { SystemRevision } from './system-revision';
 import { User } from './user';
 import { Workspace } from './workspace';
 import { SpeakerProfileRow } from './speaker-profile';
+import { Lesson } from './lesson';
+import { LessonStep } from './lesson-step';
 import { Measurement } from './measurement';
 
 export { DevMessage, Invitation, Membership, PasswordResetToken, ShareLink, System, SystemRevision, User, Workspace };
@@ -17,6 +19,8 @@ export type { WorkspaceRole } from './membership';
 export type { ShareTarget } from './share-link';
 export { SpeakerProfileRow };
 export type { SpeakerProfileKind } from './speaker-profile';
+
+export { Lesson, LessonStep };
 
 export { Measurement };
 export type { MeasurementData } from './measurement';
@@ -45,6 +49,13 @@ export function initModels(sequelize: Sequelize): void {
   SpeakerProfileRow.initModel(sequelize);
   SpeakerProfileRow.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
   SpeakerProfileRow.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  Lesson.initModel(sequelize);
+  LessonStep.initModel(sequelize);
+  Lesson.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  Lesson.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' });
+  Lesson.belongsTo(User, { foreignKey: 'lastEditorId', as: 'lastEditor' });
+  Lesson.hasMany(LessonStep, { foreignKey: 'lessonId', as: 'steps' });
+  LessonStep.belongsTo(Lesson, { foreignKey: 'lessonId', as: 'lesson' });
   Measurement.initModel(sequelize);
   Measurement.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
   Measurement.belongsTo(System, { foreignKey: 'systemId', as: 'system' });

@@ -7,10 +7,12 @@ import { ensureMeasurement } from '../lib/data/measurements';
 import { parseMeasurementText } from '../lib/measurements/parse-measurement';
 import { demoMeasurementFiles } from './demo-measurements';
 import { ensureProfile } from '../lib/data/profiles';
+import { ensureLesson } from '../lib/data/lessons';
 import { createSystem } from '../lib/data/systems';
 import { createUserWithWorkspace, findUserByEmail } from '../lib/data/users';
 import { addMember } from '../lib/data/workspaces';
 import { DEMO_PROFILES } from '../lib/demo/profiles';
+import { demoLesson } from '../lib/demo/lessons';
 import { juniperLaneDocument, lindenStreetDocument } from '../lib/demo/systems';
 import { profileFieldsSchema } from '../lib/validations/profile';
 import { systemDocumentSchema } from '../lib/validations/system';
@@ -73,5 +75,10 @@ export async function seedDemo(): Promise<string> {
   }
   const measurementsSummary = measurementsAdded ? `added ${measurementsAdded} invented measurements` : 'measurements already present';
 
-  return `workspace "${DEMO_WORKSPACE}" ready; ${made.length ? `created ${made.join(', ')}` : 'Systems already present'}; ${profilesAdded ? `added ${profilesAdded} Speaker profiles` : 'Speaker profiles already present'}; ${measurementsSummary}`;
+  // The invented demo Lesson "Why the sub and mains cancel" (once, by title).
+  const lesson = demoLesson();
+  const lessonAdded = await ensureLesson(workspace.id, owner.id, lesson);
+  const lessonSummary = lessonAdded ? `added the Lesson "${lesson.title}"` : 'demo Lesson already present';
+
+  return `workspace "${DEMO_WORKSPACE}" ready; ${made.length ? `created ${made.join(', ')}` : 'Systems already present'}; ${profilesAdded ? `added ${profilesAdded} Speaker profiles` : 'Speaker profiles already present'}; ${measurementsSummary}; ${lessonSummary}`;
 }

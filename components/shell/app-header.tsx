@@ -6,6 +6,7 @@ import { SignOutButton } from './sign-out-button';
 const NAV = [
   { href: '/library', label: 'Library' },
   { href: '/team', label: 'Team' },
+  { href: '/lessons', label: 'Lessons' },
 ];
 
 /** The signed-in shell's header; anonymous visitors get the editor and a sign-in link. */
