@@ -100,22 +100,21 @@ export function modalTransfersValidated(
   const sourceShapes = sources.map(shapes);
   const receiverShapes = receivers.map(shapes);
   const pairs = sources.length * receivers.length;
-  // Couplings ψ(rs)ψ(rr)/Λ, laid out [mode][pair]; mode 0 is the (0,0,0) term (coupling 1, ωn² = 0).
+  // Couplings ψ(rs)ψ(rr)/Λ, laid out [pair][mode]; mode 0 is the (0,0,0) term (coupling 1, ωn² = 0).
   const coupling = new Float64Array(count * pairs);
   const omegaSq = new Float64Array(count);
-  for (let p = 0; p < pairs; p++) coupling[p] = 1;
+  for (let p = 0; p < pairs; p++) coupling[p * count] = 1;
   for (let m = 0; m < modes.length; m++) {
     const mode = modes[m];
     if (mode === undefined) continue;
     const [nl, nw, nh] = mode.indices;
     const lambda = (nl > 0 ? 0.5 : 1) * (nw > 0 ? 0.5 : 1) * (nh > 0 ? 0.5 : 1);
-    const row = (m + 1) * pairs;
     let p = 0;
     for (const s of sourceShapes) {
       const psiS = (s.l[nl] as number) * (s.w[nw] as number) * (s.h[nh] as number);
       for (const r of receiverShapes) {
         const psiR = (r.l[nl] as number) * (r.w[nw] as number) * (r.h[nh] as number);
-        coupling[row + p] = (psiS * psiR) / lambda;
+        coupling[p * count + m + 1] = (psiS * psiR) / lambda;
         p++;
       }
     }
@@ -132,31 +131,32 @@ export function modalTransfersValidated(
     const o = 3 * n * p;
     curves.push({ re: block.subarray(o, o + n), im: block.subarray(o + n, o + 2 * n), magnitudeDb: block.subarray(o + 2 * n, o + 3 * n) });
   }
-  const sr = new Float64Array(pairs);
-  const si = new Float64Array(pairs);
+  // Per frequency: the resonance terms a/((ωn² − ω²)² + b²) and b/(…) of every mode once, then one dot product per pair.
+  const ka = new Float64Array(count);
+  const kb = new Float64Array(count);
   for (let i = 0; i < n; i++) {
     const omega = 2 * Math.PI * (f[i] as number);
     const w2 = omega * omega;
     const b = 2 * delta * omega;
     const b2 = b * b;
-    sr.fill(0);
-    si.fill(0);
     for (let m = 0; m < count; m++) {
       const a = (omegaSq[m] as number) - w2;
       const k = 1 / (a * a + b2);
-      const ka = k * a;
-      const kb = k * b;
-      const row = m * pairs;
-      for (let p = 0; p < pairs; p++) {
-        const cp = coupling[row + p] as number;
-        sr[p] = (sr[p] as number) + cp * ka;
-        si[p] = (si[p] as number) - cp * kb;
-      }
+      ka[m] = k * a;
+      kb[m] = k * b;
     }
-    // Multiply by jω·ρc²/V.
     for (let p = 0; p < pairs; p++) {
-      const pr = -(si[p] as number) * omega * scale;
-      const pi = (sr[p] as number) * omega * scale;
+      const row = p * count;
+      let sr = 0;
+      let si = 0;
+      for (let m = 0; m < count; m++) {
+        const cp = coupling[row + m] as number;
+        sr += cp * (ka[m] as number);
+        si -= cp * (kb[m] as number);
+      }
+      // Multiply by jω·ρc²/V.
+      const pr = -si * omega * scale;
+      const pi = sr * omega * scale;
       const curve = curves[p] as ModalTransferCurve;
       curve.re[i] = pr;
       curve.im[i] = pi;
