@@ -35,6 +35,7 @@ export async function benchUiSweep(baseUrl = process.env.BENCH_URL ?? 'http://12
     await page.goto(`/lessons/${demo.id}/present?step=${step.position}`, { timeout: 90_000 });
     await page.getByTestId('presenter-view').waitFor({ timeout: 90_000 });
     await page.getByTestId('sweep-value').waitFor();
+    await page.waitForLoadState('networkidle'); // hydrated: the keyboard handler is attached
     const run = Math.min(seconds, step.sweep.durationS - 0.5);
     await page.keyboard.press('Space');
     await page.waitForTimeout(300); // let the first frames settle
