@@ -155,7 +155,7 @@ export const LESSON_DOCS: ApiRouteDoc[] = [
       { name: 'url', type: 'string', description: 'The student page.' },
       { name: 'revokedAt', type: 'string | null', description: 'Set once revoked.' },
     ],
-    examples: [{ title: 'A student link', request: null, status: 201, responseExcerpt: { token: 'base64url', url: 'http://127.0.0.1:3000/s/lesson/…', revokedAt: null } }],
+    examples: [{ title: 'A student link', request: null, status: 201, responseExcerpt: { token: 'base64url', url: 'http://127.0.0.1:3000/s/…', revokedAt: null } }],
     notes: [ERRORS],
   },
 ];

@@ -261,7 +261,7 @@ export async function reorderSteps(caller: Caller, id: string, input: { revision
 
 /** The public address of a lesson's share link (the student view). */
 export function lessonShareUrl(token: string): string {
-  return `${config.appUrl}/s/lesson/${token}`;
+  return `${config.appUrl}/s/${token}`;
 }
 
 const toLink = (l: ShareLink): AppLessonShareLink => ({ token: l.token, url: lessonShareUrl(l.token), lessonId: l.targetId, createdAt: l.createdAt.toISOString(), revokedAt: l.revokedAt ? l.revokedAt.toISOString() : null });

@@ -6,17 +6,23 @@ import { SettingsSheet } from '@/components/sheet/settings-sheet';
 import { SheetToolbar } from '@/components/sheet/sheet-toolbar';
 import { Wordmark } from '@/components/ui/mark';
 import { getCaller } from '@/lib/auth';
+import { SharedLesson } from '@/components/lessons/shared-lesson';
+import { getLessonByShareToken } from '@/lib/data/lessons';
 import { getSharedSystem } from '@/lib/data/share-links';
 import { listWorkspaces } from '@/lib/data/workspaces';
 
 export const dynamic = 'force-dynamic';
-export const metadata = { title: 'Shared System', robots: { index: false, follow: false } };
+export const metadata = { title: 'Shared', robots: { index: false, follow: false } };
 
-/** A share link's read-only page, open to anyone: the System's plots and its Settings sheet. */
-export default async function SharedSystemPage({ params }: { params: Promise<{ token: string }> }) {
+/** A share link's read-only page, open to anyone: a System's plots and Settings sheet, or a Lesson's Steps. */
+export default async function SharedPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
   const system = await getSharedSystem(token);
-  if (!system) notFound();
+  if (!system) {
+    const lesson = await getLessonByShareToken(token);
+    if (!lesson) notFound();
+    return <SharedLesson lesson={lesson} />;
+  }
   const caller = await getCaller();
   const writable = caller ? (await listWorkspaces(caller)).filter((w) => w.role !== 'viewer').map((w) => ({ id: w.id, name: w.name })) : [];
 

@@ -1,14 +1,7 @@
-import { notFound } from 'next/navigation';
-import { SharedLesson } from '@/components/lessons/shared-lesson';
-import { getLessonByShareToken } from '@/lib/data/lessons';
+import { redirect } from 'next/navigation';
 
-export const dynamic = 'force-dynamic';
-export const metadata = { title: 'Shared Lesson', robots: { index: false } };
-
-/** The read-only student view of a Lesson's share link (revoked or unknown tokens: not found). */
-export default async function SharedLessonPage({ params }: { params: Promise<{ token: string }> }) {
+/** Older lesson links (/s/lesson/{token}) lead to the one share page. */
+export default async function SharedLessonRedirect({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
-  const lesson = await getLessonByShareToken(token);
-  if (!lesson) notFound();
-  return <SharedLesson lesson={lesson} />;
+  redirect(`/s/${encodeURIComponent(token)}`);
 }
