@@ -188,7 +188,8 @@ export function computeMeasuredPrediction(req: PredictRequest, curves: { mains: 
 /** Which System sub a sub measurement stands for, and which main channel the mains measurement. */
 export interface PredictTarget {
   channel?: string;
-  subIndex: number;
+  /** The System sub whose settings apply; "all" takes the first sub's (every sub playing together). */
+  subIndex: number | 'all';
 }
 
 /** The predict body for two curves with the System's current settings (the mains channel's trim, the chosen sub's gain, delay and polarity). */
@@ -199,7 +200,7 @@ export function predictRequestFromDocument(
   options: { smoothingFraction?: number } = {},
 ): PredictRequestInput | null {
   const speaker = blendMainSpeaker(doc, target.channel);
-  const sub = doc.subs[target.subIndex];
+  const sub = doc.subs[target.subIndex === 'all' ? 0 : target.subIndex];
   if (!speaker || !sub) return null;
   const bm = doc.bassManagement;
   return {
@@ -208,7 +209,7 @@ export function predictRequestFromDocument(
     mainsHighpass: { family: bm.mainsHighpass.family, order: bm.mainsHighpass.order },
     subLowpass: { family: bm.subLowpass.family, order: bm.subLowpass.order },
     mains: { name: speaker.channel, curve: curves.mains, gainDb: speaker.trimDb, delayMs: bm.mainsDelayMs, invert: false },
-    sub: { name: sub.name, curve: curves.sub, gainDb: sub.gainDb, delayMs: sub.delayMs, invert: sub.invert },
+    sub: { name: target.subIndex === 'all' ? 'All subs' : sub.name, curve: curves.sub, gainDb: sub.gainDb, delayMs: sub.delayMs, invert: sub.invert },
     smoothingFraction: options.smoothingFraction ?? 0,
   };
 }
@@ -218,10 +219,19 @@ export function predictRequestFromDocument(
  * and the mains delay. When the mains delay moves, the other subs move by the same amount so their
  * own alignment to the mains is kept; then what every path has in common is taken out.
  */
-export function applyMeasuredRecommendation(doc: SystemDocument, subIndex: number, rec: { subDelayMs: number; mainsDelayMs: number; invert: boolean }): SystemDocument {
+export function applyMeasuredRecommendation(doc: SystemDocument, subIndex: number | 'all', rec: { subDelayMs: number; mainsDelayMs: number; invert: boolean; flipPolarity: boolean }): SystemDocument {
   const clamp = (v: number) => Math.min(100, Math.max(0, roundTo(v, 2)));
   const mainsShift = rec.mainsDelayMs - doc.bassManagement.mainsDelayMs;
-  const subs = doc.subs.map((s, k) => (k === subIndex ? { ...s, delayMs: rec.subDelayMs, invert: rec.invert } : { ...s, delayMs: s.delayMs + mainsShift }));
+  // "all": the measurement is of every sub playing together (with the first sub's settings): all move alike.
+  const first = doc.subs[0];
+  const allShift = first ? rec.subDelayMs - first.delayMs : 0;
+  const subs = doc.subs.map((s, k) =>
+    subIndex === 'all'
+      ? { ...s, delayMs: s.delayMs + allShift, invert: rec.flipPolarity ? !s.invert : s.invert }
+      : k === subIndex
+        ? { ...s, delayMs: rec.subDelayMs, invert: rec.invert }
+        : { ...s, delayMs: s.delayMs + mainsShift },
+  );
   const common = Math.min(rec.mainsDelayMs, ...subs.map((s) => s.delayMs));
   return {
     ...doc,

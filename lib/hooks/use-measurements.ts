@@ -1,0 +1,92 @@
+'use client';
+
+import useSWR from 'swr';
+import { ApiError, apiFetch, jsonFetcher, type ApiIssue } from '@/lib/client/api';
+
+export interface MeasurementItem {
+  id: string;
+  workspaceId: string;
+  workspaceName: string;
+  systemId: string | null;
+  name: string;
+  seat: string | null;
+  role: string | null;
+  pointCount: number;
+  startHz: number;
+  stopHz: number;
+  hasPhase: boolean;
+  createdByName: string | null;
+  createdAt: string;
+}
+
+export interface MeasurementPoints extends MeasurementItem {
+  frequencyHz: number[];
+  magnitudeDb: number[];
+  phaseDeg: number[] | null;
+}
+
+/** The caller's measurements (of one workspace when given); null skips the request (signed out). */
+export function useMeasurementList(query: { workspaceId?: string } | null) {
+  const key = query === null ? null : `/api/v1/measurements${query.workspaceId ? `?workspaceId=${query.workspaceId}` : ''}`;
+  return useSWR<{ items: MeasurementItem[] }, ApiError>(key, jsonFetcher);
+}
+
+/** Every point of several stored measurements, fetched together (keyed by their ids). */
+export function useMeasurementPoints(ids: readonly string[]) {
+  const key = ids.length ? ['measurement-points', ...[...ids].sort()] : null;
+  return useSWR<Record<string, MeasurementPoints>, ApiError>(key, async ([, ...list]: string[]) => {
+    const rows = await Promise.all(list.map((id) => apiFetch<MeasurementPoints>(`/api/v1/measurements/${id}`)));
+    return Object.fromEntries(rows.map((r) => [r.id, r]));
+  }, { revalidateOnFocus: false, dedupingInterval: 60_000 });
+}
+
+/** The workspace a saved System lives in (for listing that workspace's measurements). */
+export function useSystemWorkspace(systemId: string | null) {
+  return useSWR<{ workspaceId: string; workspaceName: string; role: 'owner' | 'editor' | 'viewer' }, ApiError>(systemId ? `/api/v1/systems/${systemId}` : null, jsonFetcher, { revalidateOnFocus: false });
+}
+
+export interface UploadAnswer {
+  id: string;
+  name: string;
+  pointCount: number;
+  startHz: number;
+  stopHz: number;
+  hasPhase: boolean;
+}
+
+/**
+ * Uploads a measurement as multipart/form-data with XMLHttpRequest, so the page can show upload
+ * progress (fetch cannot). Resolves with the 201 answer; rejects with an ApiError (its issues are the
+ * refused file's line errors).
+ */
+export function uploadMeasurement(form: FormData, onProgress: (fraction: number) => void): Promise<UploadAnswer> {
+  return new Promise((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open('POST', '/api/v1/measurements');
+    xhr.responseType = 'text';
+    xhr.upload.onprogress = (e) => {
+      if (e.lengthComputable && e.total > 0) onProgress(e.loaded / e.total);
+    };
+    xhr.onerror = () => reject(new ApiError(0, 'network', 'Could not reach Seamline. Check the connection; nothing was saved.'));
+    xhr.onload = () => {
+      let body: unknown = null;
+      try {
+        body = xhr.responseText ? JSON.parse(xhr.responseText) : null;
+      } catch {
+        body = null;
+      }
+      if (xhr.status === 201) {
+        onProgress(1);
+        resolve(body as UploadAnswer);
+        return;
+      }
+      const err = (body as { error?: { code?: string; message?: string; issues?: ApiIssue[] } } | null)?.error;
+      reject(new ApiError(xhr.status, err?.code ?? 'error', err?.message ?? `The upload failed (${xhr.status}).`, err?.issues ?? [], (err ?? {}) as Record<string, unknown>));
+    };
+    xhr.send(form);
+  });
+}
+
+export function deleteMeasurement(id: string) {
+  return apiFetch<{ id: string; deleted: true }>(`/api/v1/measurements/${id}`, { method: 'DELETE' });
+}
