@@ -19,7 +19,7 @@ export class DevMessage extends Model<InferAttributes<DevMessage>, InferCreation
         text: { type: DataTypes.TEXT, allowNull: false },
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
       },
-      { sequelize, tableName: 'dev_messages', underscored: true, updatedAt: false },
+      { sequelize, modelName: 'DevMessage', tableName: 'dev_messages', underscored: true, updatedAt: false },
     );
   }
 }

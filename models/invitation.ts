@@ -26,7 +26,7 @@ export class Invitation extends Model<InferAttributes<Invitation>, InferCreation
         acceptedAt: { type: DataTypes.DATE, allowNull: true, field: 'accepted_at' },
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
       },
-      { sequelize, tableName: 'invitations', underscored: true, updatedAt: false },
+      { sequelize, modelName: 'Invitation', tableName: 'invitations', underscored: true, updatedAt: false },
     );
   }
 }

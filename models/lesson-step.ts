@@ -29,7 +29,7 @@ export class LessonStep extends Model<InferAttributes<LessonStep>, InferCreation
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
         updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
       },
-      { sequelize, tableName: 'lesson_steps', underscored: true },
+      { sequelize, modelName: 'LessonStep', tableName: 'lesson_steps', underscored: true },
     );
   }
 }

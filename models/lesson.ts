@@ -28,7 +28,7 @@ export class Lesson extends Model<InferAttributes<Lesson>, InferCreationAttribut
         updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
       },
       // Soft delete is explicit (deletedAt set by the data layer), as for Systems.
-      { sequelize, tableName: 'lessons', underscored: true },
+      { sequelize, modelName: 'Lesson', tableName: 'lessons', underscored: true },
     );
   }
 }

@@ -42,7 +42,7 @@ export class Measurement extends Model<InferAttributes<Measurement>, InferCreati
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
         updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
       },
-      { sequelize, tableName: 'measurements', underscored: true },
+      { sequelize, modelName: 'Measurement', tableName: 'measurements', underscored: true },
     );
   }
 }

@@ -20,7 +20,7 @@ export class Membership extends Model<InferAttributes<Membership>, InferCreation
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
         updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
       },
-      { sequelize, tableName: 'memberships', underscored: true },
+      { sequelize, modelName: 'Membership', tableName: 'memberships', underscored: true },
     );
   }
 }

@@ -19,7 +19,7 @@ export class PasswordResetToken extends Model<InferAttributes<PasswordResetToken
         usedAt: { type: DataTypes.DATE, allowNull: true, field: 'used_at' },
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
       },
-      { sequelize, tableName: 'password_reset_tokens', underscored: true, updatedAt: false },
+      { sequelize, modelName: 'PasswordResetToken', tableName: 'password_reset_tokens', underscored: true, updatedAt: false },
     );
   }
 }

@@ -25,7 +25,7 @@ export class ShareLink extends Model<InferAttributes<ShareLink>, InferCreationAt
         revokedAt: { type: DataTypes.DATE, allowNull: true, field: 'revoked_at' },
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
       },
-      { sequelize, tableName: 'share_links', underscored: true, updatedAt: false },
+      { sequelize, modelName: 'ShareLink', tableName: 'share_links', underscored: true, updatedAt: false },
     );
   }
 }

@@ -26,7 +26,7 @@ export class SpeakerProfileRow extends Model<InferAttributes<SpeakerProfileRow>,
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
         updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
       },
-      { sequelize, tableName: 'speaker_profiles', underscored: true },
+      { sequelize, modelName: 'SpeakerProfile', tableName: 'speaker_profiles', underscored: true },
     );
   }
 }

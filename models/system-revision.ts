@@ -22,7 +22,7 @@ export class SystemRevision extends Model<InferAttributes<SystemRevision>, Infer
         note: { type: DataTypes.STRING(200), allowNull: true },
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
       },
-      { sequelize, tableName: 'system_revisions', underscored: true, updatedAt: false },
+      { sequelize, modelName: 'SystemRevision', tableName: 'system_revisions', underscored: true, updatedAt: false },
     );
   }
 }

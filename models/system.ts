@@ -29,7 +29,7 @@ export class System extends Model<InferAttributes<System>, InferCreationAttribut
         updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
       },
       // Soft delete is explicit (deletedAt set by the data layer) so restore and purge stay visible.
-      { sequelize, tableName: 'systems', underscored: true },
+      { sequelize, modelName: 'System', tableName: 'systems', underscored: true },
     );
   }
 }

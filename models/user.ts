@@ -22,7 +22,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
         updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
       },
-      { sequelize, tableName: 'users', underscored: true },
+      { sequelize, modelName: 'User', tableName: 'users', underscored: true },
     );
   }
 }

@@ -16,7 +16,7 @@ export class Workspace extends Model<InferAttributes<Workspace>, InferCreationAt
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
         updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
       },
-      { sequelize, tableName: 'workspaces', underscored: true },
+      { sequelize, modelName: 'Workspace', tableName: 'workspaces', underscored: true },
     );
   }
 }

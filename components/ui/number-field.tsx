@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useId, useState } from 'react';
+import { useId, useState } from 'react';
 import { feetToMetres, metresToFeet } from '@/lib/units';
 
 export interface NumberFieldProps {
@@ -43,20 +43,13 @@ export function NumberField({ label, value, onChange, unit, min, max, step = 1, 
     const d = digits ?? (shownStep >= 1 ? 0 : shownStep >= 0.1 ? 1 : 2);
     return String(Number(toShown(v).toFixed(d)));
   };
-  const [text, setText] = useState(fmt(value));
+  // What the person is typing; null shows the value itself (so outside changes appear at once).
+  const [draft, setDraft] = useState<string | null>(null);
   const [localError, setLocalError] = useState<string | null>(null);
-  const [focused, setFocused] = useState(false);
-
-  useEffect(() => {
-    if (!focused) {
-      setText(fmt(value));
-      setLocalError(null);
-    }
-    // eslint-disable-next-line react-hooks/exhaustive-deps -- re-format only when the value or units change
-  }, [value, imperial, focused]);
+  const text = draft ?? fmt(value);
 
   const commit = (raw: string) => {
-    setText(raw);
+    setDraft(raw);
     const n = Number(raw.replace(',', '.'));
     if (raw.trim() === '' || !Number.isFinite(n)) {
       setLocalError(`${label} must be a number`);
@@ -94,9 +87,9 @@ export function NumberField({ label, value, onChange, unit, min, max, step = 1, 
           disabled={disabled}
           aria-invalid={message ? true : undefined}
           aria-describedby={message ? `${id}-msg` : hint ? `${id}-hint` : undefined}
-          onFocus={() => setFocused(true)}
           onBlur={() => {
-            setFocused(false);
+            // A valid entry gives way to the formatted value; an invalid one stays with its message.
+            if (!localError) setDraft(null);
           }}
           onChange={(e) => commit(e.target.value)}
           className={`num w-24 rounded-md border bg-white px-2 py-1.5 text-sm disabled:cursor-not-allowed disabled:border-dashed disabled:bg-[#F1EFE9] disabled:text-ink-soft ${message ? 'border-fail' : 'border-line'}`}
@@ -112,7 +105,7 @@ export function NumberField({ label, value, onChange, unit, min, max, step = 1, 
             disabled={disabled}
             onChange={(e) => {
               const n = Number(e.target.value);
-              setText(fmt(fromShown(n)));
+              setDraft(null);
               setLocalError(null);
               onChange(fromShown(n));
             }}
