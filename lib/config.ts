@@ -31,4 +31,10 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   };
 }
 
-export const config: AppConfig = readConfig();
+/**
+ * The configuration, read from the environment when a value is used (not when this module loads),
+ * so a script that sets up its environment first — npm test's throw-away database — is obeyed.
+ */
+export const config: AppConfig = new Proxy({} as AppConfig, {
+  get: (_target, key) => readConfig()[key as keyof AppConfig],
+});

@@ -8,7 +8,7 @@ import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
-import { spawnSync } from 'node:child_process';
+import { spawn } from 'node:child_process';
 import type { ChildProcess } from 'node:child_process';
 import { projectRoot } from './lib/env-file';
 import { aptInstall } from './lib/run';
@@ -37,10 +37,19 @@ interface Tally {
 
 const bin = (name: string) => path.join(projectRoot, 'node_modules', '.bin', name);
 
-function step(name: string, cmd: string, args: string[], env: NodeJS.ProcessEnv): Tally {
+/** Runs a command without blocking this process (the mail catcher lives here and must keep answering). */
+function runAsync(cmd: string, args: string[], env: NodeJS.ProcessEnv): Promise<number> {
+  return new Promise((resolve) => {
+    const child = spawn(cmd, args, { cwd: projectRoot, stdio: 'inherit', env });
+    child.once('exit', (code) => resolve(code ?? 1));
+    child.once('error', () => resolve(1));
+  });
+}
+
+async function step(name: string, cmd: string, args: string[], env: NodeJS.ProcessEnv): Promise<Tally> {
   console.log(`\n━━ ${name} ━━`);
-  const r = spawnSync(cmd, args, { cwd: projectRoot, stdio: 'inherit', env });
-  return { name, passed: r.status === 0 ? 1 : 0, failed: r.status === 0 ? 0 : 1, skipped: 0 };
+  const status = await runAsync(cmd, args, env);
+  return { name, passed: status === 0 ? 1 : 0, failed: status === 0 ? 0 : 1, skipped: 0 };
 }
 
 function vitestTally(report: string, exitOk: boolean): Tally {
@@ -108,25 +117,25 @@ async function main() {
     const { startMailCatcher } = await import('./mail-catcher');
     catcher = await startMailCatcher(env.SMTP_URL, databaseUrl);
 
-    tallies.push(step('lint', bin('eslint'), ['--max-warnings=0', '.'], env));
-    tallies.push(step('type-check', bin('tsc'), ['--noEmit', '-p', '.'], env));
+    tallies.push(await step('lint', bin('eslint'), ['--max-warnings=0', '.'], env));
+    tallies.push(await step('type-check', bin('tsc'), ['--noEmit', '-p', '.'], env));
     // The app is built and served first, so integration tests can call it over HTTP with real sessions.
-    const build = step('production build', bin('next'), ['build'], { ...env, NODE_ENV: 'production' });
+    const build = await step('production build', bin('next'), ['build'], { ...env, NODE_ENV: 'production' });
     tallies.push(build);
     if (build.failed === 0) server = await serveApp(appPort, env, { quiet: true });
 
     console.log('\n━━ vitest: unit, property and integration ━━');
     const vitestReport = path.join(reports, 'vitest.json');
-    const v = spawnSync(bin('vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`], { cwd: projectRoot, stdio: 'inherit', env });
-    tallies.push(vitestTally(vitestReport, v.status === 0));
+    const v = await runAsync(bin('vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`], env);
+    tallies.push(vitestTally(vitestReport, v === 0));
 
     if (server) {
       console.log('\n━━ playwright: end-to-end in Debian Chromium ━━');
       const pwReport = path.join(reports, 'playwright.json');
-      const p = spawnSync(bin('playwright'), ['test'], { cwd: projectRoot, stdio: 'inherit', env: { ...env, CI_REPORT: pwReport } });
-      tallies.push(playwrightTally(pwReport, p.status === 0));
+      const p = await runAsync(bin('playwright'), ['test'], { ...env, CI_REPORT: pwReport });
+      tallies.push(playwrightTally(pwReport, p === 0));
       // Last, because it stops and restarts the database under the running app.
-      tallies.push(step('database outage (test:fault)', bin('tsx'), [path.join('scripts', 'test-fault.ts')], env));
+      tallies.push(await step('database outage (test:fault)', bin('tsx'), [path.join('scripts', 'test-fault.ts')], env));
     }
   } catch (e) {
     console.error(`\nthe test set-up failed: ${e instanceof Error ? e.message : e}`);
