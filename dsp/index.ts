@@ -66,3 +66,5 @@ export { minimumPhaseDeg, type MinimumPhaseOptions, type MinimumPhaseResult } fr
 export { applyPathToMeasured, type ApplyPathOptions, type ProcessedMeasurement } from './measured/apply-path-to-measured';
 export { predictMeasuredBlend, type PredictMeasuredBlendOptions, type MeasuredBlendResult, type MeasuredPathCurves } from './measured/predict-measured-blend';
 export { bestMeasuredAlignment, type BestMeasuredAlignmentOptions } from './measured/best-measured-alignment';
+export { bandPowerAverageDb, type BandPowerAverage, type BandPowerAverageOptions } from './measured/band-power-average';
+export { wrapDeg } from './internal/angles';

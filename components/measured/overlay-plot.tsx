@@ -5,8 +5,7 @@ import { ChartExportButtons, FrequencyPlot, chartColors, finiteExtent, formatSig
 import { useSystem } from '@/components/editor/system-context';
 import { Button } from '@/components/ui/button';
 import { NumberField } from '@/components/ui/number-field';
-import { logFrequencyGridHz, resampleCurve, smoothFractionalOctave } from '@/dsp';
-import { bandPowerAverageDb } from '@/dsp/measured/band-power-average';
+import { bandPowerAverageDb, logFrequencyGridHz, resampleCurve, smoothFractionalOctave } from '@/dsp';
 import { useCompute } from '@/lib/hooks/use-compute';
 import type { BlendAnswer } from '@/lib/system-model/blend-compute';
 import { blendRequestFromDocument } from '@/lib/system-model';

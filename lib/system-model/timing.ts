@@ -4,8 +4,7 @@
  * Timing window, several subs) is dsp's; here only processor bookkeeping: delays are settings
  * of "sub minus mains", and a processor takes only positive delays, so one side stays at 0.
  */
-import { alignSubToMains, alignSubs, arrivalTimeMs, speedOfSoundMps, type PathSpec, type RolloffChain, type RolloffSpec } from '@/dsp';
-import { wrapDeg } from '@/dsp/internal/angles';
+import { alignSubToMains, alignSubs, arrivalTimeMs, speedOfSoundMps, wrapDeg, type PathSpec, type RolloffChain, type RolloffSpec } from '@/dsp';
 import type { TimingRequest } from '@/lib/validations/compute-blend';
 import type { SystemDocument } from '@/lib/validations/system';
 import { blendMainSpeaker, distanceToSeatM, mainsRolloff, profileById, subLevelMatchDb, subRolloffs } from './index';
