@@ -3,14 +3,8 @@
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useCallback, useEffect, useMemo, useRef, useState, useSyncExternalStore } from 'react';
+import dynamic from 'next/dynamic';
 import { BlendPanel } from '@/components/blend/blend-panel';
-import { HeadroomPanel } from '@/components/headroom/headroom-panel';
-import { LayoutPanel } from '@/components/layout/layout-panel';
-import { AddToLessonButton } from '@/components/lessons/add-to-lesson-button';
-import { MeasuredPanel } from '@/components/measured/measured-panel';
-import { ModesPanel } from '@/components/modes/modes-panel';
-import { ShareDialog } from '@/components/share/share-dialog';
-import { TimingPanel } from '@/components/timing/timing-panel';
 import { Button, buttonClass } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { ApiError, apiFetch } from '@/lib/client/api';
@@ -18,7 +12,22 @@ import { decodeDocument, encodeDocument, URL_STATE_PARAM } from '@/lib/client/ur
 import { newSystemDocument } from '@/lib/demo/systems';
 import { systemDocumentSchema, type SystemDocument } from '@/lib/validations/system';
 import { isPanelId, PanelTabs, PANELS, type PanelId } from './panel-tabs';
+
 import { SystemContext, type SystemEditorValue, type UnitSystem } from './system-context';
+
+// Blend is the first panel; the others load when their tab is first opened (a smaller first load).
+const loadingPanel = () => (
+  <p role="status" className="p-4 text-sm text-ink-soft">
+    Loading the panel…
+  </p>
+);
+const TimingPanel = dynamic(() => import('@/components/timing/timing-panel').then((m) => m.TimingPanel), { loading: loadingPanel });
+const ModesPanel = dynamic(() => import('@/components/modes/modes-panel').then((m) => m.ModesPanel), { loading: loadingPanel });
+const LayoutPanel = dynamic(() => import('@/components/layout/layout-panel').then((m) => m.LayoutPanel), { loading: loadingPanel });
+const HeadroomPanel = dynamic(() => import('@/components/headroom/headroom-panel').then((m) => m.HeadroomPanel), { loading: loadingPanel });
+const MeasuredPanel = dynamic(() => import('@/components/measured/measured-panel').then((m) => m.MeasuredPanel), { loading: loadingPanel });
+const ShareDialog = dynamic(() => import('@/components/share/share-dialog').then((m) => m.ShareDialog));
+const AddToLessonButton = dynamic(() => import('@/components/lessons/add-to-lesson-button').then((m) => m.AddToLessonButton));
 
 export interface SavedSystemInfo {
   id: string;
