@@ -1,5 +1,6 @@
 'use client';
 
+import dynamic from 'next/dynamic';
 import { useId, useMemo, useRef, useState } from 'react';
 import { ChartExportButtons, FrequencyPlot, chartColors, traceStyles, type PlotTrace } from '@/components/charts';
 import { useSystem } from '@/components/editor/system-context';
@@ -11,8 +12,16 @@ import { blendMainSpeaker, blendRequestFromDocument } from '@/lib/system-model';
 import type { BlendAnswer } from '@/lib/system-model/blend-compute';
 import type { Slope, SystemDocument } from '@/lib/validations/system';
 import { BlendReadouts } from './blend-readouts';
-import { CrossoverSweep } from './crossover-sweep';
 import { SlopeSelect, slopeShortName } from './slope-select';
+
+// The Crossover sweep sits below the plots; it loads after them.
+const CrossoverSweep = dynamic(() => import('./crossover-sweep').then((m) => m.CrossoverSweep), {
+  loading: () => (
+    <p role="status" className="text-sm text-ink-soft">
+      Loading the Crossover sweep…
+    </p>
+  ),
+});
 
 const SUB_STYLES = [traceStyles.sub, traceStyles.sub2];
 /** More than two subs: alternate amber and brown with dashes so each stays apart. */
