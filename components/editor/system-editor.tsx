@@ -188,7 +188,7 @@ export function SystemEditor({ saved, signedIn }: Props) {
     <SystemContext.Provider value={value}>
       <div className="flex flex-col gap-4">
         <div className="no-print flex flex-wrap items-end gap-3">
-          <div className="flex min-w-0 flex-1 flex-col gap-1">
+          <div className="flex min-w-0 flex-1 basis-full flex-col gap-1 lg:basis-0">
             <label htmlFor="system-name" className="text-xs font-medium text-ink-soft">
               System name
             </label>
