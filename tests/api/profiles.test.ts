@@ -3,37 +3,9 @@
  * validation by field, create/read/update/delete, and the seeded invented demo profiles.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { createUserWithWorkspace } from '@/lib/data/users';
-import { addMember, createWorkspace } from '@/lib/data/workspaces';
-import { Client, signedInClient, uniqueEmail } from '../helpers/http';
-import { testDb } from '../helpers/db';
+import { Client, signedInClient } from '../helpers/http';
+import { makeTeam, type Team, WHO } from '../helpers/team';
 
-const PASSWORD = 'library-test-password';
-type Who = 'anonymous' | 'outsider' | 'viewer' | 'editor' | 'owner';
-const WHO: Who[] = ['anonymous', 'outsider', 'viewer', 'editor', 'owner'];
-
-interface Team {
-  workspaceId: string;
-  ids: Record<Exclude<Who, 'anonymous'>, string>;
-  clients: Record<Who, Client>;
-}
-
-/** A fresh workspace with an owner, an editor and a viewer, plus an outsider (who has only their own). */
-async function makeTeam(label: string): Promise<Team> {
-  await testDb();
-  const ids = {} as Team['ids'];
-  const clients = { anonymous: new Client() } as Team['clients'];
-  for (const who of ['owner', 'editor', 'viewer', 'outsider'] as const) {
-    const email = uniqueEmail(`${label}-${who}`);
-    const u = await createUserWithWorkspace({ email, name: `${label} ${who}`, password: PASSWORD });
-    ids[who] = u.id;
-    clients[who] = await signedInClient(email, PASSWORD);
-  }
-  const workspaceId = (await createWorkspace({ id: ids.owner, siteRole: 'member' }, `${label} workspace (invented)`)).id;
-  await addMember(workspaceId, ids.editor, 'editor');
-  await addMember(workspaceId, ids.viewer, 'viewer');
-  return { workspaceId, ids, clients };
-}
 
 const SUB = {
   name: 'Fenwick F10 test sub (invented)',
