@@ -33,8 +33,8 @@ export async function benchUiSweep(baseUrl = process.env.BENCH_URL ?? 'http://12
     if (!step?.sweep) throw new Error('the demo Lesson has no sweep');
 
     await page.goto(`/lessons/${demo.id}/present?step=${step.position}`, { timeout: 90_000 });
-    await page.getByTestId('presenter-view').waitFor({ timeout: 90_000 });
-    await page.getByTestId('sweep-value').waitFor();
+    await page.getByTestId('presenter-view').filter({ visible: true }).first().waitFor({ timeout: 90_000 });
+    await page.getByTestId('sweep-value').filter({ visible: true }).first().waitFor();
     await page.waitForLoadState('networkidle'); // hydrated: the keyboard handler is attached
     const run = Math.min(seconds, step.sweep.durationS - 0.5);
     await page.keyboard.press('Space');

@@ -173,20 +173,24 @@ export function TimingPanel() {
               </div>
 
               <div className="grid gap-3 md:grid-cols-2">
-                {data.subs.map((s, k) => (
+                {data.subs.map((s, k) => {
+                  // A change that gains under 0.5 dB of flatness is not worth making; say so first.
+                  const optional = s.recommendation.flatnessBeforeDb - s.recommendation.flatnessDb < 0.5;
+                  return (
                   <div key={k} className="flex flex-col gap-2 rounded-md border border-line bg-white p-3" data-testid={`timing-recommendation-${k}`}>
                     <p className="text-xs text-ink-soft">
                       Recommended for <span className="font-medium text-ink">{s.name}</span> alone with {data.mains.name}
                     </p>
-                    <p className="text-base font-semibold" data-testid={`timing-recommendation-text-${k}`}>
-                      {describeRecommendation(s.recommendation)}
+                    {optional ? (
+                      <p className="text-base font-semibold text-ok">Keep the present setting: it is within 0.5 dB of the flattest.</p>
+                    ) : null}
+                    <p className={optional ? 'text-sm' : 'text-base font-semibold'}>
+                      {optional ? <span className="text-ink-soft">Flattest found: </span> : null}
+                      <span data-testid={`timing-recommendation-text-${k}`}>{describeRecommendation(s.recommendation)}</span>
                     </p>
                     <p className="num text-xs text-ink-soft">
                       sets sub {formatNumber(s.recommendation.subDelayMs, 2)} ms, mains {formatNumber(s.recommendation.mainsDelayMs, 2)} ms · flatness ±{formatNumber(s.recommendation.flatnessBeforeDb, 2)} → ±{formatNumber(s.recommendation.flatnessDb, 2)} dB · phase after {formatValue(s.recommendation.phaseDifferenceAfterDeg, '°', 0)} · Timing window {formatNumber(s.timingWindowMs[0], 2)} to {formatNumber(s.timingWindowMs[1], 2)} ms
                     </p>
-                    {s.recommendation.flatnessBeforeDb - s.recommendation.flatnessDb < 0.5 ? (
-                      <p className="text-xs text-ink-soft">The present setting is already within 0.5 dB of the flattest; this change is optional.</p>
-                    ) : null}
                     <Button
                       variant="secondary"
                       className="self-start"
@@ -200,7 +204,8 @@ export function TimingPanel() {
                       Apply
                     </Button>
                   </div>
-                ))}
+                  );
+                })}
               </div>
 
               {data.group ? (
