@@ -33,6 +33,14 @@ interface Tally {
   passed: number;
   failed: number;
   skipped: number;
+  retried?: number;
+}
+
+/** One test's duration against its timeout, read from a reporter's JSON. */
+interface Timed {
+  title: string;
+  durationMs: number;
+  timeoutMs: number;
 }
 
 const bin = (name: string) => path.join(projectRoot, 'node_modules', '.bin', name);
@@ -50,6 +58,50 @@ async function step(name: string, cmd: string, args: string[], env: NodeJS.Proce
   console.log(`\n━━ ${name} ━━`);
   const status = await runAsync(cmd, args, env);
   return { name, passed: status === 0 ? 1 : 0, failed: status === 0 ? 0 : 1, skipped: 0 };
+}
+
+const VITEST_TIMEOUT_MS = 30_000; // vitest.config.ts testTimeout; a test that sets its own says so in its title's file
+
+function vitestTimes(report: string): Timed[] {
+  try {
+    const j = JSON.parse(readFileSync(report, 'utf8')) as { testResults: { name: string; assertionResults: { fullName: string; duration?: number }[] }[] };
+    return j.testResults.flatMap((f) =>
+      f.assertionResults.map((a) => ({ title: `${path.relative(projectRoot, f.name)} › ${a.fullName}`, durationMs: a.duration ?? 0, timeoutMs: VITEST_TIMEOUT_MS })),
+    );
+  } catch {
+    return [];
+  }
+}
+
+interface PwSuite {
+  title: string;
+  file?: string;
+  specs?: { title: string; file: string; tests: { timeout: number; results: { duration: number; retry: number }[] }[] }[];
+  suites?: PwSuite[];
+}
+
+function playwrightSpecs(report: string) {
+  try {
+    const j = JSON.parse(readFileSync(report, 'utf8')) as { suites: PwSuite[] };
+    const out: { title: string; timeoutMs: number; results: { duration: number; retry: number }[] }[] = [];
+    const walk = (s: PwSuite) => {
+      for (const spec of s.specs ?? []) for (const t of spec.tests) out.push({ title: `${spec.file} › ${spec.title}`, timeoutMs: t.timeout, results: t.results });
+      for (const child of s.suites ?? []) walk(child);
+    };
+    j.suites.forEach(walk);
+    return out;
+  } catch {
+    return [];
+  }
+}
+
+/** Retries are never silent: every retried test or resent request is printed and counted. */
+function retriesLogged(file: string): string[] {
+  try {
+    return readFileSync(file, 'utf8').split('\n').filter(Boolean);
+  } catch {
+    return [];
+  }
 }
 
 function vitestTally(report: string, exitOk: boolean): Tally {
@@ -91,6 +143,7 @@ async function main() {
     NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET ?? 'throw-away-secret-for-the-test-run-only-0123456789',
     SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
     SEAMLINE_DEV_MAILBOX: '1',
+    SEAMLINE_RETRY_LOG: path.join(reports, 'retries.log'),
     NEXT_DIST_DIR: '.next-test',
     E2E_BASE_URL: `http://127.0.0.1:${appPort}`,
     NEXT_TELEMETRY_DISABLED: '1',
@@ -98,6 +151,8 @@ async function main() {
   Object.assign(process.env, env);
 
   const tallies: Tally[] = [];
+  const timed: Timed[] = [];
+  const retries: string[] = [];
   let server: ChildProcess | null = null;
   // Interrupted: stop the throw-away server and remove its data before leaving.
   for (const signal of ['SIGINT', 'SIGTERM'] as const) {
@@ -128,12 +183,18 @@ async function main() {
     const vitestReport = path.join(reports, 'vitest.json');
     const v = await runAsync(bin('vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`], env);
     tallies.push(vitestTally(vitestReport, v === 0));
+    timed.push(...vitestTimes(vitestReport));
 
     if (server) {
       console.log('\n━━ playwright: end-to-end in Debian Chromium ━━');
       const pwReport = path.join(reports, 'playwright.json');
       const p = await runAsync(bin('playwright'), ['test'], { ...env, CI_REPORT: pwReport });
       tallies.push(playwrightTally(pwReport, p === 0));
+      for (const spec of playwrightSpecs(pwReport)) {
+        const last = spec.results.at(-1);
+        if (last) timed.push({ title: spec.title, durationMs: last.duration, timeoutMs: spec.timeoutMs });
+        for (const r of spec.results.filter((x) => x.retry > 0)) retries.push(`playwright retried ${spec.title} (attempt ${r.retry + 1})`);
+      }
       // Last, because it stops and restarts the database under the running app.
       tallies.push(await step('database outage (test:fault)', bin('tsx'), [path.join('scripts', 'test-fault.ts')], env));
     }
@@ -144,14 +205,29 @@ async function main() {
     server?.kill('SIGTERM');
     if (catcher) await new Promise<void>((r) => catcher!.close(() => r()));
     stopPostgres(databaseUrl, { dataDir, remove: true });
+    retries.push(...retriesLogged(env.SEAMLINE_RETRY_LOG!));
     rmSync(reports, { recursive: true, force: true });
+  }
+
+  // A test that takes more than a third of its timeout is one busy machine away from failing by chance.
+  const slow = timed.filter((t) => t.durationMs > t.timeoutMs / 3).sort((a, b) => b.durationMs / b.timeoutMs - a.durationMs / a.timeoutMs);
+  const slowest = [...timed].sort((a, b) => b.durationMs - a.durationMs).slice(0, 8);
+  console.log(`\nslowest tests (duration / timeout):`);
+  for (const t of slowest) console.log(`  ${(t.durationMs / 1000).toFixed(1).padStart(6)} s / ${t.timeoutMs / 1000} s  ${t.title}`);
+  if (slow.length) {
+    console.log(`\n${slow.length} test(s) took more than a third of their timeout — make them faster or split them:`);
+    for (const t of slow) console.log(`  ${(t.durationMs / 1000).toFixed(1)} s of ${t.timeoutMs / 1000} s  ${t.title}`);
+  }
+  if (retries.length) {
+    console.log(`\n${retries.length} retr${retries.length === 1 ? 'y' : 'ies'}:`);
+    for (const r of retries) console.log(`  ${r}`);
   }
 
   const passed = tallies.reduce((s, t) => s + t.passed, 0);
   const failed = tallies.reduce((s, t) => s + t.failed, 0);
   const skipped = tallies.reduce((s, t) => s + t.skipped, 0);
   console.log('\n' + tallies.map((t) => `  ${t.name}: ${t.passed} passed, ${t.failed} failed${t.skipped ? `, ${t.skipped} skipped` : ''}`).join('\n'));
-  console.log(`\n${passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''} (${Math.round((Date.now() - started) / 1000)} s)`);
+  console.log(`\n${passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''} (${retries.length} retried, ${Math.round((Date.now() - started) / 1000)} s)`);
   process.exit(failed ? 1 : 0);
 }
 

@@ -1,4 +1,3 @@
-import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type Page } from '@playwright/test';
 
 // Signed out, on /systems/new (the 5.1 starting System: the invented 6.4 × 4.9 × 2.7 m room).
@@ -60,15 +59,4 @@ test('Headroom: cautions, max SPL per channel and an amplifier change that moves
   await expect(maxSpl).not.toHaveText(before ?? '');
   const after = Number.parseFloat((await maxSpl.textContent()) ?? '');
   expect(after - Number.parseFloat(before ?? '')).toBeCloseTo(3.0, 0);
-});
-
-test('the three room panels have no serious or critical axe violations', async ({ page }) => {
-  for (const name of ['Modes', 'Layout', 'Headroom'] as const) {
-    await openPanel(page, name);
-    await expect(page.getByRole('tabpanel')).toBeVisible();
-    await page.waitForLoadState('networkidle');
-    const results = await new AxeBuilder({ page }).include('[role=tabpanel]').analyze();
-    const bad = results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
-    expect(bad.map((v) => `${name}: ${v.id} — ${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join(', ')}`)).toEqual([]);
-  }
 });
