@@ -24,11 +24,17 @@ export { blendResponse } from './blend/blend-response';
 export { blendSumResponse, type BlendSumOptions, type BlendSumResult } from './blend/blend-sum';
 export { blendGrid, isBlendGrid, type BlendGrid } from './blend/blend-kernel';
 export { blendMetrics, type BlendMetrics, type BlendMetricsOptions } from './blend/blend-metrics';
-export { crossoverSweep, type CrossoverSweepOptions, type CrossoverSweepRow, type CrossoverSweepResult } from './blend/crossover-sweep';
 
 export { alignSubToMains } from './timing/align-sub-to-mains';
-export { alignSubs } from './timing/align-subs';
-export type { AlignmentResult, AlignSubToMainsOptions, AlignSubsOptions, AlignSubsResult, LevelVersusDelay, SubSetting } from './timing/timing-types';
+export type { AlignmentResult, AlignSubToMainsOptions, LevelVersusDelay } from './timing/timing-types';
+
+export { systemPaths, retimeSources, type SystemModel, type SystemSource, type CrossoverSetting } from './system/system-model';
+export { assessBlend, assessmentGrid, bandLevelDb, effectiveMinus3Hz, FLATNESS_DEFINITION, ASSESSMENT_FLOOR_HZ, type AssessBlendOptions, type BlendAssessment } from './system/blend-assessment';
+export { ADVICE_RULES, compareAssessments, type AdviceComparison } from './system/advice-rules';
+export { rolloffMinus3DbHz } from './system/rolloff-minus3';
+export { searchTiming, smallestChange, type TimingMove, type AssessedMove, type FlatnessVersusShift, type TimingSearchOptions, type TimingSearchResult } from './system/timing-search';
+export { subTimingAdvice, groupTimingAdvice, type TimingAdvice, type SubTimingAdvice } from './system/timing-advice';
+export { crossoverSweep, rankSweepRows, type RankableSweepRow, type CrossoverSweepOptions, type CrossoverSweepRow, type CrossoverSweepResult } from './system/crossover-sweep';
 
 export type { RoomDimensions, PointM, ModeKind, RoomMode } from './room/room-types';
 export { roomModes, MAX_ROOM_MODES, type RoomModesOptions, type RoomModesResult } from './room/room-modes';
@@ -50,7 +56,7 @@ export { speakerAngles, type SpeakerAngles, type SpeakerAnglesOptions } from './
 export { checkSpeakerAngles, type CheckSpeakerAnglesOptions, type SpeakerAngleCheck } from './layout/check-speaker-angles';
 export { includedAngleDeg, type IncludedAngleOptions } from './layout/included-angle';
 export { toeInDeg, type ToeInOptions, type ToeInResult } from './layout/toe-in';
-export { delaysAndTrims, type DelaysAndTrims, type DelaysAndTrimsOptions } from './layout/delays-and-trims';
+export { channelSettings, SETTING_RESOLUTION, type ChannelSettings, type ChannelSettingsMain, type ChannelSettingsSub, type ChannelSettingsOptions } from './layout/channel-settings';
 export { nominalSpeakerPosition, type NominalPosition, type NominalPositionOptions } from './layout/nominal-position';
 
 export { maxSplDb, REFERENCE_LEVEL_DB, REFERENCE_PEAK_DB, LFE_PEAK_DB, type MaxSplOptions, type MaxSplResult } from './headroom/max-spl';

@@ -6,6 +6,7 @@ import { findUserByEmail } from './data/users';
 import { AppError, unauthorized } from './errors';
 import { DUMMY_HASH, verifyPassword } from './passwords';
 import { assertSignInAllowed, clearFailedSignIns, recordFailedSignIn } from './rate-limit';
+import { safeReturnPath } from './return-path';
 import { signInSchema } from './validations/auth';
 
 declare module 'next-auth' {
@@ -60,6 +61,10 @@ export const authOptions: NextAuthOptions = {
     }),
   ],
   callbacks: {
+    /** Only ever back to this site: a callbackUrl on another origin (or a `//host` path) goes to the home page. */
+    async redirect({ url, baseUrl }) {
+      return `${baseUrl}${safeReturnPath(url, '/', baseUrl)}`;
+    },
     async jwt({ token, user }) {
       if (user) {
         token.uid = user.id;

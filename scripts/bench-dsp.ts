@@ -13,11 +13,15 @@ import {
   blendResponse,
   blendSumResponse,
   crossoverSweep,
+  groupTimingAdvice,
   logFrequencyGridHz,
   modalTransfer,
   modalTransfers,
   roomModes,
+  subTimingAdvice,
   type PathSpec,
+  type SystemModel,
+  type SystemSource,
   type ResponseCurves,
 } from '../dsp';
 
@@ -26,6 +30,9 @@ interface Figures {
   blendSum: Timing;
   blendSumPrepared: Timing;
   sweep: Timing;
+  sweepTwoSubs: Timing;
+  subAdvice: Timing;
+  groupAdvice: Timing;
   modesBatch: Timing;
   modesPairwise: Timing;
 }
@@ -78,16 +85,29 @@ function measure(): Figures {
   const blendSumPrepared = time(() => {
     sink += blendSumResponse({ temperatureC: 20, frequencyHz: prepared, paths, into }).sum.groupDelayMs[100] as number;
   }, 3000, 10000);
+  // The whole system: one main and one sub (as the sweep before the whole-system model), then two subs.
+  const lr4 = { family: 'linkwitz-riley', order: 4 } as const;
+  const sub = (name: string, distanceM: number): SystemSource => ({ name, distanceM, delayMs: 0, gainDb: 0, invert: false, rolloff: { kind: 'lowpass', cornerHz: 200, q: 0.707 } });
+  const oneSub: SystemModel = {
+    temperatureC: 20,
+    crossoverHz: 80,
+    mainsHighpass: lr4,
+    subLowpass: lr4,
+    mains: { name: 'L', distanceM: 3, delayMs: 0, gainDb: 0, invert: false, rolloff: { kind: 'sealed', cornerHz: 55, q: 0.707 } },
+    subs: [sub('sub', 3.6)],
+  };
+  const twoSubs: SystemModel = { ...oneSub, subs: [sub('front', 3.6), sub('back', 4.4)] };
   const sweep = time(() => {
-    const r = crossoverSweep({
-      temperatureC: 20,
-      mainsRolloff: { kind: 'sealed', cornerHz: 55, q: 0.707 },
-      subRolloff: { kind: 'lowpass', cornerHz: 200, q: 0.707 },
-      mainsFilter: { family: 'linkwitz-riley', order: 4 },
-      subFilter: { family: 'linkwitz-riley', order: 4 },
-      candidatesHz,
-    });
-    sink += r.rows.length;
+    sink += crossoverSweep({ model: oneSub, pairings: [{ mainsFilter: lr4, subFilter: lr4 }], candidatesHz }).rows.length;
+  }, 5, 41);
+  const sweepTwoSubs = time(() => {
+    sink += crossoverSweep({ model: twoSubs, pairings: [{ mainsFilter: lr4, subFilter: lr4 }], candidatesHz }).rows.length;
+  }, 5, 41);
+  const subAdvice = time(() => {
+    sink += subTimingAdvice(twoSubs, 0).after.flatnessDb;
+  }, 5, 41);
+  const groupAdvice = time(() => {
+    sink += groupTimingAdvice(twoSubs).after.flatnessDb;
   }, 5, 41);
   const modesBatch = time(() => {
     const { modes } = roomModes({ ...room, maxHz: 300, temperatureC: 20 });
@@ -104,7 +124,7 @@ function measure(): Figures {
     }
   }, 5, 41);
   if (!Number.isFinite(sink)) console.log('(sink)', sink);
-  return { blendAll, blendSum, blendSumPrepared, sweep, modesBatch, modesPairwise };
+  return { blendAll, blendSum, blendSumPrepared, sweep, sweepTwoSubs, subAdvice, groupAdvice, modesBatch, modesPairwise };
 }
 
 // scipy: each path from signal.freqs, the sum's magnitude, phase and group delay (from the polynomial derivatives),
@@ -187,7 +207,12 @@ if (process.env.SEAMLINE_BENCH_CHILD === '1') {
   } else {
     console.log('    scipy comparison skipped (python3 with scipy not found)');
   }
-  console.log(`  crossover sweep, ${candidatesHz.length} candidates, delay ±20 ms + polarity search:  ${cell((f) => f.sweep)}   target ≤ 20 ms`);
+  console.log(`  crossover sweep on the whole system, ${candidatesHz.length} candidates, each at its best sub shift ±20 ms + polarity, every proposal assessed:`);
+  console.log(`    one main + one sub:                                           ${cell((f) => f.sweep)}   target ≤ 20 ms`);
+  console.log(`    one main + two subs:                                          ${cell((f) => f.sweepTwoSubs)}`);
+  console.log(`  Timing advice, one main + two subs (scan ±20 ms, both polarities, assessed):`);
+  console.log(`    one sub against the rest (with the flatness-vs-delay curve):  ${cell((f) => f.subAdvice)}`);
+  console.log(`    all subs (coordinate descent, ≤ 4 rounds):                    ${cell((f) => f.groupAdvice)}`);
   console.log(`  room modes to 300 Hz + modal sums, 2 subs × 6 seats × ${modalGrid.length} frequencies:`);
   console.log(`    roomModes + modalTransfers (all pairs in one call):           ${cell((f) => f.modesBatch)}   target ≤ 20 ms`);
   console.log(`    roomModes + 12 × modalTransfer:                               ${cell((f) => f.modesPairwise)}`);

@@ -10,6 +10,7 @@ import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
+import { safeReturnPath } from '@/lib/return-path';
 import { signInSchema } from '@/lib/validations/auth';
 
 type Values = z.input<typeof signInSchema>;
@@ -19,12 +20,15 @@ export function SignInForm() {
   const params = useSearchParams();
   const [error, setError] = useState<string | null>(null);
   const { register, handleSubmit, formState } = useForm<Values>({ resolver: zodResolver(signInSchema) });
-  const next = params.get('callbackUrl') ?? params.get('next') ?? '/library';
-  const safeNext = next.startsWith('/') && !next.startsWith('//') ? next : '/library';
+  // Only ever a path on this site; it may hold a whole anonymous System (`/systems/new?s=…`), which must come back intact.
+  const requested = params.get('callbackUrl') ?? params.get('next');
+  const safeNext = safeReturnPath(requested, '/library');
+  const carry = requested && safeNext !== '/library' ? `?callbackUrl=${encodeURIComponent(safeNext)}` : '';
 
   const onSubmit = handleSubmit(async (values) => {
     setError(null);
-    const res = await signIn('credentials', { email: values.email, password: values.password, redirect: false });
+    // next-auth keeps its callbackUrl in a cookie: give it a short one; this form does the navigation itself.
+    const res = await signIn('credentials', { email: values.email, password: values.password, redirect: false, callbackUrl: '/library' });
     if (!res || res.error) {
       setError(res?.error && res.error !== 'CredentialsSignin' ? res.error : 'That e-mail and password do not match an account.');
       return;
@@ -47,7 +51,7 @@ export function SignInForm() {
         <Link href="/forgot" className="text-mains underline">
           Forgot password?
         </Link>
-        <Link href="/sign-up" className="text-mains underline">
+        <Link href={`/sign-up${carry}`} className="text-mains underline">
           Create an account
         </Link>
       </div>

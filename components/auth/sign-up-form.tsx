@@ -2,7 +2,7 @@
 
 import { zodResolver } from '@hookform/resolvers/zod';
 import Link from 'next/link';
-import { useRouter } from 'next/navigation';
+import { useRouter, useSearchParams } from 'next/navigation';
 import { signIn } from 'next-auth/react';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
@@ -11,13 +11,19 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError, apiFetch } from '@/lib/client/api';
+import { safeReturnPath } from '@/lib/return-path';
 import { signUpSchema } from '@/lib/validations/auth';
 
 type Values = z.input<typeof signUpSchema>;
 
 export function SignUpForm() {
   const router = useRouter();
+  const params = useSearchParams();
   const [error, setError] = useState<string | null>(null);
+  // Where "Sign in to save" (or a page that needs an account) asked to come back to: only ever a path on this site.
+  const requested = params.get('callbackUrl');
+  const safeNext = safeReturnPath(requested, '/library');
+  const carry = requested && safeNext !== '/library' ? `?callbackUrl=${encodeURIComponent(safeNext)}` : '';
   const { register, handleSubmit, formState, setError: setFieldError } = useForm<Values>({ resolver: zodResolver(signUpSchema) });
 
   const onSubmit = handleSubmit(async (values) => {
@@ -31,12 +37,12 @@ export function SignUpForm() {
       } else setError('Could not create the account.');
       return;
     }
-    const res = await signIn('credentials', { email: values.email, password: values.password, redirect: false });
+    const res = await signIn('credentials', { email: values.email, password: values.password, redirect: false, callbackUrl: '/library' });
     if (res?.error) {
       setError('The account was created, but signing in failed. Try signing in.');
       return;
     }
-    router.push('/library');
+    router.push(safeNext);
     router.refresh();
   });
 
@@ -53,7 +59,7 @@ export function SignUpForm() {
       </Button>
       <p className="text-sm">
         Already have one?{' '}
-        <Link href="/sign-in" className="text-mains underline">
+        <Link href={`/sign-in${carry}`} className="text-mains underline">
           Sign in
         </Link>
       </p>

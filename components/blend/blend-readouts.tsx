@@ -13,7 +13,7 @@ function Item({ label, value, detail, testId, tone }: { label: string; value: st
   );
 }
 
-/** The Blend read-outs (SPEC §4): levels at the crossover, phase difference, deviation, dip, −3 dB point. */
+/** The Blend read-outs (SPEC §4): levels at the crossover, phase difference, the one flatness measure, dip, −3 dB point. */
 export function BlendReadouts({ metrics, pathNames }: { metrics: BlendMetricsAnswer | null; pathNames: string[] }) {
   if (!metrics) {
     return <p className="text-sm text-ink-faint">Read-outs appear when the blend has been computed.</p>;
@@ -34,14 +34,14 @@ export function BlendReadouts({ metrics, pathNames }: { metrics: BlendMetricsAns
         testId="readout-phase-difference"
       />
       <Item
-        label="Largest deviation, ±1 octave"
-        value={formatSigned(metrics.maxDeviationDb, 'dB', 1)}
-        detail={`at ${formatHzReadout(metrics.maxDeviationHz)}, against the sum at ${formatHzReadout(metrics.referenceHz)}`}
-        tone={Math.abs(metrics.maxDeviationDb) > 3 ? 'warn' : undefined}
+        label={`Flatness, ${formatHzReadout(metrics.bandHz[0])}–${formatHzReadout(metrics.bandHz[1])}`}
+        value={`±${metrics.flatnessDb.toFixed(2)} dB`}
+        detail={`largest deviation ${formatSigned(metrics.maxDeviationDb, 'dB', 2)} at ${formatHzReadout(metrics.maxDeviationHz)}, from the sum at ${formatHzReadout(metrics.referenceHz)}`}
+        tone={metrics.flatnessDb > 3 ? 'warn' : undefined}
         testId="readout-max-deviation"
       />
       <Item label="Deepest dip" value={formatSigned(metrics.deepestDipDb, 'dB', 1)} detail={`at ${formatHzReadout(metrics.deepestDipHz)}`} tone={metrics.deepestDipDb < -3 ? 'warn' : undefined} testId="readout-deepest-dip" />
-      <Item label="System −3 dB point" value={metrics.minus3DbHz === null ? 'below 10 Hz' : formatHzReadout(metrics.minus3DbHz)} detail="low end of the sum" testId="readout-minus3" />
+      <Item label="System −3 dB point" value={metrics.minus3DbHz === null ? 'below 5 Hz' : formatHzReadout(metrics.minus3DbHz)} detail="low end of the sum" testId="readout-minus3" />
     </dl>
   );
 }

@@ -8,13 +8,17 @@ import { Notice } from '@/components/ui/notice';
 import { NumberField } from '@/components/ui/number-field';
 import { DEMO_PROFILES } from '@/lib/demo/profiles';
 import { useCrossoverSweep } from '@/lib/hooks/use-crossover-sweep';
-import { blendMainSpeaker, profileById } from '@/lib/system-model';
+import { blendMainSpeaker } from '@/lib/system-model';
 import type { CrossoverSweepAnswerRow } from '@/lib/system-model/blend-compute';
 import { applySweepRow, candidateRangeHz, sweepRequestFromDocument } from '@/lib/system-model/blend-sweep';
 import type { Slope, SpeakerProfile } from '@/lib/validations/system';
 import { slopeShortName } from './slope-select';
 
 type Pairing = { mainsFilter: Slope; subFilter: Slope };
+
+/** The processor settings a row runs: "mains 0.00 ms, Sub front left 1.23 ms inverted, …". */
+const settingsText = (r: CrossoverSweepAnswerRow): string =>
+  [`mains ${formatNumber(r.set.mainsDelayMs, 2)} ms`, ...r.set.subs.map((s) => `${s.name} ${formatNumber(s.delayMs, 2)} ms ${s.invert ? 'inverted' : 'normal'}`)].join(', ');
 
 const LR = (order: number): Slope => ({ family: 'linkwitz-riley', order });
 const BW = (order: number): Slope => ({ family: 'butterworth', order });
@@ -31,18 +35,30 @@ const PAIRINGS: Pairing[] = [
 const pairingKey = (p: Pairing) => `${slopeShortName(p.mainsFilter)}/${slopeShortName(p.subFilter)}`;
 const MAX_PAIRINGS = 6;
 
-type SortKey = 'rank' | 'crossoverHz' | 'flatnessDb' | 'deepestDipDb' | 'relativeDelayMs' | 'mainsLowBassDb';
+type SortKey = 'rank' | 'crossoverHz' | 'flatnessDb' | 'minus3DbHz' | 'shiftMs' | 'mainsLowBassDb';
 const COLUMNS: { key: SortKey | null; label: string; title?: string }[] = [
   { key: 'rank', label: 'Rank' },
   { key: 'crossoverHz', label: 'Crossover' },
   { key: null, label: 'Slopes', title: 'mains high-pass / sub low-pass' },
-  { key: 'flatnessDb', label: 'Flatness', title: 'largest deviation of the sum within ±1 octave of the crossover, at the best delay and polarity' },
-  { key: 'deepestDipDb', label: 'Deepest dip' },
-  { key: 'relativeDelayMs', label: 'Delay to set', title: 'processor delay for these distances (only positive delays)' },
+  { key: 'flatnessDb', label: 'Flatness', title: 'largest deviation of the sum from its level at 4·fc over fc/2 … 2·fc, the whole system at this row’s delays and polarity' },
+  { key: 'minus3DbHz', label: '−3 dB point', title: 'the system’s low-frequency extension at this setting' },
+  { key: 'shiftMs', label: 'Sub delays', title: 'every sub’s delay moved by this (negative: the mains get the delay); the processor settings are in the row’s tooltip and on the Settings sheet after Apply' },
   { key: null, label: 'Sub polarity' },
   { key: 'mainsLowBassDb', label: 'Mains at fc/2', title: 'how much low bass the mains still carry: their level one octave below the crossover against two octaves above' },
+  { key: null, label: 'Notes' },
   { key: null, label: '' },
 ];
+
+/** What a row's marks mean, in words. */
+function rowNotes(r: CrossoverSweepAnswerRow, lowestClearHz: number | null): string {
+  const notes: string[] = [];
+  if (r.present) notes.push('the present setting');
+  if (r.worthIt) notes.push(r.gainDb >= 0.5 ? `${formatNumber(r.gainDb, 2)} dB flatter than the present setting` : 'clear of the mains’ roll-off, no less flat');
+  if (r.nearMainsRolloff) notes.push(`below ${lowestClearHz === null ? 'the mains’ roll-off' : formatHzReadout(lowestClearHz)}: too close to the mains’ own roll-off`);
+  if (!r.keepsBass) notes.push(r.extensionLossOctaves > 1 / 3 ? `raises the −3 dB point by ${formatNumber(r.extensionLossOctaves * 12, 1)} semitones` : `cuts the bass below the crossover by ${formatNumber(r.bassCutDb, 1)} dB`);
+  if (!r.present && r.keepsBass && !r.worthIt && !r.nearMainsRolloff) notes.push(r.gainDb < 0 ? 'less flat than the present setting' : 'gains under 0.5 dB: not worth a change');
+  return notes.join('; ');
+}
 
 function profileOptions(docProfiles: SpeakerProfile[], kind: 'main' | 'sub'): SpeakerProfile[] {
   const seen = new Set<string>();
@@ -78,31 +94,24 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
 
   const run = () => {
     setApplied(null);
-    void sweep.run(sweepRequestFromDocument(doc, { channel: speaker?.channel, mainsProfile, subProfile, pairings, candidatesHz }));
+    const request = sweepRequestFromDocument(doc, { channel: speaker?.channel, mainsProfile, subProfile, pairings, candidatesHz });
+    if (request) void sweep.run(request);
   };
 
   const rows = useMemo(() => {
     const sorted = [...sweep.rows];
     const { key, descending } = sort;
-    sorted.sort((a, b) => (key === 'relativeDelayMs' ? Math.abs(a[key]) - Math.abs(b[key]) : a[key] - b[key]) * (descending ? -1 : 1));
+    const value = (r: CrossoverSweepAnswerRow): number => (key === 'shiftMs' ? Math.abs(r.shiftMs) : key === 'minus3DbHz' ? (r.assessment.minus3DbHz ?? 0) : r[key]);
+    sorted.sort((a, b) => (value(a) - value(b)) * (descending ? -1 : 1));
     return sorted;
   }, [sweep.rows, sort]);
 
   const apply = (row: CrossoverSweepAnswerRow) => {
-    update((d) => {
-      let next = applySweepRow(d, row, speaker?.channel);
-      // Sweeping another profile than the System's means using it: copy it in and point the speakers/subs at it.
-      const addProfile = (p: SpeakerProfile | undefined) => {
-        if (p && !profileById(next, p.id)) next = { ...next, profiles: [...next.profiles, structuredClone(p)] };
-      };
-      addProfile(mainsProfile);
-      addProfile(subProfile);
-      if (mainsProfile && speaker && speaker.profileId !== mainsProfile.id) next = { ...next, speakers: next.speakers.map((s) => (s.profileId === speaker.profileId ? { ...s, profileId: mainsProfile.id } : s)) };
-      if (subProfile) next = { ...next, subs: next.subs.map((s) => ({ ...s, profileId: subProfile.id })) };
-      return next;
-    });
-    setApplied(`${formatHzReadout(row.crossoverHz)}, ${pairingKey(row)}, ${row.subDelayMs > 0 ? `sub delay ${formatNumber(row.subDelayMs, 2)} ms` : `mains delay ${formatNumber(row.mainsDelayMs, 2)} ms`}, sub ${row.invertSub ? 'inverted' : 'normal'}`);
+    // Exactly the crossover, slopes, delays and polarities the row was assessed with (and the profiles tried in).
+    update((d) => applySweepRow(d, row, { channel: speaker?.channel, mainsProfile, subProfile }));
+    setApplied(`${formatHzReadout(row.crossoverHz)}, ${pairingKey(row)}, ${settingsText(row)}`);
   };
+  const lowestClearHz = sweep.lowestClearHz;
 
   const headerSort = (key: SortKey) => setSort((s) => ({ key, descending: s.key === key ? !s.descending : false }));
 
@@ -112,7 +121,9 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
         <h3 id={`${id}-title`} className="text-base font-semibold">
           Crossover sweep
         </h3>
-        <p className="text-sm text-ink-soft">Try candidate crossover points for one pairing of a main and a sub profile; each row is at its best sub delay and polarity for the distances of {speaker?.channel ?? 'the mains'} and {doc.subs[0]?.name ?? 'the sub'}.</p>
+        <p className="text-sm text-ink-soft">
+          Try candidate crossover points and slopes on the whole System ({speaker?.channel ?? 'the mains'} and {doc.subs.length === 1 ? doc.subs[0]?.name : `all ${doc.subs.length} subs`}), each at the subs&apos; best delay and polarity. The present setting is a row of its own; only a row that is at least 0.5 dB flatter, keeps the −3 dB point within a third of an octave and the bass within 1 dB ranks above it.
+        </p>
       </div>
       <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-[1fr_1fr_auto_auto_auto]">
         <div className="flex flex-col gap-1">
@@ -192,6 +203,11 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
         </Notice>
       ) : null}
       {applied ? <Notice kind="ok">Applied to the System: {applied}.</Notice> : null}
+      {rows.length && sweep.mainsMinus3DbHz !== null && lowestClearHz !== null ? (
+        <p className="text-sm text-ink-soft" data-testid="sweep-mains-rolloff">
+          {speaker?.channel ?? 'The mains'} roll off by themselves at {formatHzReadout(sweep.mainsMinus3DbHz)} (−3 dB); crossovers below {formatHzReadout(lowestClearHz)}, half an octave above it, are marked and ranked down (common practice).
+        </p>
+      ) : null}
       {rows.length ? (
         <div className="overflow-x-auto">
           <table className="w-full min-w-[52rem] border-collapse text-sm" data-testid="sweep-table">
@@ -214,21 +230,31 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
             </thead>
             <tbody className="num whitespace-nowrap">
               {(showAll ? rows : rows.slice(0, 10)).map((r) => (
-                <tr key={`${pairingKey(r)}-${r.crossoverHz}`} className={`border-b border-line ${r.rank === 1 ? 'bg-[#EEF7F6]' : ''}`} data-testid={`sweep-row-${r.rank}`}>
+                <tr
+                  key={`${pairingKey(r)}-${r.crossoverHz}-${r.present ? 'present' : 'try'}`}
+                  className={`border-b border-line ${r.rank === 1 ? 'bg-[#EEF7F6]' : ''} ${r.keepsBass && !r.nearMainsRolloff ? '' : 'text-ink-soft'}`}
+                  data-testid={`sweep-row-${r.rank}`}
+                  title={settingsText(r)}
+                >
                   <td className="px-2 py-1.5">{r.rank}</td>
                   <td className="px-2 py-1.5">{formatHzReadout(r.crossoverHz)}</td>
                   <td className="px-2 py-1.5">{pairingKey(r)}</td>
                   <td className="px-2 py-1.5">±{formatNumber(r.flatnessDb, 2)} dB</td>
-                  <td className="px-2 py-1.5">
-                    {formatSigned(r.deepestDipDb, 'dB', 1)} <span className="text-ink-faint">at {formatHzReadout(r.dipHz)}</span>
-                  </td>
-                  <td className="px-2 py-1.5">{r.subDelayMs > 0 ? `sub +${formatNumber(r.subDelayMs, 2)} ms` : r.mainsDelayMs > 0 ? `mains +${formatNumber(r.mainsDelayMs, 2)} ms` : 'none'}</td>
-                  <td className="px-2 py-1.5">{r.invertSub ? 'inverted' : 'normal'}</td>
+                  <td className="px-2 py-1.5">{r.assessment.minus3DbHz === null ? 'below 5 Hz' : formatHzReadout(r.assessment.minus3DbHz)}</td>
+                  <td className="px-2 py-1.5">{r.present ? 'as set' : Math.abs(r.shiftMs) < 0.005 ? 'unchanged' : r.shiftMs > 0 ? `+${formatNumber(r.shiftMs, 2)} ms` : `mains +${formatNumber(-r.shiftMs, 2)} ms`}</td>
+                  <td className="px-2 py-1.5">{r.present ? 'as set' : r.flip ? 'flip' : 'unchanged'}</td>
                   <td className="px-2 py-1.5">{formatSigned(r.mainsLowBassDb, 'dB', 1)}</td>
+                  <td className="px-2 py-1.5 text-xs whitespace-normal" data-testid={`sweep-notes-${r.rank}`}>
+                    {rowNotes(r, lowestClearHz)}
+                  </td>
                   <td className="px-2 py-1">
-                    <Button variant="secondary" className="px-2.5 py-1" disabled={readOnly} onClick={() => apply(r)} aria-label={`Apply ${formatHzReadout(r.crossoverHz)} ${pairingKey(r)} to the System`} data-testid={`sweep-apply-${r.rank}`}>
-                      Apply
-                    </Button>
+                    {r.present ? (
+                      <span className="text-xs text-ink-faint">kept</span>
+                    ) : (
+                      <Button variant="secondary" className="px-2.5 py-1" disabled={readOnly} onClick={() => apply(r)} aria-label={`Apply ${formatHzReadout(r.crossoverHz)} ${pairingKey(r)} to the System`} data-testid={`sweep-apply-${r.rank}`}>
+                        Apply
+                      </Button>
+                    )}
                   </td>
                 </tr>
               ))}
@@ -241,7 +267,9 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
           ) : null}
         </div>
       ) : !sweep.running ? (
-        <p className="text-sm text-ink-faint">Default candidates: 40–150 Hz in 5 Hz steps. Lower flatness is better; a more negative &quot;Mains at fc/2&quot; means the mains carry less of the deep bass.</p>
+        <p className="text-sm text-ink-faint">
+          Default candidates: 40–150 Hz in 5 Hz steps. Each row is the whole System ({speaker?.channel ?? 'the mains'} and every sub) at that crossover, with the subs&apos; delays and polarity at their best. Rows worth a change (at least 0.5 dB flatter, keeping the bass) rank above the present setting; a more negative &quot;Mains at fc/2&quot; means the mains carry less of the deep bass.
+        </p>
       ) : null}
     </section>
   );

@@ -8,9 +8,11 @@ import { BlendPanel } from '@/components/blend/blend-panel';
 import { Button, buttonClass } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { ApiError, apiFetch } from '@/lib/client/api';
-import { decodeDocument, encodeDocument, URL_STATE_PARAM } from '@/lib/client/url-state';
+import { decodeDocument, encodeDocument, keepPendingSystem, RESTORE_PARAM, RESUME_PARAM, signInToSaveHref, takePendingSystem, URL_STATE_PARAM } from '@/lib/client/url-state';
 import { newSystemDocument } from '@/lib/demo/systems';
-import { systemDocumentSchema, type SystemDocument } from '@/lib/validations/system';
+import { outsideForMlpGeometry, positionsOutsideRoom } from '@/lib/system-model/room-bounds';
+import { systemDocumentDraftSchema, systemDocumentSchema, type SystemDocument } from '@/lib/validations/system';
+import { OutsideRoomNotice } from './outside-room-notice';
 import { isPanelId, PanelTabs, PANELS, type PanelId } from './panel-tabs';
 
 import { SystemContext, type SystemEditorValue, type UnitSystem } from './system-context';
@@ -72,6 +74,8 @@ export function SystemEditor({ saved, signedIn }: Props) {
   const [urlProblem, setUrlProblem] = useState<string | null>(null);
   const [draftOffer, setDraftOffer] = useState<{ name: string; doc: SystemDocument } | null>(null);
   const [copied, setCopied] = useState(false);
+  /** The editor was opened again after signing in (or up) from "Sign in to save". */
+  const [resumed, setResumed] = useState(false);
   const hydrated = useRef(false);
   const units = useSyncExternalStore(subscribeUnits, readUnits, () => 'metric' as UnitSystem);
   const readOnly = saved?.role === 'viewer';
@@ -85,16 +89,32 @@ export function SystemEditor({ saved, signedIn }: Props) {
     if (isPanelId(p)) setPanel(p);
     if (!saved) {
       const { doc: fromUrl, problem } = decodeDocument(params.get(URL_STATE_PARAM));
-      if (fromUrl) setDoc(fromUrl);
-      setUrlProblem(problem);
+      const returning = params.get(RESUME_PARAM) === '1';
+      const waiting = params.get(RESTORE_PARAM) === '1';
+      // Back from signing in: the document is in the link, or (when it was too long for one) kept in this tab.
+      const pending = returning || waiting ? takePendingSystem(window.sessionStorage) : null;
       const n = params.get('name');
-      if (n) setName(n.slice(0, 200));
+      if (fromUrl) {
+        setDoc(fromUrl);
+        if (n) setName(n.slice(0, 200));
+      } else if (pending) {
+        // Also when the link arrived damaged (cut short on the way): the copy kept in this tab is the same System.
+        setDoc(pending.doc);
+        setName((n ?? pending.name).slice(0, 200));
+        if (!isPanelId(p) && isPanelId(pending.panel)) setPanel(pending.panel);
+      } else if (n) setName(n.slice(0, 200));
+      setUrlProblem(
+        pending && !fromUrl
+          ? null
+          : (problem ?? (waiting && !pending ? 'The System you were editing before signing in was kept in the browser tab you started in, and it is not in this one; a fresh System was opened instead.' : null)),
+      );
+      setResumed(returning);
     } else {
       try {
         const kept = window.localStorage.getItem(draftKey(saved.id));
         if (kept) {
           const parsed = JSON.parse(kept) as { name: string; doc: unknown };
-          const valid = systemDocumentSchema.safeParse(parsed.doc);
+          const valid = systemDocumentDraftSchema.safeParse(parsed.doc);
           if (valid.success) setDraftOffer({ name: String(parsed.name).slice(0, 200), doc: valid.data });
         }
       } catch {
@@ -114,6 +134,8 @@ export function SystemEditor({ saved, signedIn }: Props) {
       if (!saved) {
         url.searchParams.set(URL_STATE_PARAM, encodeDocument(doc));
         url.searchParams.set('name', name);
+        url.searchParams.delete(RESUME_PARAM);
+        url.searchParams.delete(RESTORE_PARAM);
       }
       window.history.replaceState(window.history.state, '', url.toString());
     }, 150);
@@ -146,6 +168,10 @@ export function SystemEditor({ saved, signedIn }: Props) {
 
   const value: SystemEditorValue = useMemo(() => ({ doc, update, units, setUnits, readOnly }), [doc, update, units, setUnits, readOnly]);
   const validity = useMemo(() => systemDocumentSchema.safeParse(doc), [doc]);
+  const outside = useMemo(() => positionsOutsideRoom(doc), [doc]);
+  // Blend, Timing and Headroom measure from the MLP to every speaker and sub: none is shown while one of those is outside.
+  const blocking = panel === 'blend' || panel === 'timing' || panel === 'headroom' ? outsideForMlpGeometry(doc, outside) : [];
+  const signInToSave = useMemo(() => (signedIn || saved ? null : signInToSaveHref({ doc, name, panel })), [signedIn, saved, doc, name, panel]);
 
   async function saveNew(asName: string) {
     setSaveState({ kind: 'saving' });
@@ -244,15 +270,22 @@ export function SystemEditor({ saved, signedIn }: Props) {
             <Button onClick={save} disabled={saveState.kind === 'saving' || !validity.success || (saved && !dirty)} data-testid="save-button">
               {saveState.kind === 'saving' ? 'Saving…' : saved ? 'Save' : 'Save to Library'}
             </Button>
-          ) : (
-            <Link href={`/sign-in?callbackUrl=${encodeURIComponent('/systems/new')}`} className={buttonClass('primary')}>
+          ) : signInToSave ? (
+            <Link href={signInToSave.href} prefetch={false} onClick={() => keepPendingSystem(window.sessionStorage, { doc, name, panel })} className={buttonClass('primary')} data-testid="sign-in-to-save">
               Sign in to save
             </Link>
-          )}
+          ) : null}
         </div>
 
         <div aria-live="polite" className="no-print flex flex-col gap-2">
           {urlProblem ? <Notice kind="warn">{urlProblem}</Notice> : null}
+          {resumed && signedIn && !saved ? (
+            <div data-testid="resume-notice">
+              <Notice kind="info" title="You are signed in, and your System is as you left it">
+                {validity.success ? 'Save to Library keeps it in your Library.' : 'Fix what is listed below, then Save to Library keeps it in your Library.'}
+              </Notice>
+            </div>
+          ) : null}
           {!validity.success ? (
             <Notice kind="error" title="This System cannot be saved yet">
               {validity.error.issues.slice(0, 3).map((i) => (
@@ -310,7 +343,23 @@ export function SystemEditor({ saved, signedIn }: Props) {
         <PanelTabs active={panel} onChange={setPanel} />
         <section role="tabpanel" id={`panel-${panel}`} aria-labelledby={`tab-${panel}`} className="min-h-[60vh]">
           <h2 className="sr-only">{PANELS.find((p) => p.id === panel)?.label}</h2>
-          <ActivePanel />
+          {blocking.length ? (
+            <div className="py-4">
+              <OutsideRoomNotice outside={blocking} title="Not computed: a position is outside the room" testId="panel-outside-room">
+                <p className="mt-1">This page measures from the MLP to every speaker and sub. Move them inside on Layout, or make the room larger on Modes; changing the room never moves anything.</p>
+                <div className="mt-2 flex flex-wrap gap-2">
+                  <Button variant="secondary" onClick={() => setPanel('layout')}>
+                    Open Layout
+                  </Button>
+                  <Button variant="secondary" onClick={() => setPanel('modes')}>
+                    Open Modes
+                  </Button>
+                </div>
+              </OutsideRoomNotice>
+            </div>
+          ) : (
+            <ActivePanel />
+          )}
         </section>
       </div>
     </SystemContext.Provider>

@@ -6,7 +6,8 @@ import { useSystem } from '@/components/editor/system-context';
 import { Notice } from '@/components/ui/notice';
 import { NumberField } from '@/components/ui/number-field';
 import { useHeadroom, type HeadroomAnswer, type HeadroomRowOut } from '@/lib/hooks/use-headroom';
-import { distanceToSeatM, profileById } from '@/lib/system-model';
+import { profileById } from '@/lib/system-model';
+import { systemChannelSettings } from '@/lib/system-model/channel-settings';
 import { formatLength } from '@/lib/units';
 
 const statusOf = (headroomDb: number): Bar['status'] => (headroomDb >= 3 ? 'ok' : headroomDb >= 0 ? 'warn' : 'fail');
@@ -103,8 +104,11 @@ function Cautions({ data }: { data: HeadroomAnswer | undefined }) {
 
 function HeadroomTable({ data, onPower, readOnly }: { data: HeadroomAnswer; onPower: (kind: 'speaker' | 'sub', index: number, powerW: number) => void; readOnly: boolean }) {
   const { doc, units } = useSystem();
+  // Distances as the Settings sheet and Layout give them (0.01 m), document order.
+  const settings = systemChannelSettings(doc);
   const row = (r: HeadroomRowOut, kind: 'speaker' | 'sub', index: number) => {
     const item = kind === 'speaker' ? doc.speakers[index] : doc.subs[index];
+    const distanceM = (kind === 'speaker' ? settings.mains[index] : settings.subs[index])?.distanceM;
     const profile = item ? profileById(doc, item.profileId) : undefined;
     const status = statusOf(r.headroomDb);
     return (
@@ -120,7 +124,7 @@ function HeadroomTable({ data, onPower, readOnly }: { data: HeadroomAnswer; onPo
         <td className="px-2 py-1.5">
           <NumberField label={`${r.name} power`} unit="W" value={r.powerW} min={1} max={20000} step={10} onChange={(v) => onPower(kind, index, v)} disabled={readOnly} testId={`power-${r.name}`} className="w-32" />
         </td>
-        <td className="num px-2 py-1.5 text-right">{item ? formatLength(distanceToSeatM(doc, item), units) : '—'}</td>
+        <td className="num px-2 py-1.5 text-right">{item && distanceM !== undefined ? formatLength(distanceM, units) : '—'}</td>
         <td className="num px-2 py-1.5 text-right font-semibold" data-testid={`max-spl-${r.name}`}>{r.maxSplDb.toFixed(1)} dB</td>
         <td className="num px-2 py-1.5 text-right">{r.targetPeakDb.toFixed(1)} dB</td>
         <td className={`num px-2 py-1.5 text-right font-semibold ${status === 'fail' ? 'text-fail' : status === 'warn' ? 'text-warn' : 'text-ok'}`}>

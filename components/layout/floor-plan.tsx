@@ -4,6 +4,7 @@ import { useId, type Ref } from 'react';
 import { arc } from 'd3-shape';
 import { chartColors, useContainerWidth } from '@/components/charts';
 import type { LayoutAnswer } from '@/lib/hooks/use-layout';
+import type { OutsidePosition } from '@/lib/system-model/room-bounds';
 import { formatLength } from '@/lib/units';
 import type { SystemDocument } from '@/lib/validations/system';
 
@@ -17,6 +18,8 @@ export interface FloorPlanProps {
   selected: string | null;
   onSelect: (key: string) => void;
   units: 'metric' | 'imperial';
+  /** Positions beyond a wall (positionsOutsideRoom): drawn on the wall they crossed, in red, with the message. */
+  outside?: readonly OutsidePosition[];
   ref?: Ref<SVGSVGElement>;
 }
 
@@ -25,7 +28,7 @@ export interface FloorPlanProps {
  * MLP to each speaker, each template channel's recommended azimuth range as a faint wedge, and the front pair's
  * included angle as an arc.
  */
-export function FloorPlan({ doc, layout, selected, onSelect, units, ref }: FloorPlanProps) {
+export function FloorPlan({ doc, layout, selected, onSelect, units, outside = [], ref }: FloorPlanProps) {
   const uid = `fp${useId().replace(/[^a-zA-Z0-9_-]/g, '')}`;
   const { ref: boxRef, widthPx } = useContainerWidth<HTMLDivElement>(640);
   const { widthM, lengthM } = doc.room;
@@ -37,8 +40,20 @@ export function FloorPlan({ doc, layout, selected, onSelect, units, ref }: Floor
   const svgW = Math.max(widthPx, planW + pad.left + pad.right);
   const svgH = planH + pad.top + pad.bottom;
   const ox = (svgW - planW) / 2;
-  const sx = (x: number) => ox + x * pxPerM;
-  const sy = (y: number) => pad.top + y * pxPerM;
+  // Drawing only: a position beyond a wall is shown on that wall (the document keeps the real value).
+  const sx = (x: number) => ox + Math.min(Math.max(x, 0), widthM) * pxPerM;
+  const sy = (y: number) => pad.top + Math.min(Math.max(y, 0), lengthM) * pxPerM;
+  const problems = (prefix: string) => outside.filter((o) => o.path.startsWith(`${prefix}.`));
+  const outsideMark = (prefix: string, r: number) => {
+    const list = problems(prefix);
+    return list.length ? (
+      <>
+        <circle r={r} fill="none" stroke={chartColors.fail} strokeWidth={2} strokeDasharray="3 2" data-outside="true" />
+        <title>{list.map((o) => o.message).join('; ')}</title>
+      </>
+    ) : null;
+  };
+  const mlpIndex = doc.seats.findIndex((s) => s.id === doc.mlpSeatId);
   const mlp = doc.seats.find((s) => s.id === doc.mlpSeatId) ?? doc.seats[0];
   const status = new Map((layout?.speakers ?? []).map((s) => [s.channel, s]));
   const wedgeR = Math.min(planW, planH) * 0.28;
@@ -84,18 +99,19 @@ export function FloorPlan({ doc, layout, selected, onSelect, units, ref }: Floor
             ) : null}
           </g>
         ) : null}
-        {mlp
-          ? doc.speakers.map((s) => (
+        {mlp && !problems(`seats.${Math.max(0, mlpIndex)}`).length
+          ? doc.speakers.map((s, i) => problems(`speakers.${i}`).length ? null : (
               <line key={`ray-${s.id}`} x1={sx(mlp.xM)} y1={sy(mlp.yM)} x2={sx(s.xM)} y2={sy(s.yM)} stroke={STATUS[status.get(s.channel)?.status ?? 'unlisted']} strokeOpacity={0.45} strokeWidth={1} strokeDasharray="3 3" />
             ))
           : null}
-        {doc.seats.map((s) => {
+        {doc.seats.map((s, i) => {
           const isMlp = s.id === doc.mlpSeatId;
           const key = `seat:${s.id}`;
           return (
             <g key={key} transform={`translate(${sx(s.xM)},${sy(s.yM)})`} onClick={() => onSelect(key)} style={{ cursor: 'pointer' }} data-seat={s.id}>
               {isMlp ? <circle r={10} fill="none" stroke={chartColors.ink} strokeWidth={1.5} /> : null}
-              <circle r={6} fill={selected === key ? chartColors.mains : chartColors.ink} />
+              <circle r={6} fill={selected === key ? chartColors.mains : problems(`seats.${i}`).length ? chartColors.fail : chartColors.ink} />
+              {outsideMark(`seats.${i}`, 14)}
               {isMlp ? (
                 <text y={22} textAnchor="middle" fill={chartColors.ink} fontWeight={600}>
                   MLP
@@ -109,17 +125,18 @@ export function FloorPlan({ doc, layout, selected, onSelect, units, ref }: Floor
           const size = 16;
           return (
             <g key={key} transform={`translate(${sx(s.xM)},${sy(s.yM)})`} onClick={() => onSelect(key)} style={{ cursor: 'pointer' }}>
-              <rect x={-size / 2} y={-size / 2} width={size} height={size} rx={3} fill={chartColors.sub} stroke={selected === key ? chartColors.ink : 'none'} strokeWidth={2} />
+              <rect x={-size / 2} y={-size / 2} width={size} height={size} rx={3} fill={problems(`subs.${i}`).length ? chartColors.fail : chartColors.sub} stroke={selected === key ? chartColors.ink : 'none'} strokeWidth={2} />
+              {outsideMark(`subs.${i}`, 14)}
               <text y={4} textAnchor="middle" fill="#FFFFFF" fontSize={9} fontWeight={700}>
                 {doc.subs.length > 1 ? `S${i + 1}` : 'S'}
               </text>
             </g>
           );
         })}
-        {doc.speakers.map((s) => {
+        {doc.speakers.map((s, i) => {
           const key = `speaker:${s.id}`;
           const st = status.get(s.channel);
-          const color = STATUS[st?.status ?? 'unlisted'];
+          const color = problems(`speakers.${i}`).length ? chartColors.fail : STATUS[st?.status ?? 'unlisted'];
           const isHeight = s.channel.startsWith('T');
           const w = Math.max(22, s.channel.length * 7 + 8);
           return (
@@ -128,6 +145,7 @@ export function FloorPlan({ doc, layout, selected, onSelect, units, ref }: Floor
               <text y={4} textAnchor="middle" fill={isHeight ? color : '#FFFFFF'} fontWeight={700} fontSize={10}>
                 {s.channel}
               </text>
+              {outsideMark(`speakers.${i}`, w / 2 + 6)}
             </g>
           );
         })}

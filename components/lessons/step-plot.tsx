@@ -52,7 +52,7 @@ export function StepPlot({ step, progress = 0, emphasis = 'default', compact = f
   }, [frame]);
 
   if (!frame) return <p className="text-ink-soft">This Step&apos;s System has no main speakers, so there is no blend to show.</p>;
-  const { result, metrics } = frame;
+  const { result, metrics, assessment } = frame;
   const show = new Set(step.traces);
   const traces: PlotTrace[] = [];
   const first = result.paths[0];
@@ -63,20 +63,21 @@ export function StepPlot({ step, progress = 0, emphasis = 'default', compact = f
   if (show.has('sum') || traces.length === 0) traces.push({ id: 'sum', label: 'Sum', values: result.sum.magnitudeDb, ...traceStyles.sum });
   const markers: FrequencyMarker[] = [{ hz: frame.crossoverHz, label: `Crossover ${Math.round(frame.crossoverHz)} Hz`, dashed: true }];
   for (const m of modes.slice(0, 8)) markers.push({ hz: m.hz, label: undefined, color: chartColors.inkMuted, dashed: true });
-  const references = show.has('target') && metrics ? [{ value: metrics.referenceLevelDb, label: 'Flat' }] : [];
+  const references = show.has('target') && assessment ? [{ value: assessment.referenceLevelDb, label: 'Flat' }] : [];
   const phaseTraces: PlotTrace[] = [];
   if (show.has('phase')) {
     if (first) phaseTraces.push({ id: 'mains-phase', label: 'Mains phase', values: first.phaseDeg, ...traceStyles.mains });
     result.paths.slice(1).forEach((p, i) => phaseTraces.push({ id: `sub-${i}-phase`, label: `${p.name} phase`, values: p.phaseDeg, ...(SUB_STYLES[i % 2] ?? traceStyles.sub) }));
   }
   const big = emphasis === 'projector';
-  const readouts: { label: string; value: string; id: string }[] = metrics
-    ? [
-        { id: 'sum', label: 'Sum at crossover', value: fmtDb(metrics.sumLevelDb) },
-        { id: 'phase', label: 'Phase difference there', value: fmt(metrics.phaseDifferenceDeg, 0, '°') },
-        { id: 'dip', label: 'Deepest dip (±1 octave)', value: `${fmtDb(metrics.deepestDipDb)} at ${Math.round(metrics.deepestDipHz)}\u2009Hz` },
-      ]
-    : [];
+  const readouts: { label: string; value: string; id: string }[] =
+    metrics && assessment
+      ? [
+          { id: 'sum', label: 'Sum at crossover', value: fmtDb(metrics.sumLevelDb) },
+          { id: 'phase', label: 'Phase difference there', value: fmt(metrics.phaseDifferenceDeg, 0, '°') },
+          { id: 'dip', label: 'Deepest dip (fc/2 … 2·fc)', value: `${fmtDb(assessment.deepestDipDb)} at ${Math.round(assessment.deepestDipHz)}\u2009Hz` },
+        ]
+      : [];
   if (step.panel === 'timing') {
     readouts.push({ id: 'distances', label: 'Distances to the MLP', value: `mains ${frame.mainsDistanceM.toFixed(2)} m · sub ${frame.subDistancesM.map((d) => d.toFixed(2)).join(', ')} m` });
   }

@@ -2,10 +2,12 @@
 
 import { useMemo, useRef, useState, type ReactNode } from 'react';
 import { ChartExportButtons, ColumnChart, FrequencyPlot, HeatMap, chartColors, useContainerWidth, type HeatMapMarker, type PlotTrace } from '@/components/charts';
+import { OutsideRoomNotice } from '@/components/editor/outside-room-notice';
 import { useSystem } from '@/components/editor/system-context';
 import { Notice } from '@/components/ui/notice';
 import { useRoomModes, useRoomResponse, type RoomModesAnswer, type RoomResponseAnswer } from '@/lib/hooks/use-room';
 import { mlpSeat } from '@/lib/system-model';
+import { positionsOutsideRoom } from '@/lib/system-model/room-bounds';
 import { ModeTable } from './mode-table';
 import { RoomFields } from './room-fields';
 
@@ -49,6 +51,9 @@ export function ModesPanel() {
   const mapIndices: Indices | null = picked ?? (firstMode ? [firstMode.indices[0], firstMode.indices[1], firstMode.indices[2]] : [1, 0, 0]);
   const response = useRoomResponse(doc, { mapIndices });
   const r = response.data;
+  const outside = useMemo(() => positionsOutsideRoom(doc), [doc]);
+  // Front-wall notches are asked only for L, C and R inside the room (see roomResponseRequestFromDocument).
+  const frontOutside = outside.filter((o) => doc.speakers.some((s, i) => ['L', 'C', 'R'].includes(s.channel) && o.path.startsWith(`speakers.${i}.`)));
   const error = modes.error ?? response.error;
   const coincident = useMemo(() => new Set((data?.nearCoincident.pairs ?? []).flatMap((p) => [p.lower.join(','), p.upper.join(',')])), [data]);
 
@@ -61,6 +66,9 @@ export function ModesPanel() {
         <RoomFields error={error ?? undefined} maxHz={maxHz} onMaxHz={setMaxHz} />
         {error && !error.issues.length ? <Notice kind="error">{error.message}</Notice> : null}
         {error && error.issues.some((i) => /^(seats|subs)\./.test(i.path)) ? <Notice kind="error">{error.message} — fix it on Layout.</Notice> : null}
+        <OutsideRoomNotice outside={outside} title="Outside the room (nothing was moved)">
+          <p className="mt-1">Changing the room never moves a seat, speaker or sub. Make the room larger again, or move them on Layout; nothing on this page is computed from them.</p>
+        </OutsideRoomNotice>
       </section>
 
       {data ? <Summary data={data} pending={modes.pending} /> : <p className="text-sm text-ink-soft">Computing the modes…</p>}
@@ -77,11 +85,26 @@ export function ModesPanel() {
         </div>
       ) : null}
 
-      <SeatResponse r={r} view={view} onView={setView} cursorHz={cursorHz} onCursorHz={setCursorHz} crossoverHz={doc.bassManagement.crossoverHz} pending={response.pending} noSubs={doc.subs.length === 0} />
+      {response.outside.length ? (
+        <section aria-labelledby="modes-seats-blocked" className="flex flex-col gap-2" data-testid="seat-response-blocked">
+          <h3 id="modes-seats-blocked" className="text-base font-semibold">
+            Predicted response at the seats (subs only)
+          </h3>
+          <Notice kind="error" title="Not computed: every seat and sub must be inside the room">
+            {response.outside.map((o) => (
+              <span key={o.path} className="block">
+                {o.message}
+              </span>
+            ))}
+          </Notice>
+        </section>
+      ) : (
+        <SeatResponse r={r} view={view} onView={setView} cursorHz={cursorHz} onCursorHz={setCursorHz} crossoverHz={doc.bassManagement.crossoverHz} pending={response.pending} noSubs={doc.subs.length === 0} />
+      )}
 
       {r?.map ? <ModeMap r={r} modes={data} mapIndices={mapIndices} onPick={setPicked} units={units} /> : null}
 
-      {r ? <QuarterWave r={r} crossoverHz={doc.bassManagement.crossoverHz} subNames={new Set(doc.subs.map((s) => s.name))} units={units} /> : null}
+      {r ? <QuarterWave r={r} crossoverHz={doc.bassManagement.crossoverHz} subNames={new Set(doc.subs.map((s) => s.name))} units={units} left={frontOutside.map((o) => o.message)} /> : null}
       <p className="text-xs text-ink-faint">
         Model: a rigid rectangular room, modes by Rayleigh’s formula, seat responses by modal summation damped by RT60 (Kuttruff, Room Acoustics, ch. 3). Reliable below the Schroeder frequency; real walls, openings and furniture shift and damp the modes —
         measure before you commit to seat and sub positions.
@@ -402,8 +425,8 @@ function ModeMap({ r, modes, mapIndices, onPick, units }: { r: RoomResponseAnswe
   );
 }
 
-function QuarterWave({ r, crossoverHz, subNames, units }: { r: RoomResponseAnswer; crossoverHz: number; subNames: ReadonlySet<string>; units: 'metric' | 'imperial' }) {
-  if (r.quarterWave.length === 0) return null;
+function QuarterWave({ r, crossoverHz, subNames, units, left }: { r: RoomResponseAnswer; crossoverHz: number; subNames: ReadonlySet<string>; units: 'metric' | 'imperial'; left: string[] }) {
+  if (r.quarterWave.length === 0 && left.length === 0) return null;
   return (
     <section aria-labelledby="modes-quarter" className="flex flex-col gap-2">
       <h3 id="modes-quarter" className="text-base font-semibold">
@@ -440,6 +463,11 @@ function QuarterWave({ r, crossoverHz, subNames, units }: { r: RoomResponseAnswe
           </tbody>
         </table>
       </div>
+      {left.length ? (
+        <p className="text-xs text-fail" role="alert">
+          No notch for a speaker outside the room: {left.join('; ')}.
+        </p>
+      ) : null}
     </section>
   );
 }

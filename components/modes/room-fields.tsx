@@ -1,6 +1,5 @@
 'use client';
 
-import { useState } from 'react';
 import { useSystem } from '@/components/editor/system-context';
 import { NumberField } from '@/components/ui/number-field';
 import type { ApiError } from '@/lib/client/api';
@@ -10,11 +9,8 @@ import type { SystemDocument } from '@/lib/validations/system';
 /** Room length, width, height, RT60 and air temperature, with the API's messages beside the field at fault. */
 export function RoomFields({ error, maxHz, onMaxHz }: { error?: ApiError; maxHz: number; onMaxHz: (hz: number) => void }) {
   const { doc, update, units, readOnly } = useSystem();
-  const [moved, setMoved] = useState(0);
-  const set = (patch: Partial<SystemDocument['room']>) => {
-    setMoved(withRoom(doc, patch).moved);
-    update((d) => withRoom(d, patch).doc);
-  };
+  // The room changes alone: seats, speakers and subs stay where they are, even beyond a wall that moved in (the panel says so).
+  const set = (patch: Partial<SystemDocument['room']>) => update((d) => withRoom(d, patch).doc);
   const room = doc.room;
   const e = (path: string) => error?.field(path) ?? error?.field(`room.${path}`);
   return (
@@ -27,11 +23,6 @@ export function RoomFields({ error, maxHz, onMaxHz }: { error?: ApiError; maxHz:
         <NumberField label="Air temperature" testId="room-temperature" value={room.temperatureC} onChange={(v) => set({ temperatureC: v })} unit="°C" min={-20} max={50} step={1} error={e('temperatureC')} disabled={readOnly} />
         <NumberField label="Modes up to" testId="modes-max-hz" value={maxHz} onChange={onMaxHz} unit="Hz" min={20} max={500} step={10} error={error?.field('maxHz')} hint="Table and counts" />
       </div>
-      {moved > 0 ? (
-        <p role="status" className="text-xs text-warn">
-          {moved} position{moved === 1 ? '' : 's'} beyond the new walls moved onto them; check them on Layout.
-        </p>
-      ) : null}
     </div>
   );
 }

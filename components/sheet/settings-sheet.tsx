@@ -1,4 +1,4 @@
-import { settingsSheet } from '@/lib/system-model/settings-sheet';
+import { SETTING_DECIMALS, settingsSheet } from '@/lib/system-model/settings-sheet';
 import { formatLength } from '@/lib/units';
 import type { SystemDocument } from '@/lib/validations/system';
 
@@ -17,6 +17,9 @@ interface Props {
 const f = (x: number, digits: number) => x.toFixed(digits);
 const signed = (x: number, digits: number) => `${x > 0 ? '+' : x < 0 ? '−' : ''}${Math.abs(x).toFixed(digits)}`;
 const feet = (m: number) => formatLength(m, 'imperial');
+const D = SETTING_DECIMALS;
+/** A column's plain meaning under its heading. */
+const Meaning = ({ children }: { children: string }) => <span className="block max-w-40 text-[0.7rem] font-normal normal-case leading-tight tracking-normal">{children}</span>;
 
 /**
  * The printable Settings sheet (SPEC §5): the processor settings per channel and per sub, the
@@ -83,8 +86,12 @@ export function SettingsSheet({ name, revision, savedAt, savedBy, workspaceName,
                 <tr className="border-b border-ink text-xs uppercase tracking-wide text-ink-faint">
                   <th scope="col" className="py-1.5 pr-3">Channel</th>
                   <th scope="col" className="py-1.5 pr-3 text-right">Distance</th>
-                  <th scope="col" className="py-1.5 pr-3 text-right">Delay</th>
-                  <th scope="col" className="py-1.5 pr-3 text-right">Trim</th>
+                  <th scope="col" className="py-1.5 pr-3 text-right align-bottom">
+                    Delay<Meaning>distance alignment plus the mains delay</Meaning>
+                  </th>
+                  <th scope="col" className="py-1.5 pr-3 text-right align-bottom">
+                    Trim<Meaning>level match by distance plus the channel’s offset</Meaning>
+                  </th>
                   <th scope="col" className="py-1.5 pr-3 text-right">High-pass</th>
                   <th scope="col" className="py-1.5">Slope</th>
                 </tr>
@@ -96,11 +103,14 @@ export function SettingsSheet({ name, revision, savedAt, savedBy, workspaceName,
                       {c.channel}
                       <span className="block text-xs font-normal text-ink-faint">{c.profileName}</span>
                     </th>
-                    <td className="py-1.5 pr-3 text-right">
-                      {f(c.distanceM, 2)} m<span className="block text-xs text-ink-faint">{feet(c.distanceM)}{c.distanceSource === 'measured' ? ' · measured' : ''}</span>
+                    <td className="py-1.5 pr-3 text-right" data-testid={`sheet-distance-${c.channel}`}>
+                      {f(c.distanceM, D.distanceM)} m<span className="block text-xs text-ink-faint">{feet(c.distanceM)}{c.distanceSource === 'measured' ? ' · measured' : ''}</span>
                     </td>
-                    <td className="py-1.5 pr-3 text-right">{f(c.delayMs, 2)} ms</td>
-                    <td className="py-1.5 pr-3 text-right">{signed(c.trimDb, 1)} dB</td>
+                    <td className="py-1.5 pr-3 text-right" data-testid={`sheet-delay-${c.channel}`}>{f(c.delayMs, D.delayMs)} ms</td>
+                    <td className="py-1.5 pr-3 text-right" data-testid={`sheet-trim-${c.channel}`}>
+                      {signed(c.trimDb, D.trimDb)} dB
+                      {c.offsetDb !== 0 ? <span className="block text-xs text-ink-faint">offset {signed(c.offsetDb, D.trimDb)} dB</span> : null}
+                    </td>
                     <td className="py-1.5 pr-3 text-right">{f(c.highpassHz, 0)} Hz</td>
                     <td className="py-1.5 font-sans text-xs">{c.slope}</td>
                   </tr>
@@ -112,8 +122,9 @@ export function SettingsSheet({ name, revision, savedAt, savedBy, workspaceName,
           <p className="text-sm text-ink-soft">No main speakers in this System.</p>
         )}
         <p className="mt-1.5 text-xs text-ink-faint">
-          Delay: distance alignment to the farthest main speaker (it gets 0 ms){sheet.mainsDelayMs > 0 ? `, plus the mains delay of ${f(sheet.mainsDelayMs, 2)} ms` : ''}. Trim as set in the
-          System; confirm levels with a meter at the listening position.
+          Delay: distance alignment to the farthest speaker or sub, plus the mains delay ({f(sheet.mainsDelayMs, D.delayMs)} ms); the delay every channel and sub shares is taken out, so the
+          smallest is 0 ms. Trim: level match by distance (inverse-square law, free field) plus the channel’s offset; a level match measured with a meter at the listening position
+          supersedes it. Rounded to what a processor takes: 0.01 m, 0.01 ms, 0.1 dB.
         </p>
       </section>
 
@@ -128,7 +139,9 @@ export function SettingsSheet({ name, revision, savedAt, savedBy, workspaceName,
                 <tr className="border-b border-ink text-xs uppercase tracking-wide text-ink-faint">
                   <th scope="col" className="py-1.5 pr-3">Sub</th>
                   <th scope="col" className="py-1.5 pr-3 text-right">Distance</th>
-                  <th scope="col" className="py-1.5 pr-3 text-right">Delay</th>
+                  <th scope="col" className="py-1.5 pr-3 text-right align-bottom">
+                    Delay<Meaning>distance alignment plus the sub’s own delay</Meaning>
+                  </th>
                   <th scope="col" className="py-1.5 pr-3">Polarity</th>
                   <th scope="col" className="py-1.5 pr-3 text-right">Gain</th>
                   <th scope="col" className="py-1.5 pr-3 text-right">Low-pass</th>
@@ -143,12 +156,17 @@ export function SettingsSheet({ name, revision, savedAt, savedBy, workspaceName,
                       {s.count > 1 ? ` ×${s.count}` : ''}
                       <span className="block text-xs font-normal text-ink-faint">{s.profileName}</span>
                     </th>
-                    <td className="py-1.5 pr-3 text-right">
-                      {f(s.distanceM, 2)} m<span className="block text-xs text-ink-faint">{feet(s.distanceM)}{s.distanceSource === 'measured' ? ' · measured' : ''}</span>
+                    <td className="py-1.5 pr-3 text-right" data-testid={`sheet-sub-distance-${s.id}`}>
+                      {f(s.distanceM, D.distanceM)} m<span className="block text-xs text-ink-faint">{feet(s.distanceM)}{s.distanceSource === 'measured' ? ' · measured' : ''}</span>
                     </td>
-                    <td className="py-1.5 pr-3 text-right">{f(s.delayMs, 2)} ms</td>
+                    <td className="py-1.5 pr-3 text-right" data-testid={`sheet-sub-delay-${s.id}`}>
+                      {f(s.delayMs, D.delayMs)} ms
+                      {s.ownDelayMs !== 0 ? <span className="block text-xs text-ink-faint">own delay {f(s.ownDelayMs, D.delayMs)} ms</span> : null}
+                    </td>
                     <td className={`py-1.5 pr-3 font-sans ${s.polarity === 'inverted' ? 'font-semibold text-sub' : ''}`}>{s.polarity === 'inverted' ? 'Inverted (180°)' : 'Normal'}</td>
-                    <td className="py-1.5 pr-3 text-right">{signed(s.gainDb, 1)} dB</td>
+                    <td className="py-1.5 pr-3 text-right" data-testid={`sheet-sub-gain-${s.id}`}>
+                      {signed(s.gainDb, D.trimDb)} dB
+                    </td>
                     <td className="py-1.5 pr-3 text-right">{f(s.lowpassHz, 0)} Hz</td>
                     <td className="py-1.5 font-sans text-xs">{s.slope}</td>
                   </tr>

@@ -9,7 +9,8 @@ import { NumberField } from '@/components/ui/number-field';
 import { useTiming } from '@/lib/hooks/use-timing';
 import type { ApiError } from '@/lib/client/api';
 import { blendMainSpeaker, distanceToSeatM, toPointM } from '@/lib/system-model';
-import { applyGroupRecommendation, applySubRecommendation, timingRequestFromDocument, type TimingSubAnswer } from '@/lib/system-model/timing';
+import { applyTimingAdvice, timingRequestFromDocument, type TimingAnswer } from '@/lib/system-model/timing';
+import type { AdviceAnswer } from '@/lib/system-model/advice-answer';
 import { speakerAngles } from '@/dsp';
 import { metresToFeet } from '@/lib/units';
 import type { Speaker, Sub, SystemDocument } from '@/lib/validations/system';
@@ -20,14 +21,18 @@ const geometryM = (doc: SystemDocument, item: Speaker | Sub): number => {
   return seat ? speakerAngles({ listenerM: toPointM(seat), speakerM: toPointM(item) }).distanceM : 0;
 };
 
-/** A distance to the MLP: editing it sets the measured-distance override; "Use positions" clears it. */
+/**
+ * The distance set on the processor for a speaker or sub: editing it sets the measured distance the processor is
+ * told (its delays align these); the sound still travels the positions' path, so a wrong setting shows as a phase
+ * error. "Use the positions" clears it.
+ */
 function DistanceField({ label, doc, item, onOverride, units, error, disabled, testId }: { label: string; doc: SystemDocument; item: Speaker | Sub; onOverride: (m: number | null) => void; units: 'metric' | 'imperial'; error?: string; disabled?: boolean; testId: string }) {
   const fromGeometry = geometryM(doc, item);
   const overridden = item.distanceOverrideM != null;
   const shown = (m: number) => lengthText(m, units);
   return (
     <div className="flex flex-col gap-1">
-      <NumberField label={label} length units={units} value={distanceToSeatM(doc, item)} min={0.1} max={100} step={0.01} digits={2} disabled={disabled} error={error} onChange={(v) => onOverride(v)} testId={testId} hint={overridden ? `measured; positions give ${shown(fromGeometry)}` : 'from the positions on Layout'} />
+      <NumberField label={label} length units={units} value={distanceToSeatM(doc, item)} min={0.1} max={100} step={0.01} digits={2} disabled={disabled} error={error} onChange={(v) => onOverride(v)} testId={testId} hint={overridden ? `measured; the positions give ${shown(fromGeometry)}` : 'from the positions on Layout'} />
       {overridden ? (
         <button type="button" disabled={disabled} onClick={() => onOverride(null)} className="self-start text-xs text-mains underline hover:text-ink">
           Use the positions ({shown(fromGeometry)})
@@ -42,9 +47,45 @@ const lengthText = (m: number, units: 'metric' | 'imperial') => (units === 'impe
 
 const fieldError = (error: ApiError | undefined, path: string) => error?.field(path);
 
-function describeRecommendation(r: TimingSubAnswer['recommendation']): string {
-  const delay = r.addDelayMs < 0.005 ? 'No delay change' : `Add ${formatNumber(r.addDelayMs, 2)} ms to the ${r.addTo === 'sub' ? 'sub' : 'mains'}`;
-  return `${delay}; sub polarity ${r.invert ? 'inverted' : 'normal'}${r.flipPolarity ? ' (flip it)' : ''}`;
+/** What a piece of advice changes, in processor settings: "Sub front left 3.20 ms (was 1.00), inverted (flip it); mains 0.00 ms (was 0.92)". */
+function describeChanges(advice: AdviceAnswer, data: TimingAnswer): string {
+  const parts: string[] = [];
+  advice.set.subs.forEach((s, k) => {
+    const now = data.subs[k];
+    if (!now) return;
+    const delay = Math.abs(s.delayMs - now.delayMs) >= 0.005 ? `${s.name} delay ${formatNumber(s.delayMs, 2)} ms (now ${formatNumber(now.delayMs, 2)})` : null;
+    const polarity = s.invert !== now.invert ? `${delay ? '' : `${s.name} `}polarity ${s.invert ? 'inverted' : 'normal'} (flip it)` : null;
+    if (delay || polarity) parts.push([delay, polarity].filter(Boolean).join(', '));
+  });
+  if (Math.abs(advice.set.mainsDelayMs - data.mains.delayMs) >= 0.005) parts.push(`${data.mains.name} delay ${formatNumber(advice.set.mainsDelayMs, 2)} ms (now ${formatNumber(data.mains.delayMs, 2)})`);
+  return parts.length ? `Set ${parts.join('; ')}` : 'No change';
+}
+
+/** One piece of advice: "keep" with its reason, or the settings to make, what they gain, and Apply. */
+function AdviceCard({ title, advice, data, testId, readOnly, onApply, children }: { title: React.ReactNode; advice: AdviceAnswer; data: TimingAnswer; testId: string; readOnly: boolean; onApply: () => void; children?: React.ReactNode }) {
+  return (
+    <div className="flex flex-col gap-2 rounded-md border border-line bg-white p-3" data-testid={testId}>
+      <p className="text-xs text-ink-soft">{title}</p>
+      {advice.keep ? (
+        <p className="text-base font-semibold text-ok" data-testid={`${testId}-text`}>
+          Keep the present setting
+        </p>
+      ) : (
+        <p className="text-base font-semibold" data-testid={`${testId}-text`}>
+          {describeChanges(advice, data)}
+        </p>
+      )}
+      <p className="num text-xs text-ink-soft" data-testid={`${testId}-reason`}>
+        {advice.reason}
+      </p>
+      {children}
+      {advice.keep ? null : (
+        <Button variant="secondary" className="self-start" disabled={readOnly} data-testid={`${testId}-apply`} onClick={onApply}>
+          Apply
+        </Button>
+      )}
+    </div>
+  );
 }
 
 export function TimingPanel() {
@@ -76,10 +117,11 @@ export function TimingPanel() {
 
   const placed = /^(temperatureC|mains\.|subs\.\d+\.(distanceM|delayMs))/;
   const unplaced = error && (error.issues.length === 0 || error.issues.some((i) => !placed.test(i.path)));
-  const curve = shown?.levelVersusDelay;
+  const curve = shown?.flatnessVersusDelay;
   const currentOffsetMs = shown ? shown.delayMs - (data?.mains.delayMs ?? 0) : 0;
-  const recommendedOffsetMs = shown ? shown.recommendation.subDelayMs - shown.recommendation.mainsDelayMs : 0;
-  const recommendedLevel = shown?.recommendation.crossoverLevelDb ?? 0;
+  const advisedOffsetMs = currentOffsetMs + (shown?.advice.shiftMs ?? 0);
+  const advisedFlatness = shown?.advice.after.flatnessDb ?? 0;
+  const band = data ? `${formatHzReadout(data.flatness.bandHz[0])}–${formatHzReadout(data.flatness.bandHz[1])}` : '';
 
   return (
     <div className="flex flex-col gap-6 py-4">
@@ -98,7 +140,7 @@ export function TimingPanel() {
               ))}
             </select>
           </div>
-          <DistanceField label={`${speaker.channel} to the MLP`} doc={doc} item={speaker} units={units} disabled={readOnly} error={fieldError(error, 'mains.distanceM')} onOverride={(m) => setSpeaker(speaker.id, { distanceOverrideM: m })} testId="timing-mains-distance" />
+          <DistanceField label={`${speaker.channel}: distance set on the processor`} doc={doc} item={speaker} units={units} disabled={readOnly} error={fieldError(error, 'mains.distanceM')} onOverride={(m) => setSpeaker(speaker.id, { distanceOverrideM: m })} testId="timing-mains-distance" />
           {doc.subs.map((s, k) => (
             <fieldset key={s.id} className="flex flex-col gap-2 rounded-md border border-line bg-white p-3">
               <legend className="px-1 text-sm font-medium" style={{ color: k % 2 ? chartColors.sub2 : chartColors.sub }}>
@@ -108,7 +150,7 @@ export function TimingPanel() {
                 <NumberField label="Across (x)" length units={units} value={s.xM} min={0} max={doc.room.widthM} step={0.05} digits={2} disabled={readOnly} onChange={(v) => setSub(k, { xM: v })} testId={`timing-sub-${k}-x`} />
                 <NumberField label="Into room (y)" length units={units} value={s.yM} min={0} max={doc.room.lengthM} step={0.05} digits={2} disabled={readOnly} onChange={(v) => setSub(k, { yM: v })} testId={`timing-sub-${k}-y`} />
               </div>
-              <DistanceField label="Distance to the MLP" doc={doc} item={s} units={units} disabled={readOnly} error={fieldError(error, `subs.${k}.distanceM`)} onOverride={(m) => setSub(k, { distanceOverrideM: m })} testId={`timing-sub-${k}-distance`} />
+              <DistanceField label="Distance set on the processor" doc={doc} item={s} units={units} disabled={readOnly} error={fieldError(error, `subs.${k}.distanceM`)} onOverride={(m) => setSub(k, { distanceOverrideM: m })} testId={`timing-sub-${k}-distance`} />
             </fieldset>
           ))}
           <p className="text-xs text-ink-faint">
@@ -172,73 +214,64 @@ export function TimingPanel() {
                 </table>
               </div>
 
+              <p className="num text-sm" data-testid="timing-present">
+                Flatness now <span className="font-semibold">±{formatNumber(data.present.flatnessDb, 2)} dB</span> over {band}{' '}
+                <span className="text-ink-soft">
+                  (largest deviation of the sum from its level at {formatHzReadout(4 * data.crossoverHz)}, with {data.mains.name} and every sub) · system −3 dB point{' '}
+                  {data.present.minus3DbHz === null ? 'below 5 Hz' : formatHzReadout(data.present.minus3DbHz)}
+                </span>
+              </p>
               <div className="grid gap-3 md:grid-cols-2">
-                {data.subs.map((s, k) => {
-                  // A change that gains under 0.5 dB of flatness is not worth making; say so first.
-                  const optional = s.recommendation.flatnessBeforeDb - s.recommendation.flatnessDb < 0.5;
-                  return (
-                  <div key={k} className="flex flex-col gap-2 rounded-md border border-line bg-white p-3" data-testid={`timing-recommendation-${k}`}>
-                    <p className="text-xs text-ink-soft">
-                      Recommended for <span className="font-medium text-ink">{s.name}</span> alone with {data.mains.name}
-                    </p>
-                    {optional ? (
-                      <p className="text-base font-semibold text-ok">Keep the present setting: it is within 0.5 dB of the flattest.</p>
-                    ) : null}
-                    <p className={optional ? 'text-sm' : 'text-base font-semibold'}>
-                      {optional ? <span className="text-ink-soft">Flattest found: </span> : null}
-                      <span data-testid={`timing-recommendation-text-${k}`}>{describeRecommendation(s.recommendation)}</span>
-                    </p>
+                {data.subs.map((s, k) => (
+                  <AdviceCard
+                    key={k}
+                    title={
+                      <>
+                        <span className="font-medium text-ink">{s.name}</span> alone, with {data.mains.name}
+                        {data.subs.length > 1 ? ' and the other subs as they are' : ''}
+                      </>
+                    }
+                    advice={s.advice}
+                    data={data}
+                    testId={`timing-advice-${k}`}
+                    readOnly={readOnly}
+                    onApply={() => {
+                      update((d) => applyTimingAdvice(d, s.advice, speaker.channel));
+                      setAppliedNote(`${describeChanges(s.advice, data)}.`);
+                    }}
+                  >
                     <p className="num text-xs text-ink-soft">
-                      sets sub {formatNumber(s.recommendation.subDelayMs, 2)} ms, mains {formatNumber(s.recommendation.mainsDelayMs, 2)} ms · flatness ±{formatNumber(s.recommendation.flatnessBeforeDb, 2)} → ±{formatNumber(s.recommendation.flatnessDb, 2)} dB · phase after {formatValue(s.recommendation.phaseDifferenceAfterDeg, '°', 0)} · Timing window {formatNumber(s.timingWindowMs[0], 2)} to {formatNumber(s.timingWindowMs[1], 2)} ms
+                      Timing window {formatNumber(s.timingWindowMs[0], 2)} to {formatNumber(s.timingWindowMs[1], 2)} ms (sub minus mains delay; flatness within 1 dB)
                     </p>
-                    <Button
-                      variant="secondary"
-                      className="self-start"
-                      disabled={readOnly}
-                      data-testid={`timing-apply-${k}`}
-                      onClick={() => {
-                        update((d) => applySubRecommendation(d, k, s));
-                        setAppliedNote(`${s.name}: ${describeRecommendation(s.recommendation)}.`);
-                      }}
-                    >
-                      Apply
-                    </Button>
-                  </div>
-                  );
-                })}
+                  </AdviceCard>
+                ))}
               </div>
 
               {data.group ? (
-                <div className="flex flex-col gap-2 rounded-md border border-mains bg-[#EEF7F6] p-3" data-testid="timing-group">
-                  <p className="text-sm font-semibold">All {data.group.subs.length} subs aligned to each other, then to {data.mains.name}</p>
-                  <p className="num text-sm">
-                    mains {formatNumber(data.group.mainsDelayMs, 2)} ms ·{' '}
-                    {data.group.subs.map((g) => `${g.name} ${formatNumber(g.delayMs, 2)} ms ${g.invert ? 'inverted' : 'normal'}`).join(' · ')}
-                  </p>
-                  <p className="num text-xs text-ink-soft">
-                    flatness ±{formatNumber(data.group.flatnessBeforeDb, 2)} dB now → ±{formatNumber(data.group.flatnessDb, 2)} dB (±1 octave of the crossover)
-                  </p>
-                  <Button
-                    className="self-start"
-                    disabled={readOnly}
-                    data-testid="timing-apply-group"
-                    onClick={() => {
-                      const group = data.group;
-                      if (!group) return;
-                      update((d) => applyGroupRecommendation(d, group));
-                      setAppliedNote('All subs and the mains delay set from the group alignment.');
-                    }}
-                  >
-                    Apply to all subs
-                  </Button>
-                </div>
+                <AdviceCard
+                  title={
+                    <span className="font-semibold text-ink">
+                      All {data.subs.length} subs together with {data.mains.name}: each sub&apos;s delay and polarity, and the subs against the mains
+                    </span>
+                  }
+                  advice={data.group}
+                  data={data}
+                  testId="timing-group"
+                  readOnly={readOnly}
+                  onApply={() => {
+                    const group = data.group;
+                    if (!group) return;
+                    update((d) => applyTimingAdvice(d, group, speaker.channel));
+                    setAppliedNote(`${describeChanges(group, data)}.`);
+                  }}
+                />
               ) : null}
               {appliedNote ? <Notice kind="ok">Applied to the System: {appliedNote}</Notice> : null}
 
-              <section aria-label="Level at the crossover against delay" className="flex flex-col gap-2">
+              <section aria-label="Flatness against delay" className="flex flex-col gap-2">
                 <div className="flex flex-wrap items-end justify-between gap-2">
                   <h3 className="text-sm font-semibold">
-                    Level at {formatHzReadout(data.crossoverHz)} against the sub-minus-mains delay{data.subs.length > 1 ? '' : ` (${shown?.name})`}
+                    Flatness over {band} against the sub-minus-mains delay{data.subs.length > 1 ? '' : ` (${shown?.name})`}: lower is flatter
                   </h3>
                   {data.subs.length > 1 ? (
                     <div className="flex flex-col gap-1">
@@ -259,29 +292,29 @@ export function TimingPanel() {
                   <>
                     <XYPlot
                       ref={plotRef}
-                      title={`Level at the crossover against delay, ${shown.name}`}
-                      description="Sum of the mains and this sub at the crossover frequency as the sub's delay minus the mains' delay changes; positive values delay the sub, negative the mains. Shaded: the Timing window (within 1 dB of the recommendation)."
+                      title={`Flatness against delay, ${shown.name}`}
+                      description="The flatness measure of the whole system (this sub moved, everything else as it is) as the sub's delay minus the mains' delay changes; positive values delay the sub, negative the mains. Lower is flatter. Shaded: the Timing window (within 1 dB of the advised setting)."
                       x={curve.subMinusMainsDelayMs}
                       xLabel="Sub delay minus mains delay"
                       xUnit="ms"
                       yUnit="dB"
-                      yLabel="Level at the crossover"
-                      yDomain={[-30, Math.max(9, Math.ceil(Math.max(...curve.normalDb, ...curve.invertedDb) / 3) * 3 + 3)]}
+                      yLabel="Flatness (largest deviation)"
+                      yDomain={[0, Math.min(24, Math.max(6, Math.ceil(Math.max(...curve.normalDb, ...curve.invertedDb))))]}
                       traces={[
                         { id: 'normal', label: 'Sub polarity normal', values: curve.normalDb, ...traceStyles.sub },
                         { id: 'inverted', label: 'Sub polarity inverted', values: curve.invertedDb, ...traceStyles.sub2, dashed: true },
                       ]}
                       band={{ from: shown.timingWindowMs[0], to: shown.timingWindowMs[1], label: 'Timing window' }}
-                      points={[{ x: recommendedOffsetMs, y: recommendedLevel, label: `Best ${formatSigned(recommendedOffsetMs, 'ms', 2)}` }]}
+                      points={[{ x: advisedOffsetMs, y: advisedFlatness, label: shown.advice.keep ? `Kept ±${formatNumber(advisedFlatness, 2)} dB` : `Advised ${formatSigned(advisedOffsetMs, 'ms', 2)}` }]}
                       markers={[{ x: currentOffsetMs, label: 'now', color: chartColors.target, dashed: true }]}
                       aspect={0.42}
                     />
                     <ChartExportButtons
                       svgRef={plotRef}
-                      filename={`timing-${shown.name}-level-vs-delay`}
-                      subject="level against delay"
+                      filename={`timing-${shown.name}-flatness-vs-delay`}
+                      subject="flatness against delay"
                       csv={() =>
-                        ['sub_minus_mains_delay_ms,normal_db,inverted_db', ...curve.subMinusMainsDelayMs.map((d, i) => `${d},${curve.normalDb[i]},${curve.invertedDb[i]}`)].join('\r\n')
+                        ['sub_minus_mains_delay_ms,flatness_normal_db,flatness_inverted_db', ...curve.subMinusMainsDelayMs.map((d, i) => `${d},${curve.normalDb[i]},${curve.invertedDb[i]}`)].join('\r\n')
                       }
                     />
                   </>

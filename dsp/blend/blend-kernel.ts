@@ -1,12 +1,13 @@
 import { LN_POWER_TO_DB, RAD_TO_DEG } from '../internal/angles';
 import * as fastMath from '../internal/fast-math';
 import { positiveFrequencies } from '../internal/guards';
+import { evaluatePlanOnGrid, type PlanValues } from '../internal/section-plan';
 import type { ResponseCurves } from './blend-types';
 import { SILENCE_DB } from './blend-types';
 import type { CompiledPath } from './path-plan';
 
-// The hot loops of a blend, written out by hand: the analog sections of every path are evaluated with inlined
-// complex arithmetic (product rule for H′), the relative delay is one polynomial sin/cos pair per point, and the
+// The hot loops of a blend: the analog sections of every path are evaluated by the one section evaluator
+// (internal/section-plan, product rule for H′), the relative delay is one polynomial sin/cos pair per point, and the
 // sum's magnitude, phase and group delay come from S and S′ with one log and one atan2 per point. Nothing is
 // allocated per point; with a BlendGrid nothing is allocated per call beyond the result object.
 
@@ -33,6 +34,8 @@ export interface BlendGrid {
   readonly omega: Float64Array;
   /** Internal scratch (S, S′ and one path's H and H′/H per point). */
   readonly scratch: Float64Array;
+  /** Views of scratch rows 4..7 where a path's sections are evaluated (Re H, Im H, Re H′/H, Im H′/H). */
+  readonly rows: PlanValues;
 }
 
 /**
@@ -43,7 +46,10 @@ export function blendGrid(frequencyHz: Float64Array | readonly number[]): BlendG
   const f = Float64Array.from(positiveFrequencies('frequencyHz', frequencyHz));
   const omega = new Float64Array(f.length);
   for (let i = 0; i < f.length; i++) omega[i] = TWO_PI * (f[i] as number);
-  return { kind: 'blend-grid', frequencyHz: f, omega, scratch: new Float64Array(8 * f.length) };
+  const n = f.length;
+  const scratch = new Float64Array(8 * n);
+  const rows: PlanValues = { re: scratch.subarray(4 * n, 5 * n), im: scratch.subarray(5 * n, 6 * n), dIm: scratch.subarray(6 * n, 7 * n), dRe: scratch.subarray(7 * n, 8 * n) };
+  return { kind: 'blend-grid', frequencyHz: f, omega, scratch, rows };
 }
 
 /** True when `value` is a grid made by {@link blendGrid}. */
@@ -57,80 +63,24 @@ export function toBlendGrid(frequencyHz: Float64Array | readonly number[] | Blen
 }
 
 /**
- * Adds one path to the running sum, relative to the earliest path (G = H·e^(−jωΔ), G′ = G·(H′/H − jΔ)), and, when
- * `keep` is set, stores the path's own H and Im(H′/H) into scratch rows 4..6. Scratch rows: 0 Re S, 1 Im S,
- * 2 Re S′, 3 Im S′, 4 Re H, 5 Im H, 6 Im H′/H. `first` overwrites the sum instead of adding to it.
+ * Adds one path to the running sum, relative to the earliest path (G = H·e^(−jωΔ), G′ = G·(H′/H − jΔ)); the path's
+ * own H and H′/H stay in scratch rows 4..7 for finishPath. Scratch rows: 0 Re S, 1 Im S, 2 Re S′, 3 Im S′, 4 Re H,
+ * 5 Im H, 6 Im H′/H, 7 Re H′/H. `first` overwrites the sum instead of adding to it.
  */
-export function accumulatePath(path: CompiledPath, delta: number, grid: BlendGrid, first: boolean, keep: boolean): void {
+export function accumulatePath(path: CompiledPath, delta: number, grid: BlendGrid, first: boolean): void {
   const omega = grid.omega;
   const n = omega.length;
   const s = grid.scratch;
-  const plan = path.plan;
-  const k = plan.kernel;
-  const kn = plan.count * 3;
-  const gain = plan.gain;
-  const m = plan.numeratorPower & 3;
-  const numeratorPower = plan.numeratorPower;
+  // The path's H and H′/H at every point: the one evaluation of a section product (internal/section-plan), into
+  // scratch rows 4 (Re H), 5 (Im H), 7 (Re H′/H) and 6 (Im H′/H).
+  evaluatePlanOnGrid(path.plan, omega, grid.rows);
   const rotate = delta !== 0;
   for (let i = 0; i < n; i++) {
     const w = omega[i] as number;
-    let pr = 1;
-    let pi = 0;
-    let dpr = 0;
-    let dpi = 0;
-    let numMag = gain;
-    for (let j = 0; j < kn; j += 3) {
-      const code = k[j] as number;
-      const iw = k[j + 1] as number;
-      const u = w * iw;
-      let dr: number;
-      let di: number;
-      let ddr: number;
-      let ddi: number;
-      if (code < 2) {
-        dr = 1;
-        di = u;
-        ddr = 0;
-        ddi = iw;
-        if (code === 1) numMag *= u;
-      } else {
-        const invQ = k[j + 2] as number;
-        dr = 1 - u * u;
-        di = u * invQ;
-        ddr = -2 * u * iw;
-        ddi = invQ * iw;
-        if (code === 3) numMag *= u * u;
-      }
-      const npr = dpr * dr - dpi * di + pr * ddr - pi * ddi;
-      const npi = dpr * di + dpi * dr + pr * ddi + pi * ddr;
-      const qr = pr * dr - pi * di;
-      pi = pr * di + pi * dr;
-      pr = qr;
-      dpr = npr;
-      dpi = npi;
-    }
-    const inv = 1 / (pr * pr + pi * pi);
-    let hr = pr * inv * numMag;
-    let hi = -pi * inv * numMag;
-    if (m === 1) {
-      const t = hr;
-      hr = -hi;
-      hi = t;
-    } else if (m === 2) {
-      hr = -hr;
-      hi = -hi;
-    } else if (m === 3) {
-      const t = hr;
-      hr = hi;
-      hi = -t;
-    }
-    const dr = numeratorPower / w - (dpr * pr + dpi * pi) * inv;
-    const di = -(dpi * pr - dpr * pi) * inv;
-    if (keep) {
-      s[4 * n + i] = hr;
-      s[5 * n + i] = hi;
-      s[6 * n + i] = di;
-    }
+    const hr = s[4 * n + i] as number;
+    const hi = s[5 * n + i] as number;
+    const dr = s[7 * n + i] as number;
+    const di = s[6 * n + i] as number;
     let gr = hr;
     let gi = hi;
     let gdi = di;

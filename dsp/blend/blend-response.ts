@@ -42,7 +42,7 @@ export function evaluateBlend(grid: BlendGrid, compiled: readonly CompiledPath[]
   for (let k = 0; k < pathCount; k++) {
     const c = compiled[k] as CompiledPath;
     const curves: PathCurves = { name: c.name, magnitudeDb: view(4 * k), phaseDeg: view(4 * k + 1), unwrappedPhaseDeg: view(4 * k + 2), groupDelayMs: view(4 * k + 3) };
-    accumulatePath(c, c.delayS - tau0, grid, k === 0, true);
+    accumulatePath(c, c.delayS - tau0, grid, k === 0);
     finishPath(grid, c.delayS, curves.magnitudeDb, curves.phaseDeg, curves.unwrappedPhaseDeg, curves.groupDelayMs);
     pathCurves.push(curves);
   }

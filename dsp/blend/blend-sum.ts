@@ -35,7 +35,7 @@ export function blendSumResponse({ temperatureC, frequencyHz, paths, into }: Ble
   const tau0 = earliestDelayS(compiled);
   for (let k = 0; k < compiled.length; k++) {
     const c = compiled[k]!;
-    accumulatePath(c, c.delayS - tau0, grid, k === 0, false);
+    accumulatePath(c, c.delayS - tau0, grid, k === 0);
   }
   const sum = into ?? newCurves(n);
   finishSum(grid, tau0, sum);

@@ -1,6 +1,6 @@
 import { LN_POWER_TO_DB, RAD_TO_DEG } from '../internal/angles';
 import { assertPositive, positiveFrequencies } from '../internal/guards';
-import { compileSections, evaluatePlan } from '../internal/section-plan';
+import { compileSections, evaluatePlanOnGrid, planValues } from '../internal/section-plan';
 import { filterSections, MAX_SECTION_Q, rolloffSections } from './analog-sections';
 import type { AnalogSection, ComplexResponse, FilterSpec, RolloffChain } from './filter-types';
 
@@ -14,17 +14,17 @@ export function sectionsResponse(sections: readonly AnalogSection[], frequencyHz
   const magnitudeDb = new Float64Array(n);
   const phaseDeg = new Float64Array(n);
   const groupDelayMs = new Float64Array(n);
-  const out = new Float64Array(4);
+  const h = planValues(n);
+  evaluatePlanOnGrid(plan, Float64Array.from(f, (x) => 2 * Math.PI * x), h);
   for (let i = 0; i < n; i++) {
-    evaluatePlan(plan, 2 * Math.PI * (f[i] as number), out);
-    const r = out[0] as number;
-    const m = out[1] as number;
+    const r = h.re[i] as number;
+    const m = h.im[i] as number;
     re[i] = r;
     im[i] = m;
     magnitudeDb[i] = LN_POWER_TO_DB * Math.log(r * r + m * m + 1e-300);
     const p = Math.atan2(m, r) * RAD_TO_DEG;
     phaseDeg[i] = p === -180 ? 180 : p;
-    groupDelayMs[i] = -1000 * (out[3] as number);
+    groupDelayMs[i] = -1000 * (h.dIm[i] as number);
   }
   return { frequencyHz: Float64Array.from(f), re, im, magnitudeDb, phaseDeg, groupDelayMs };
 }

@@ -3,7 +3,7 @@ import type { PathSpec } from '../blend/blend-types';
 import { compilePath } from '../blend/path-plan';
 import { DEG_TO_RAD, LN_POWER_TO_DB, RAD_TO_DEG, wrapDeg } from '../internal/angles';
 import { assertAscending, assertFiniteArray, assertSameLength, positiveFrequencies } from '../internal/guards';
-import { evaluatePlan } from '../internal/section-plan';
+import { evaluatePlanOnGrid, planValues } from '../internal/section-plan';
 import { minimumPhaseDeg } from './minimum-phase';
 
 /** Options of {@link applyPathToMeasured}. */
@@ -58,16 +58,17 @@ export function applyPathToMeasured(options: ApplyPathOptions): ProcessedMeasure
   const im = new Float64Array(n);
   const magnitudeDb = new Float64Array(n);
   const phaseDeg = new Float64Array(n);
-  const out = new Float64Array(4);
+  const omega = Float64Array.from(f, (x) => 2 * Math.PI * x);
+  const h = planValues(n);
+  evaluatePlanOnGrid(compiled.plan, omega, h);
   for (let i = 0; i < n; i++) {
-    const w = 2 * Math.PI * (f[i] as number);
-    evaluatePlan(compiled.plan, w, out);
+    const w = omega[i] as number;
     const mag = Math.pow(10, (options.magnitudeDb[i] as number) / 20);
     const ph = (phase[i] as number) * DEG_TO_RAD - w * compiled.delayS;
     const mr = mag * Math.cos(ph);
     const mi = mag * Math.sin(ph);
-    const hr = out[0] as number;
-    const hi = out[1] as number;
+    const hr = h.re[i] as number;
+    const hi = h.im[i] as number;
     const r = mr * hr - mi * hi;
     const m = mr * hi + mi * hr;
     re[i] = r;

@@ -1,6 +1,6 @@
 import type { CompiledPath } from '../blend/path-plan';
 import { logFrequencyGridHz } from '../grid/log-frequency-grid';
-import { evaluatePlan } from '../internal/section-plan';
+import { evaluatePlanOnGrid, planValues } from '../internal/section-plan';
 
 /** Points per octave of the ±1-octave band that Timing and the crossover sweep judge flatness on. */
 export const ALIGNMENT_POINTS_PER_OCTAVE = 48;
@@ -25,16 +25,16 @@ export function alignmentGrid(crossoverHz: number): AlignmentGrid {
 
 /** A compiled path's complex response (delay included) on the points ω. */
 export function pathComplex(path: CompiledPath, omega: Float64Array): { re: Float64Array; im: Float64Array } {
+  const h = planValues(omega.length);
+  evaluatePlanOnGrid(path.plan, omega, h);
   const re = new Float64Array(omega.length);
   const im = new Float64Array(omega.length);
-  const out = new Float64Array(4);
   for (let i = 0; i < omega.length; i++) {
     const w = omega[i] as number;
-    evaluatePlan(path.plan, w, out);
     const c = Math.cos(w * path.delayS);
     const s = -Math.sin(w * path.delayS);
-    const hr = out[0] as number;
-    const hi = out[1] as number;
+    const hr = h.re[i] as number;
+    const hi = h.im[i] as number;
     re[i] = hr * c - hi * s;
     im[i] = hr * s + hi * c;
   }

@@ -46,32 +46,3 @@ export interface AlignSubToMainsOptions {
   /** Scan step, ms (default 0.05; refined around the best). */
   readonly stepMs?: number;
 }
-
-/** Options of alignSubs. */
-export interface AlignSubsOptions {
-  readonly temperatureC: number;
-  readonly crossoverHz: number;
-  readonly mains: PathSpec;
-  readonly subs: readonly PathSpec[];
-  readonly maxDelayMs?: number;
-  readonly stepMs?: number;
-}
-
-/** One sub's recommended settings. */
-export interface SubSetting {
-  readonly name: string;
-  /** Extra delay to add to this sub, ms ≥ 0. */
-  readonly addDelayMs: number;
-  /** The sub's new delayMs setting (current + extra). */
-  readonly delayMs: number;
-  readonly invert: boolean;
-}
-
-/** Result of alignSubs: every delay ≥ 0. */
-export interface AlignSubsResult {
-  readonly subs: SubSetting[];
-  /** Extra delay for the mains, ms ≥ 0. */
-  readonly mainsAddDelayMs: number;
-  readonly flatnessBeforeDb: number;
-  readonly flatnessDb: number;
-}

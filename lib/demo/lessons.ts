@@ -16,24 +16,39 @@ const BW2: Slope = { family: 'butterworth', order: 2 };
 
 /**
  * The invented "Linden Street den" made into a classroom model: the towers and the sub without
- * their natural roll-offs (so only the crossover filters shape the sum), both 3.0 m from the
- * chair, 80 Hz, 20 °C. Each Step changes one thing from here.
+ * their natural roll-offs (so only the crossover filters shape the sum), the chair moved back so
+ * that each is exactly 3.0 m away (towers at ±30° at ear height, the sub on the floor), and the
+ * processor set to those 3.0 m; 80 Hz, 20 °C. Each Step changes one thing from here:
+ * `subAtM` moves the sub (its processor distance stays 3.0 m unless `subSetM` says otherwise).
  */
-function classroom(change: { slope?: Slope; invert?: boolean; subDistanceM?: number; mainsDelayMs?: number } = {}): SystemDocument {
+function classroom(change: { slope?: Slope; invert?: boolean; subAtM?: number; subSetM?: number } = {}): SystemDocument {
   const base = lindenStreetDocument();
   const slope = change.slope ?? LR4;
+  const mlp = { xM: 1.95, yM: 4.2, zM: 1.05 };
+  // On the floor at x = 1.2 m: dx = −0.75, dz = −0.75, so y = 4.2 − √(d² − 1.125) (geometry).
+  const subYM = (d: number) => Math.round((mlp.yM - Math.sqrt(d * d - 1.125)) * 1e4) / 1e4;
+  const at30 = { dx: 3.0 * Math.sin(Math.PI / 6), dy: 3.0 * Math.cos(Math.PI / 6) };
   return {
     ...base,
     room: { ...base.room, temperatureC: 20 },
+    seats: base.seats.map((s) => ({ ...s, ...mlp })),
     profiles: base.profiles.map((p) =>
       p.kind === 'main'
         ? { ...p, id: 'classroom-main', name: 'Classroom main (no natural roll-off; invented)', lowRolloff: { kind: 'none' } }
         : { ...p, id: 'classroom-sub', name: 'Classroom sub (no natural roll-off; invented)', lowRolloff: { kind: 'none' }, highRolloff: { kind: 'none' } },
     ),
-    speakers: base.speakers.map((s) => ({ ...s, profileId: 'classroom-main', distanceOverrideM: 3.0, trimDb: 0 })),
-    subs: base.subs.map((s) => ({ ...s, profileId: 'classroom-sub', distanceOverrideM: change.subDistanceM ?? 3.0, gainDb: 0, delayMs: 0, invert: change.invert ?? false })),
-    bassManagement: { ...base.bassManagement, crossoverHz: 80, mainsHighpass: { ...slope }, subLowpass: { ...slope }, mainsDelayMs: change.mainsDelayMs ?? 0 },
-    notes: 'Invented classroom model for the demo Lesson: no natural roll-offs, equal distances unless the Step says otherwise.',
+    speakers: base.speakers.map((s) => ({
+      ...s,
+      xM: Math.round((s.channel === 'L' ? mlp.xM - at30.dx : mlp.xM + at30.dx) * 1e4) / 1e4,
+      yM: Math.round((mlp.yM - at30.dy) * 1e4) / 1e4,
+      zM: mlp.zM,
+      profileId: 'classroom-main',
+      distanceOverrideM: 3.0,
+      trimDb: 0,
+    })),
+    subs: base.subs.map((s) => ({ ...s, xM: 1.2, yM: subYM(change.subAtM ?? 3.0), zM: 0.3, profileId: 'classroom-sub', distanceOverrideM: change.subSetM ?? 3.0, gainDb: 0, delayMs: 0, invert: change.invert ?? false })),
+    bassManagement: { ...base.bassManagement, crossoverHz: 80, mainsHighpass: { ...slope }, subLowpass: { ...slope }, mainsDelayMs: 0 },
+    notes: 'Invented classroom model for the demo Lesson: no natural roll-offs, every speaker 3.0 m from the chair and the processor set to 3.0 m, unless the Step says otherwise.',
     tags: ['demo', 'lesson'],
   };
 }
@@ -107,9 +122,9 @@ export function demoLesson(): { title: string; description: string; steps: DemoS
         panel: 'timing',
         traces: [...ALL, 'phase'],
         sweep: { parameter: 'subDistanceM', from: 3.0, to: 4.0, durationS: 6 },
-        document: classroom({ subDistanceM: 4.0 }),
+        document: classroom({ subAtM: 4.0 }),
         points: [
-          'Back to LR4, but the sub is **1 m farther** from the chair than the mains (4.0 m against 3.0 m).',
+          'Back to LR4, but the sub has been moved **1 m farther** from the chair (4.0 m against 3.0 m) and the processor still thinks it is 3.0 m away.',
           '',
           '- 1 m of air at 20 °C is **2.91 ms**.',
           '- At 80 Hz one period is 12.5 ms, so 2.91 ms is **84°** of phase.',
@@ -117,17 +132,17 @@ export function demoLesson(): { title: string; description: string; steps: DemoS
         ].join('\n'),
       },
       {
-        title: 'The delay that fixes it',
+        title: 'The distance setting that fixes it',
         panel: 'timing',
         traces: ALL,
         sweep: null,
-        document: classroom({ subDistanceM: 4.0, mainsDelayMs: 2.914 }),
+        document: classroom({ subAtM: 4.0, subSetM: 4.0 }),
         points: [
-          'The sub is still 1 m farther, so its sound arrives **2.91 ms late**.',
+          'The sub is still 1 m farther, so its sound arrives **2.91 ms late** — unless the processor knows.',
           '',
-          '- A processor only adds delay, so delay the **mains** by 2.91 ms.',
+          '- Set the sub’s **distance to 4.0 m** on the processor: it delays the **mains** by 2.91 ms (a processor only adds delay).',
           '- Both arrive together again: phase difference ≈ 0°, the sum is flat.',
-          '- On a processor this is simply the right *distance* setting for each speaker.',
+          '- The Settings sheet shows that delay on every main channel.',
         ].join('\n'),
       },
       {

@@ -3,11 +3,18 @@
 import { useCompute } from '@/lib/hooks/use-compute';
 import type { LayoutAnswer } from '@/lib/system-model/layout-compute';
 import { layoutRequestFromDocument } from '@/lib/system-model/layout-request';
+import { positionsOutsideRoom } from '@/lib/system-model/room-bounds';
 import type { SystemDocument } from '@/lib/validations/system';
 
 export type { LayoutAnswer, LayoutSpeakerOut } from '@/lib/system-model/layout-compute';
 
-/** Angles, pass/warn, toe-in, delays and trims of the System's speakers (POST /api/v1/layout). */
+/**
+ * Angles, pass/warn, toe-in, delays and trims of the System's speakers (POST /api/v1/layout). Nothing is asked, and no
+ * earlier answer is shown, while a seat, speaker or sub lies outside the room: `outside` says which.
+ */
 export function useLayout(doc: SystemDocument) {
-  return useCompute<LayoutAnswer>('/api/v1/layout', layoutRequestFromDocument(doc));
+  const outside = positionsOutsideRoom(doc);
+  const blocked = outside.length > 0;
+  const result = useCompute<LayoutAnswer>('/api/v1/layout', blocked ? null : layoutRequestFromDocument(doc));
+  return { ...result, data: blocked ? undefined : result.data, error: blocked ? undefined : result.error, outside };
 }

@@ -2,6 +2,7 @@
 
 import { useCompute } from '@/lib/hooks/use-compute';
 import type { RoomModesAnswer, RoomResponseAnswer } from '@/lib/system-model/room-compute';
+import { outsideUnder, positionsOutsideRoom } from '@/lib/system-model/room-bounds';
 import { roomModesRequestFromDocument, roomResponseRequestFromDocument, type RoomResponseOptions } from '@/lib/system-model/room-request';
 import type { SystemDocument } from '@/lib/validations/system';
 
@@ -12,7 +13,14 @@ export function useRoomModes(doc: SystemDocument, maxHz = 200) {
   return useCompute<RoomModesAnswer>('/api/v1/room-modes', roomModesRequestFromDocument(doc, maxHz));
 }
 
-/** Predicted seat responses from the subs, the spread, a mode map and the front-wall notches (POST /api/v1/room-response). */
+/**
+ * Predicted seat responses from the subs, the spread, a mode map and the front-wall notches (POST /api/v1/room-response).
+ * Nothing is asked, and no earlier answer is shown, while a seat or a sub lies outside the room: `outside` says which.
+ */
 export function useRoomResponse(doc: SystemDocument, options: RoomResponseOptions = {}) {
-  return useCompute<RoomResponseAnswer>('/api/v1/room-response', roomResponseRequestFromDocument(doc, options));
+  const all = positionsOutsideRoom(doc);
+  const outside = [...outsideUnder(all, 'seats'), ...outsideUnder(all, 'subs')];
+  const blocked = outside.length > 0;
+  const result = useCompute<RoomResponseAnswer>('/api/v1/room-response', blocked ? null : roomResponseRequestFromDocument(doc, options));
+  return { ...result, data: blocked ? undefined : result.data, error: blocked ? undefined : result.error, outside };
 }

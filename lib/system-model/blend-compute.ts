@@ -4,17 +4,13 @@
  * paths are "mains" and "sub" for the read-outs and turning a relative delay into processor
  * settings (positive delays only).
  */
-import { arrivalTimeMs, blendMetrics, blendResponse, crossoverSweep, logFrequencyGridHz, speedOfSoundMps, type FilterShape, type PathSpec } from '@/dsp';
+import { assessBlend, blendMetrics, blendResponse, crossoverSweep, FLATNESS_DEFINITION, rankSweepRows, logFrequencyGridHz, speedOfSoundMps, type FilterShape, type PathSpec } from '@/dsp';
 import { DEFAULT_SWEEP_CANDIDATES_HZ, type BlendRequest, type CrossoverSweepRequest } from '@/lib/validations/compute-blend';
-import { compareSweepRows } from './blend-sweep';
+import { assessmentAnswer, settingsAnswer, type AssessmentAnswer, type SettingsAnswer } from './advice-answer';
+import { roundTo } from './rounding';
+import { modelFromRequest } from './timing';
 
-export { compareSweepRows };
-
-/** Rounds to `decimals` places (keeps −300 dB silence and integers exact; bodies stay small). */
-export function roundTo(value: number, decimals: number): number {
-  const k = 10 ** decimals;
-  return Math.round(value * k) / k;
-}
+export { roundTo };
 
 function rounded(values: ArrayLike<number>, decimals: number): number[] {
   const k = 10 ** decimals;
@@ -39,13 +35,16 @@ export interface BlendMetricsAnswer {
   phaseDifferenceDeg: number | null;
   referenceHz: number;
   referenceLevelDb: number;
-  /** Signed largest deviation of the sum from the reference within ±1 octave of the crossover. */
+  /** The flatness measure: largest deviation of the sum from its level at 4·fc over fc/2 … 2·fc, dB ≥ 0 (dsp assessBlend). */
+  flatnessDb: number;
+  /** The same with its sign, and where. */
   maxDeviationDb: number;
   maxDeviationHz: number;
-  peakToPeakDb: number;
+  /** The flatness band, Hz. */
+  bandHz: [number, number];
   deepestDipDb: number;
   deepestDipHz: number;
-  /** System −3 dB point (low end); null when the sum is still above it at the grid's bottom. */
+  /** System −3 dB point (low end); null when the sum is still above it at 5 Hz. */
   minus3DbHz: number | null;
 }
 
@@ -85,6 +84,8 @@ export function computeBlend(req: BlendRequest): BlendAnswer {
   const fHigh = frequencyHz[frequencyHz.length - 1] as number;
   if (choice.crossoverHz !== null && choice.crossoverHz >= fLow && choice.crossoverHz <= fHigh) {
     const m = blendMetrics(result, { crossoverHz: choice.crossoverHz, mainsIndex: choice.mainsIndex, subIndex: choice.subIndex ?? choice.mainsIndex });
+    // Flatness, dip and −3 dB point: the one assessment every screen and piece of advice uses (not this plot's grid).
+    const a = assessBlend({ temperatureC: req.temperatureC, paths, crossoverHz: choice.crossoverHz });
     metrics = {
       crossoverHz: roundTo(m.crossoverHz, 3),
       crossoverSource: choice.source,
@@ -93,14 +94,15 @@ export function computeBlend(req: BlendRequest): BlendAnswer {
       pathLevelsDb: m.pathLevelsDb.map((v) => roundTo(v, 3)),
       sumLevelDb: roundTo(m.sumLevelDb, 3),
       phaseDifferenceDeg: choice.subIndex === null ? null : maybe(m.phaseDifferenceDeg, 2),
-      referenceHz: roundTo(m.referenceHz, 3),
-      referenceLevelDb: roundTo(m.referenceLevelDb, 3),
-      maxDeviationDb: roundTo(m.maxDeviationDb, 3),
-      maxDeviationHz: roundTo(m.maxDeviationHz, 2),
-      peakToPeakDb: roundTo(m.peakToPeakDb, 3),
-      deepestDipDb: roundTo(m.deepestDipDb, 3),
-      deepestDipHz: roundTo(m.deepestDipHz, 2),
-      minus3DbHz: maybe(m.minus3DbHz, 2),
+      referenceHz: roundTo(a.referenceHz, 3),
+      referenceLevelDb: roundTo(a.referenceLevelDb, 3),
+      flatnessDb: roundTo(a.flatnessDb, 2),
+      maxDeviationDb: roundTo(a.maxDeviationDb, 2),
+      maxDeviationHz: roundTo(a.maxDeviationHz, 1),
+      bandHz: [roundTo(a.bandHz[0], 1), roundTo(a.bandHz[1], 1)],
+      deepestDipDb: roundTo(a.deepestDipDb, 2),
+      deepestDipHz: roundTo(a.deepestDipHz, 1),
+      minus3DbHz: maybe(a.minus3DbHz, 1),
     };
   }
   return {
@@ -114,77 +116,76 @@ export function computeBlend(req: BlendRequest): BlendAnswer {
 
 export interface CrossoverSweepAnswerRow {
   rank: number;
+  /** The present setting, unchanged. */
+  present: boolean;
   crossoverHz: number;
   mainsFilter: FilterShape;
   subFilter: FilterShape;
-  /** Largest |sum − reference| within ±1 octave at the best delay and polarity, dB (lower is flatter). */
+  /** Every sub's delay moved by this, ms (negative: the mains get the delay instead); 0 on the present row. */
+  shiftMs: number;
+  /** Every sub's polarity flipped. */
+  flip: boolean;
+  /** The processor delays and polarities this row runs. */
+  set: SettingsAnswer;
+  /** The flatness measure at this row's setting, dB (as assessment.flatnessDb). */
   flatnessDb: number;
-  deepestDipDb: number;
-  dipHz: number;
-  /** How much later the sub's sound should arrive than the mains' at the listener, ms (negative: earlier). */
-  relativeDelayMs: number;
-  /** Processor settings for the given distances (only positive delays: one of the two is 0). */
-  subDelayMs: number;
-  mainsDelayMs: number;
-  invertSub: boolean;
+  /** The whole system at this row's setting (the flatness measure, dip, −3 dB point). */
+  assessment: AssessmentAnswer;
+  /** Against the present setting: flatness gained, −3 dB point moved up (octaves), bass below the crossover lost (dB). */
+  gainDb: number;
+  extensionLossOctaves: number;
+  bassCutDb: number;
+  /** Keeps the −3 dB point within a third of an octave and the bass within 1 dB of the present setting. */
+  keepsBass: boolean;
+  /** The crossover is below the mains' own −3 dB point plus half an octave. */
+  nearMainsRolloff: boolean;
+  /** Worth changing to (ranked above the present row). */
+  worthIt: boolean;
   /** Mains level one octave below the crossover relative to two octaves above it, dB (how much low bass the mains still carry). */
   mainsLowBassDb: number;
 }
 
 export interface CrossoverSweepAnswer {
   speedOfSoundMps: number;
-  /** Sub arrival minus mains arrival from the given distances, ms. */
-  arrivalDifferenceMs: number;
+  flatness: { definition: string };
+  /** The mains' own −3 dB point from their roll-off, and the lowest crossover clear of it (+ half an octave), Hz. */
+  mainsMinus3DbHz: number | null;
+  lowestClearHz: number | null;
   candidatesHz: number[];
   rows: CrossoverSweepAnswerRow[];
 }
 
-/** Processor delays (both ≥ 0) that make the sub lag the mains by relativeDelayMs at the listener, given its arrival lag. */
-export function processorDelays(relativeDelayMs: number, arrivalDifferenceMs: number): { subDelayMs: number; mainsDelayMs: number } {
-  const sub = relativeDelayMs - arrivalDifferenceMs;
-  return { subDelayMs: Math.max(0, sub), mainsDelayMs: Math.max(0, -sub) };
-}
-
 export function computeCrossoverSweep(req: CrossoverSweepRequest): CrossoverSweepAnswer {
   const candidatesHz = [...(req.candidatesHz ?? DEFAULT_SWEEP_CANDIDATES_HZ)];
-  const arrivalDifferenceMs =
-    arrivalTimeMs({ distanceM: req.subDistanceM, temperatureC: req.temperatureC }) - arrivalTimeMs({ distanceM: req.mainsDistanceM, temperatureC: req.temperatureC });
-  const rows: Omit<CrossoverSweepAnswerRow, 'rank'>[] = [];
-  req.pairings.forEach((pairing) => {
-    const { rows: r } = crossoverSweep({
-      temperatureC: req.temperatureC,
-      mainsRolloff: req.mainsRolloff,
-      subRolloff: req.subRolloff,
-      mainsFilter: pairing.mainsFilter,
-      subFilter: pairing.subFilter,
-      candidatesHz,
-      delaySearch: { maxDelayMs: req.maxDelayMs },
-      mainsGainDb: req.mainsGainDb,
-      subGainDb: req.subGainDb,
-    });
-    for (const row of r) {
-      const relativeDelayMs = row.bestSubDelayMs - row.bestMainsDelayMs;
-      const settings = processorDelays(relativeDelayMs, arrivalDifferenceMs);
-      rows.push({
-        crossoverHz: row.crossoverHz,
-        mainsFilter: { ...pairing.mainsFilter },
-        subFilter: { ...pairing.subFilter },
-        flatnessDb: roundTo(row.flatnessDb, 3),
-        deepestDipDb: roundTo(row.deepestDipDb, 3),
-        dipHz: roundTo(row.dipHz, 2),
-        relativeDelayMs: roundTo(relativeDelayMs, 3),
-        subDelayMs: roundTo(settings.subDelayMs, 3),
-        mainsDelayMs: roundTo(settings.mainsDelayMs, 3),
-        invertSub: row.invertSub,
-        mainsLowBassDb: roundTo(row.mainsLowBassDb, 2),
-      });
-    }
-  });
-  rows.sort(compareSweepRows);
+  const r = crossoverSweep({ model: modelFromRequest(req), pairings: req.pairings, candidatesHz, maxShiftMs: req.maxDelayMs });
   return {
     speedOfSoundMps: roundTo(speedOfSoundMps(req.temperatureC), 3),
-    arrivalDifferenceMs: roundTo(arrivalDifferenceMs, 3),
+    flatness: { definition: FLATNESS_DEFINITION.text },
+    mainsMinus3DbHz: r.mainsMinus3DbHz === null ? null : roundTo(r.mainsMinus3DbHz, 1),
+    lowestClearHz: r.lowestClearHz === null ? null : roundTo(r.lowestClearHz, 1),
     candidatesHz,
-    rows: rows.map((r, i) => ({ rank: i + 1, ...r })),
+    // Ranked again on the rounded figures the answer shows, with the same rule the editor uses to merge partial answers.
+    rows: rankSweepRows(
+      r.rows.map((row) => ({
+      rank: row.rank,
+      present: row.present,
+      crossoverHz: row.crossoverHz,
+      mainsFilter: { ...row.mainsFilter },
+      subFilter: { ...row.subFilter },
+      shiftMs: roundTo(row.shiftMs, 2),
+      flip: row.flip,
+      set: settingsAnswer(row.model),
+      flatnessDb: roundTo(row.assessment.flatnessDb, 2),
+      assessment: assessmentAnswer(row.assessment),
+      gainDb: roundTo(row.comparison.flatnessGainDb, 2),
+      extensionLossOctaves: roundTo(row.comparison.extensionLossOctaves, 3),
+      bassCutDb: roundTo(row.comparison.bassCutDb, 2),
+      keepsBass: row.comparison.keepsBass,
+      nearMainsRolloff: row.nearMainsRolloff,
+      worthIt: row.worthIt,
+      mainsLowBassDb: roundTo(row.mainsLowBassDb, 2),
+      })),
+      req.crossoverHz,
+    ),
   };
 }

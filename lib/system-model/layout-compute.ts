@@ -1,7 +1,7 @@
-/** The answer of POST /api/v1/layout, assembled from dsp/layout (angles, checks, toe-in, delays and trims). */
+/** The answer of POST /api/v1/layout, assembled from dsp/layout (angles, checks, toe-in, channel settings). */
 import {
+  channelSettings,
   checkSpeakerAngles,
-  delaysAndTrims,
   includedAngleDeg,
   layoutTemplate,
   nominalSpeakerPosition,
@@ -21,8 +21,11 @@ export interface LayoutSpeakerOut {
   name: string;
   azimuthDeg: number;
   elevationDeg: number;
+  /** Distance to the MLP the processor is given, m (0.01 m; the override when there is one). */
   distanceM: number;
-  /** Geometric distance when distanceM comes from an override. */
+  /** "measured" when distanceOverrideM was given, else from the positions. */
+  distanceSource: 'measured' | 'geometry';
+  /** Geometric distance, m (0.001 m), also when distanceM comes from an override. */
   geometricDistanceM: number;
   status: LayoutStatus;
   recommended: { azimuthDeg: AngleRangeDeg; elevationDeg: AngleRangeDeg; side: string; source: string } | null;
@@ -34,14 +37,27 @@ export interface LayoutSpeakerOut {
   toeInDeg: number;
   rotationDeg: number;
   tiltDeg: number;
+  /** Distance alignment to the farthest speaker or sub plus the mains delay, the shared delay taken out, ms (0.01 ms). */
   delayMs: number;
+  /** Level match by distance among the speakers plus the channel's offset (trimDb of the request), dB (0.1 dB). */
   trimDb: number;
+}
+
+export interface LayoutSubOut {
+  name: string;
+  /** m (0.01 m). */
+  distanceM: number;
+  distanceSource: 'measured' | 'geometry';
+  /** Distance alignment to the farthest speaker or sub plus the sub's own delay, the shared delay taken out, ms (0.01 ms). */
+  delayMs: number;
+  /** The sub's gain, dB (0.1 dB). */
+  gainDb: number;
 }
 
 export interface LayoutAnswer {
   template: { id: string; subwooferCount: number; channels: { label: string; name: string; side: string; azimuthDeg: AngleRangeDeg; elevationDeg: AngleRangeDeg; source: string }[] };
   speakers: LayoutSpeakerOut[];
-  subs: { name: string; distanceM: number; delayMs: number }[];
+  subs: LayoutSubOut[];
   frontPair: { includedAngleDeg: number; recommended: AngleRangeDeg; status: 'pass' | 'warn' } | null;
   missingChannels: string[];
   farthest: { name: string; distanceM: number };
@@ -97,9 +113,13 @@ export function computeLayout(input: LayoutRequest): LayoutAnswer {
   const angles = input.speakers.map((s) => speakerAngles({ listenerM, speakerM: p(s) }));
   const distances = input.speakers.map((s, i) => s.distanceOverrideM ?? angles[i]!.distanceM);
   const subDistances = input.subs.map((s) => s.distanceOverrideM ?? speakerAngles({ listenerM, speakerM: p(s) }).distanceM);
-  // Delays relative to the farthest of everything the processor feeds; trims among the speakers only (subs are level-matched by measurement).
-  const delays = delaysAndTrims({ distancesM: [...distances, ...subDistances], temperatureC: input.temperatureC });
-  const trims = delaysAndTrims({ distancesM: distances, temperatureC: input.temperatureC });
+  // The one channel-settings definition (the Settings sheet's too): delays aligned to the farthest of everything the
+  // processor feeds plus the mains delay / each sub's own delay; trims among the speakers only, plus each offset.
+  const settings = channelSettings({
+    temperatureC: input.temperatureC,
+    mains: input.speakers.map((s, i) => ({ distanceM: distances[i]!, extraDelayMs: input.mainsDelayMs, trimDb: s.trimDb })),
+    subs: input.subs.map((s, j) => ({ distanceM: subDistances[j]!, extraDelayMs: s.delayMs, gainDb: s.gainDb })),
+  });
   const seatById = new Map(input.seats.map((s) => [s.id, s]));
   const speakers: LayoutSpeakerOut[] = input.speakers.map((s, i) => {
     const a = angles[i]!;
@@ -116,7 +136,8 @@ export function computeLayout(input: LayoutRequest): LayoutAnswer {
       name: channel?.name ?? s.channel,
       azimuthDeg: fixed(a.azimuthDeg, 2),
       elevationDeg: fixed(a.elevationDeg, 2),
-      distanceM: fixed(distances[i]!, 3),
+      distanceM: settings.mains[i]!.distanceM,
+      distanceSource: s.distanceOverrideM != null ? 'measured' : 'geometry',
       geometricDistanceM: fixed(a.distanceM, 3),
       status: check ? check.status : 'unlisted',
       recommended: channel ? { azimuthDeg: channel.azimuthDeg, elevationDeg: channel.elevationDeg, side: channel.side, source: channel.source } : null,
@@ -128,11 +149,17 @@ export function computeLayout(input: LayoutRequest): LayoutAnswer {
       toeInDeg: fixed(toe.toeInDeg, 1),
       rotationDeg: fixed(toe.rotationDeg, 1),
       tiltDeg: fixed(toe.tiltDeg, 1),
-      delayMs: fixed(delays.delaysMs[i]!, 3),
-      trimDb: fixed(trims.trimsDb[i]!, 2),
+      delayMs: settings.mains[i]!.delayMs,
+      trimDb: settings.mains[i]!.trimDb,
     };
   });
-  const subs = input.subs.map((s, j) => ({ name: s.name, distanceM: fixed(subDistances[j]!, 3), delayMs: fixed(delays.delaysMs[distances.length + j]!, 3) }));
+  const subs: LayoutSubOut[] = input.subs.map((s, j) => ({
+    name: s.name,
+    distanceM: settings.subs[j]!.distanceM,
+    distanceSource: s.distanceOverrideM != null ? 'measured' : 'geometry',
+    delayMs: settings.subs[j]!.delayMs,
+    gainDb: settings.subs[j]!.gainDb,
+  }));
   const left = input.speakers.find((s) => s.channel === 'L');
   const right = input.speakers.find((s) => s.channel === 'R');
   let frontPair: LayoutAnswer['frontPair'] = null;
@@ -158,11 +185,12 @@ export function computeLayout(input: LayoutRequest): LayoutAnswer {
     subs,
     frontPair,
     missingChannels: template.channels.filter((c) => !present.has(c.label)).map((c) => c.label),
-    farthest: { name: names[delays.farthestIndex] ?? '', distanceM: fixed(delays.farthestDistanceM, 3) },
+    farthest: { name: names[settings.farthestIndex] ?? '', distanceM: [...settings.mains, ...settings.subs][settings.farthestIndex]?.distanceM ?? 0 },
     nominalPositions,
     notes: [
       'Azimuth: 0° straight ahead, positive to the listener’s left (ITU-R BS.2051 convention).',
-      'Delays: the farthest speaker or sub gets 0 ms, nearer ones wait for it. Trims follow the inverse-square law in free field; a measured level match supersedes them.',
+      'Delays: distance alignment to the farthest speaker or sub, plus the mains delay (speakers) or the sub’s own delay (subs); the delay all of them share is taken out, so the smallest is 0 ms. Rounded once to 0.01 ms.',
+      'Trims: level match by distance among the speakers (inverse-square law, free field) plus each channel’s offset, rounded to 0.1 dB; a measured level match supersedes them. Sub gains are the subs’ own. Distances: 0.01 m.',
       'Toe-in: the turn from square to the channel’s wall (front channels: the front wall; side: the side wall; back: the back wall; or facingDeg when given) to point at the aim.',
     ],
   };

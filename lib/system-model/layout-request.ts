@@ -5,18 +5,23 @@ import type { LayoutRequest } from '@/lib/validations/compute-room';
 import type { LayoutName, Speaker, SystemDocument } from '@/lib/validations/system';
 import { mlpSeat, toPointM } from './index';
 
-/** Body of POST /api/v1/layout for the System (null without speakers). */
+/**
+ * Body of POST /api/v1/layout for the System (null without speakers), with the mains delay, each speaker's trim offset
+ * and each sub's delay and gain, so the answer's delays and trims are the System's channel settings
+ * (`systemChannelSettings`, the same numbers as the Settings sheet).
+ */
 export function layoutRequestFromDocument(doc: SystemDocument): LayoutRequest | null {
   if (doc.speakers.length === 0) return null;
   const mlp = mlpSeat(doc);
   return {
     template: doc.layout,
     temperatureC: doc.room.temperatureC,
+    mainsDelayMs: doc.bassManagement.mainsDelayMs,
     room: { lengthM: doc.room.lengthM, widthM: doc.room.widthM, heightM: doc.room.heightM },
     listener: { xM: mlp.xM, yM: mlp.yM, zM: mlp.zM },
     seats: doc.seats.map((s) => ({ id: s.id, name: s.name, xM: s.xM, yM: s.yM, zM: s.zM })),
-    speakers: doc.speakers.map((s) => ({ channel: s.channel, xM: s.xM, yM: s.yM, zM: s.zM, aim: s.aim, distanceOverrideM: s.distanceOverrideM })),
-    subs: doc.subs.map((s) => ({ name: s.name, xM: s.xM, yM: s.yM, zM: s.zM, distanceOverrideM: s.distanceOverrideM })),
+    speakers: doc.speakers.map((s) => ({ channel: s.channel, xM: s.xM, yM: s.yM, zM: s.zM, aim: s.aim, distanceOverrideM: s.distanceOverrideM, trimDb: s.trimDb })),
+    subs: doc.subs.map((s) => ({ name: s.name, xM: s.xM, yM: s.yM, zM: s.zM, distanceOverrideM: s.distanceOverrideM, delayMs: s.delayMs, gainDb: s.gainDb })),
   };
 }
 

@@ -4,7 +4,7 @@
  * blend read-outs at the crossover. Inputs come from blendRequestFromDocument, so the numbers are
  * the ones POST /api/v1/blend gives for the same document.
  */
-import { blendMetrics, blendResponse, logFrequencyGridHz, roomModes, type BlendMetrics, type BlendResult } from '@/dsp';
+import { assessBlend, blendMetrics, blendResponse, logFrequencyGridHz, roomModes, type BlendAssessment, type BlendMetrics, type BlendResult } from '@/dsp';
 import type { SystemDocument } from '@/lib/validations/system';
 import { blendRequestFromDocument, distanceToSeatM } from './index';
 
@@ -22,6 +22,8 @@ export function frameGridHz(): Float64Array {
 export interface LessonFrame {
   result: BlendResult;
   metrics: BlendMetrics | null;
+  /** The one flatness assessment (flatness, dip, −3 dB point) of the same paths. */
+  assessment: BlendAssessment | null;
   crossoverHz: number;
   mainsName: string;
   /** Air distance of the mains channel and of each sub to the MLP, m. */
@@ -36,10 +38,12 @@ export function lessonFrame(doc: SystemDocument): LessonFrame | null {
   const result = blendResponse({ temperatureC: req.temperatureC, frequencyHz: frameGridHz(), paths: req.paths });
   const crossoverHz = doc.bassManagement.crossoverHz;
   const metrics = req.paths.length >= 1 ? blendMetrics(result, { crossoverHz, mainsIndex: 0, subIndex: req.paths.length > 1 ? 1 : 0 }) : null;
+  const assessment = req.paths.length >= 1 ? assessBlend({ temperatureC: req.temperatureC, paths: req.paths, crossoverHz }) : null;
   const main = req.paths[0];
   return {
     result,
     metrics,
+    assessment,
     crossoverHz,
     mainsName: main?.name ?? 'mains',
     mainsDistanceM: main?.distanceM ?? 0,

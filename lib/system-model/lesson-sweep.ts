@@ -5,6 +5,7 @@
  */
 import { FILTER_CHOICES, filterChoiceLabel, filterChoiceSlope, type FilterChoice, type Sweep } from '@/lib/validations/lesson';
 import type { SystemDocument } from '@/lib/validations/system';
+import { mlpSeat } from './geometry';
 
 export type SweepValue = { kind: 'number'; value: number } | { kind: 'polarity'; inverted: boolean } | { kind: 'filter'; choice: FilterChoice };
 
@@ -60,7 +61,8 @@ export function applySweepValue(doc: SystemDocument, sweep: Sweep, value: SweepV
       return { ...doc, bassManagement: { ...bm, mainsHighpass: { ...slope }, subLowpass: { ...slope } } };
     }
     case 'subDistanceM':
-      return value.kind === 'number' ? { ...doc, subs: doc.subs.map((s) => ({ ...s, distanceOverrideM: value.value })) } : doc;
+      // The subs move (toward or away from the front wall, keeping x and height); the processor keeps its settings.
+      return value.kind === 'number' ? { ...doc, subs: doc.subs.map((s) => atDistanceFromMlp(doc, s, value.value)) } : doc;
     case 'mainsGainDb':
       return value.kind === 'number' ? { ...doc, speakers: doc.speakers.map((s) => ({ ...s, trimDb: value.value })) } : doc;
   }
@@ -98,4 +100,16 @@ export function formatSweepValue(sweep: Sweep, value: SweepValue): string {
 export function describeSweep(sweep: Sweep): string {
   const at = (p: number) => formatSweepValue(sweep, sweepValueAt(sweep, p)).slice(SWEEP_LABELS[sweep.parameter].length + 1);
   return `${SWEEP_LABELS[sweep.parameter]} from ${at(0)} to ${at(1)} over ${sweep.durationS} s`;
+}
+
+/** A sub moved along y (same side of the MLP, same x and height) to `distanceM` from the MLP, kept inside the room. */
+function atDistanceFromMlp<T extends { xM: number; yM: number; zM: number }>(doc: SystemDocument, item: T, distanceM: number): T {
+  const mlp = mlpSeat(doc);
+  const dx = item.xM - mlp.xM;
+  const dz = item.zM - mlp.zM;
+  const across = distanceM * distanceM - dx * dx - dz * dz;
+  if (across < 0) return item;
+  const side = item.yM <= mlp.yM ? -1 : 1;
+  const yM = Math.round((mlp.yM + side * Math.sqrt(across)) * 1e4) / 1e4;
+  return yM >= 0 && yM <= doc.room.lengthM ? { ...item, yM } : item;
 }

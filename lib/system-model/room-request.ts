@@ -2,6 +2,7 @@
 import type { SystemDocument } from '@/lib/validations/system';
 import type { RoomModesRequest, RoomResponseRequest } from '@/lib/validations/compute-room';
 import { mlpSeat } from './index';
+import { positionsOutsideRoom } from './room-bounds';
 
 /** Body of POST /api/v1/room-modes for the System's room. */
 export function roomModesRequestFromDocument(doc: SystemDocument, maxHz = 200): RoomModesRequest {
@@ -19,15 +20,17 @@ export interface RoomResponseOptions {
 
 /**
  * Body of POST /api/v1/room-response: every seat, every sub with its gain (and count), delay and polarity, the
- * map at the MLP's ear height, and the front-wall notch of each sub and main speaker (its distance to the front wall, y).
- * Null when there is no sub.
+ * map at the MLP's ear height, and the front-wall notch of each sub and main speaker (its distance to the front wall, y)
+ * inside the room. Null when there is no sub.
  */
 export function roomResponseRequestFromDocument(doc: SystemDocument, options: RoomResponseOptions = {}): RoomResponseRequest | null {
   if (doc.subs.length === 0 || doc.seats.length === 0) return null;
   const ear = mlpSeat(doc).zM;
+  // A source outside the room has no front-wall distance to speak of: it is left out (the editor says why).
+  const outside = new Set(positionsOutsideRoom(doc).map((o) => o.path.split('.').slice(0, 2).join('.')));
   const front = [
-    ...doc.subs.map((s) => ({ name: s.name, distanceM: s.yM })),
-    ...doc.speakers.filter((s) => ['L', 'C', 'R'].includes(s.channel)).map((s) => ({ name: s.channel, distanceM: s.yM })),
+    ...doc.subs.filter((_, i) => !outside.has(`subs.${i}`)).map((s) => ({ name: s.name, distanceM: s.yM })),
+    ...doc.speakers.filter((s, i) => ['L', 'C', 'R'].includes(s.channel) && !outside.has(`speakers.${i}`)).map((s) => ({ name: s.channel, distanceM: s.yM })),
   ].filter((q) => q.distanceM >= 0.01);
   const mapIndices = options.mapIndices;
   return {

@@ -1,22 +1,31 @@
 /**
  * The Settings sheet of a System (SPEC §5): the figures a processor needs, per channel and per sub,
- * and a short room-mode summary. Picks fields from the document and calls dsp/ for the arithmetic
- * (delaysAndTrims, roomModes, schroederFrequencyHz); no mathematics of its own.
+ * and a short room-mode summary. Distances, delays, trims and sub gains are `systemChannelSettings` —
+ * the one definition Layout, the exports and the API share, already rounded (0.01 m, 0.01 ms, 0.1 dB);
+ * the room summary calls dsp/ (roomModes, schroederFrequencyHz). No mathematics of its own.
  */
-import { delaysAndTrims, roomModes, schroederFrequencyHz, type ModeKind } from '@/dsp';
+import { roomModes, schroederFrequencyHz, SETTING_RESOLUTION, type ModeKind } from '@/dsp';
 import type { Slope, SystemDocument } from '@/lib/validations/system';
-import { distanceToSeatM, mlpSeat, profileById } from './index';
+import { systemChannelSettings } from './channel-settings';
+import { mlpSeat, profileById } from './index';
+
+/** Decimals each setting is rounded to (and shown and exported with): delay 2, trim and gain 1, distance 2. */
+export const SETTING_DECIMALS = { delayMs: 2, trimDb: 1, distanceM: 2 } as const satisfies Record<keyof typeof SETTING_RESOLUTION, number>;
 
 export interface SheetChannel {
   id: string;
   channel: string;
   profileName: string;
+  /** Distance to the MLP, m (0.01 m). */
   distanceM: number;
   /** "measured" when the document holds a distance override, else from the positions. */
   distanceSource: 'measured' | 'geometry';
-  /** Distance alignment to the farthest main speaker (processor convention) plus the mains delay. */
+  /** Distance alignment to the farthest speaker or sub, plus the mains delay (the delay all share taken out), ms (0.01 ms). */
   delayMs: number;
+  /** Level match by distance (inverse-square) plus the channel's offset, dB (0.1 dB). */
   trimDb: number;
+  /** The channel's own offset from the System, dB (already inside trimDb). */
+  offsetDb: number;
   highpassHz: number;
   slope: string;
 }
@@ -26,10 +35,15 @@ export interface SheetSub {
   name: string;
   profileName: string;
   count: number;
+  /** Distance to the MLP, m (0.01 m). */
   distanceM: number;
   distanceSource: 'measured' | 'geometry';
+  /** Distance alignment to the farthest speaker or sub, plus the sub's own delay (the delay all share taken out), ms (0.01 ms). */
   delayMs: number;
+  /** The sub's own delay from the System, ms (already inside delayMs). */
+  ownDelayMs: number;
   polarity: 'normal' | 'inverted';
+  /** Sub gain, dB (0.1 dB). */
   gainDb: number;
   lowpassHz: number;
   slope: string;
@@ -69,29 +83,30 @@ export function slopeLabel(slope: Slope): string {
 
 export function settingsSheet(doc: SystemDocument): SettingsSheet {
   const bm = doc.bassManagement;
-  const mainsDistancesM = doc.speakers.map((s) => distanceToSeatM(doc, s));
-  const aligned = mainsDistancesM.length ? delaysAndTrims({ distancesM: mainsDistancesM, temperatureC: doc.room.temperatureC }) : null;
+  const settings = systemChannelSettings(doc);
   const channels: SheetChannel[] = doc.speakers.map((s, i) => ({
     id: s.id,
     channel: s.channel,
     profileName: profileById(doc, s.profileId)?.name ?? s.profileId,
-    distanceM: mainsDistancesM[i] as number,
+    distanceM: settings.mains[i]!.distanceM,
     distanceSource: s.distanceOverrideM != null ? 'measured' : 'geometry',
-    delayMs: (aligned?.delaysMs[i] ?? 0) + bm.mainsDelayMs,
-    trimDb: s.trimDb,
+    delayMs: settings.mains[i]!.delayMs,
+    trimDb: settings.mains[i]!.trimDb,
+    offsetDb: s.trimDb,
     highpassHz: bm.crossoverHz,
     slope: slopeLabel(bm.mainsHighpass),
   }));
-  const subs: SheetSub[] = doc.subs.map((s) => ({
+  const subs: SheetSub[] = doc.subs.map((s, j) => ({
     id: s.id,
     name: s.name,
     profileName: profileById(doc, s.profileId)?.name ?? s.profileId,
     count: s.count,
-    distanceM: distanceToSeatM(doc, s),
+    distanceM: settings.subs[j]!.distanceM,
     distanceSource: s.distanceOverrideM != null ? 'measured' : 'geometry',
-    delayMs: s.delayMs,
+    delayMs: settings.subs[j]!.delayMs,
+    ownDelayMs: s.delayMs,
     polarity: s.invert ? 'inverted' : 'normal',
-    gainDb: s.gainDb,
+    gainDb: settings.subs[j]!.gainDb,
     lowpassHz: bm.crossoverHz,
     slope: slopeLabel(bm.subLowpass),
   }));
@@ -117,19 +132,27 @@ export function settingsSheet(doc: SystemDocument): SettingsSheet {
   };
 }
 
-const round = (x: number, digits: number) => Number(x.toFixed(digits));
+/** A setting written with the decimals it was rounded to ("0.90", "-4.4"): a number, never a formula. */
+class Setting {
+  constructor(readonly text: string) {}
+}
+const setting = (x: number, decimals: number) => new Setting(x.toFixed(decimals));
 
-/** One CSV row per channel and sub, with units in the column names (RFC 4180 quoting). */
+/**
+ * One CSV row per channel and sub, with units in the column names (RFC 4180 quoting). Distances, delays, trims and
+ * gains are the sheet's (systemChannelSettings), written with the decimals they were rounded to.
+ */
 export function settingsSheetCsv(name: string, revision: number, doc: SystemDocument): string {
   const sheet = settingsSheet(doc);
+  const d = SETTING_DECIMALS;
   const header = ['system', 'revision', 'kind', 'id', 'label', 'profile', 'distanceM', 'distanceSource', 'delayMs', 'trimDb', 'gainDb', 'polarity', 'crossoverHz', 'filter', 'slope', 'count'];
-  const rows: (string | number)[][] = [
-    ...sheet.channels.map((c) => [name, revision, 'channel', c.id, c.channel, c.profileName, round(c.distanceM, 3), c.distanceSource, round(c.delayMs, 2), round(c.trimDb, 1), '', 'normal', c.highpassHz, 'highpass', c.slope, 1]),
-    ...sheet.subs.map((s) => [name, revision, 'sub', s.id, s.name, s.profileName, round(s.distanceM, 3), s.distanceSource, round(s.delayMs, 2), '', round(s.gainDb, 1), s.polarity, s.lowpassHz, 'lowpass', s.slope, s.count]),
+  const rows: (string | number | Setting)[][] = [
+    ...sheet.channels.map((c) => [name, revision, 'channel', c.id, c.channel, c.profileName, setting(c.distanceM, d.distanceM), c.distanceSource, setting(c.delayMs, d.delayMs), setting(c.trimDb, d.trimDb), '', 'normal', c.highpassHz, 'highpass', c.slope, 1]),
+    ...sheet.subs.map((s) => [name, revision, 'sub', s.id, s.name, s.profileName, setting(s.distanceM, d.distanceM), s.distanceSource, setting(s.delayMs, d.delayMs), '', setting(s.gainDb, d.trimDb), s.polarity, s.lowpassHz, 'lowpass', s.slope, s.count]),
   ];
-  const cell = (v: string | number) => {
-    const s = String(v);
-    // Quote per RFC 4180; a leading = + - @ is prefixed so spreadsheets do not run it as a formula.
+  const cell = (v: string | number | Setting) => {
+    const s = v instanceof Setting ? v.text : String(v);
+    // Quote per RFC 4180; a leading = + - @ in text is prefixed so spreadsheets do not run it as a formula.
     const safe = typeof v === 'string' && /^[=+\-@]/.test(s) ? `'${s}` : s;
     return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
   };

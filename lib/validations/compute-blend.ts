@@ -113,32 +113,6 @@ const pairingSchema = z.strictObject({ mainsFilter: filterShapeSchema, subFilter
 /** Most candidate points × slope pairings one sweep request may try. */
 export const SWEEP_LIMITS = { maxCandidates: 60, maxPairings: 6, maxRows: 120, minHz: 20, maxHz: 300 } as const;
 
-/** POST /api/v1/crossover-sweep. */
-export const crossoverSweepRequestSchema = z
-  .strictObject({
-    temperatureC: temperatureCSchema.default(20),
-    mainsRolloff: chainOf(mainsRolloffSchema),
-    subRolloff: chainOf(rolloffSchema),
-    pairings: z.array(pairingSchema).min(1, 'must hold at least one pairing').max(SWEEP_LIMITS.maxPairings, `must hold at most ${SWEEP_LIMITS.maxPairings} pairings`),
-    candidatesHz: z
-      .array(hz(SWEEP_LIMITS.minHz, SWEEP_LIMITS.maxHz))
-      .min(1, 'must hold at least one frequency')
-      .max(SWEEP_LIMITS.maxCandidates, `must hold at most ${SWEEP_LIMITS.maxCandidates} frequencies`)
-      .optional(),
-    mainsGainDb: gainDbSchema.default(0),
-    subGainDb: gainDbSchema.default(0),
-    mainsDistanceM: distanceMSchema.default(0),
-    subDistanceM: distanceMSchema.default(0),
-    maxDelayMs: num(1, 50, 'ms').default(20),
-  })
-  .superRefine((b, ctx) => {
-    const n = (b.candidatesHz?.length ?? DEFAULT_SWEEP_CANDIDATES_HZ.length) * b.pairings.length;
-    if (n > SWEEP_LIMITS.maxRows) {
-      ctx.addIssue({ code: 'custom', path: ['candidatesHz'], message: `candidates × pairings gives ${n} rows; at most ${SWEEP_LIMITS.maxRows} are allowed` });
-    }
-  });
-
-export type CrossoverSweepRequest = z.infer<typeof crossoverSweepRequestSchema>;
 
 const timingMainsSchema = z.strictObject({
   name: nameSchema.default('mains'),
@@ -157,18 +131,43 @@ const timingSubSchema = z.strictObject({
   rolloff: chainOf(rolloffSchema).default({ kind: 'none' }),
 });
 
-/** POST /api/v1/timing. */
-export const timingRequestSchema = z.strictObject({
+/** The whole system a Timing or Crossover sweep request describes: one main channel and every sub, as the processor runs them. */
+const systemShape = {
   temperatureC: temperatureCSchema.default(20),
   crossoverHz: hz(20, 300),
   mainsHighpass: filterShapeSchema,
   subLowpass: filterShapeSchema,
   mains: timingMainsSchema,
   subs: z.array(timingSubSchema).min(1, 'must hold at least one sub').max(8, 'must hold at most 8 subs'),
+};
+
+/** POST /api/v1/timing. */
+export const timingRequestSchema = z.strictObject({
+  ...systemShape,
   maxDelayMs: num(1, 50, 'ms').default(20),
   stepMs: num(0.01, 1, 'ms').default(0.05),
 });
 
+/** POST /api/v1/crossover-sweep: the system as it is (its crossover and slopes are the present row), and what to try. */
+export const crossoverSweepRequestSchema = z
+  .strictObject({
+    ...systemShape,
+    pairings: z.array(pairingSchema).min(1, 'must hold at least one pairing').max(SWEEP_LIMITS.maxPairings, `must hold at most ${SWEEP_LIMITS.maxPairings} pairings`),
+    candidatesHz: z
+      .array(hz(SWEEP_LIMITS.minHz, SWEEP_LIMITS.maxHz))
+      .min(1, 'must hold at least one frequency')
+      .max(SWEEP_LIMITS.maxCandidates, `must hold at most ${SWEEP_LIMITS.maxCandidates} frequencies`)
+      .optional(),
+    maxDelayMs: num(1, 50, 'ms').default(20),
+  })
+  .superRefine((b, ctx) => {
+    const n = (b.candidatesHz?.length ?? DEFAULT_SWEEP_CANDIDATES_HZ.length) * b.pairings.length;
+    if (n > SWEEP_LIMITS.maxRows) {
+      ctx.addIssue({ code: 'custom', path: ['candidatesHz'], message: `candidates × pairings gives ${n} rows; at most ${SWEEP_LIMITS.maxRows} are allowed` });
+    }
+  });
+
+export type CrossoverSweepRequest = z.infer<typeof crossoverSweepRequestSchema>;
 export type TimingRequest = z.infer<typeof timingRequestSchema>;
 
 /** What a client may send (before defaults and roll-off chains are filled in). */

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { LAYOUT_TEMPLATES, statisticalModeCount } from '@/dsp';
+import { refineInsideRoom } from '@/lib/system-model/room-bounds';
 import { num, temperatureCSchema } from './compute-common';
 
 /** Limits of the room compute routes (answered 400 with the field named). */
@@ -104,13 +105,10 @@ export const roomResponseRequestSchema = z
     if (expected > ROOM_LIMITS.maxModes) {
       ctx.addIssue({ code: 'custom', path: ['grid', 'stopHz'], message: `the modal sum would need about ${Math.round(expected)} modes; at most ${ROOM_LIMITS.maxModes} — lower stopHz` });
     }
-    const inside = (p: { xM: number; yM: number; zM: number }, path: (string | number)[]) => {
-      if (p.xM > room.widthM) ctx.addIssue({ code: 'custom', path: [...path, 'xM'], message: `must be within the room width (${room.widthM} m)` });
-      if (p.yM > room.lengthM) ctx.addIssue({ code: 'custom', path: [...path, 'yM'], message: `must be within the room length (${room.lengthM} m)` });
-      if (p.zM > room.heightM) ctx.addIssue({ code: 'custom', path: [...path, 'zM'], message: `must be within the room height (${room.heightM} m)` });
-    };
-    r.seats.forEach((s, i) => inside(s, ['seats', i]));
-    r.subs.forEach((s, i) => inside(s, ['subs', i]));
+    refineInsideRoom(ctx, room, [
+      ...r.seats.map((s, i) => ({ label: s.name, position: s, path: ['seats', i] })),
+      ...r.subs.map((s, i) => ({ label: s.name, position: s, path: ['subs', i] })),
+    ]);
     if (r.map && r.map.zM > room.heightM) ctx.addIssue({ code: 'custom', path: ['map', 'zM'], message: `must be within the room height (${room.heightM} m)` });
     if (r.map && r.map.indices.every((n) => n === 0)) ctx.addIssue({ code: 'custom', path: ['map', 'indices'], message: '(0,0,0) is not a mode' });
   });
@@ -129,6 +127,8 @@ export const layoutRequestSchema = z
   .object({
     template: z.enum(LAYOUT_TEMPLATE_IDS, { error: `must be one of ${LAYOUT_TEMPLATE_IDS.join(', ')}` }),
     temperatureC: temperatureCSchema,
+    /** The System's mains delay, added to every speaker's distance alignment (ms). */
+    mainsDelayMs: num(0, 100, 'ms').default(0),
     room: z.object(roomShape).optional(),
     listener: z.object(point),
     seats: z.array(z.object({ id: z.string().min(1).max(40), name: nameSchema, ...point })).max(40).default([]),
@@ -141,12 +141,24 @@ export const layoutRequestSchema = z
           /** Heading before toe-in, deg: 0 = square to the front wall facing into the room. */
           facingDeg: num(-180, 180, '°').optional(),
           distanceOverrideM: num(0.1, 100, 'm').nullable().optional(),
+          /** The channel's level offset, added to its level match by distance (dB). */
+          trimDb: num(-30, 30, 'dB').default(0),
         }),
       )
       .min(1, 'at least one speaker is needed')
       .max(ROOM_LIMITS.maxSpeakers, `at most ${ROOM_LIMITS.maxSpeakers} speakers`),
     subs: z
-      .array(z.object({ name: nameSchema, ...point, distanceOverrideM: num(0.1, 100, 'm').nullable().optional() }))
+      .array(
+        z.object({
+          name: nameSchema,
+          ...point,
+          distanceOverrideM: num(0.1, 100, 'm').nullable().optional(),
+          /** The sub's own delay, added to its distance alignment (ms). */
+          delayMs: num(0, 100, 'ms').default(0),
+          /** The sub's gain (dB). */
+          gainDb: num(-30, 30, 'dB').default(0),
+        }),
+      )
       .max(ROOM_LIMITS.maxSubs, `at most ${ROOM_LIMITS.maxSubs} subs`)
       .default([]),
     /** When given, the answer also holds each template channel's nominal position at this distance. */
@@ -163,15 +175,12 @@ export const layoutRequestSchema = z
       }
     });
     if (r.room) {
-      const room = r.room;
-      const inside = (p: { xM: number; yM: number; zM: number }, path: (string | number)[]) => {
-        if (p.xM > room.widthM) ctx.addIssue({ code: 'custom', path: [...path, 'xM'], message: `must be within the room width (${room.widthM} m)` });
-        if (p.yM > room.lengthM) ctx.addIssue({ code: 'custom', path: [...path, 'yM'], message: `must be within the room length (${room.lengthM} m)` });
-        if (p.zM > room.heightM) ctx.addIssue({ code: 'custom', path: [...path, 'zM'], message: `must be within the room height (${room.heightM} m)` });
-      };
-      inside(r.listener, ['listener']);
-      r.speakers.forEach((s, i) => inside(s, ['speakers', i]));
-      r.subs.forEach((s, i) => inside(s, ['subs', i]));
+      refineInsideRoom(ctx, r.room, [
+        { label: 'The listening position', position: r.listener, path: ['listener'] },
+        ...r.seats.map((s, i) => ({ label: s.name, position: s, path: ['seats', i] })),
+        ...r.speakers.map((s, i) => ({ label: s.channel, position: s, path: ['speakers', i] })),
+        ...r.subs.map((s, i) => ({ label: s.name, position: s, path: ['subs', i] })),
+      ]);
     }
   });
 export type LayoutRequest = z.infer<typeof layoutRequestSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { documentPositions, refineInsideRoom } from '@/lib/system-model/room-bounds';
 
 /**
  * The System document (SPEC §3): one room, its seats, speakers, subs, bass management and the
@@ -117,7 +118,13 @@ export const roomSchema = z.object({
 
 export const LAYOUT_NAMES = ['2.0', '2.1', '3.1', '5.1', '7.1', '5.1.2', '5.1.4', '7.1.2', '7.1.4', '9.1.6'] as const;
 
-export const systemDocumentSchema = z
+/**
+ * The System document as the editor may hold it while someone works on it: every rule except "inside the room", so a
+ * room made smaller never throws away the seats, speakers and subs it no longer holds (the editor marks them instead).
+ * Only the URL state and a browser's kept draft are read with it; everything saved or computed uses
+ * `systemDocumentSchema`.
+ */
+export const systemDocumentDraftSchema = z
   .object({
     schemaVersion: z.literal(SYSTEM_SCHEMA_VERSION),
     layout: z.enum(LAYOUT_NAMES),
@@ -156,15 +163,10 @@ export const systemDocumentSchema = z
     doc.subs.forEach((s, i) => {
       if (profiles.get(s.profileId)?.kind !== 'sub') ctx.addIssue({ code: 'custom', path: ['subs', i, 'profileId'], message: 'profileId must name a subwoofer profile' });
     });
-    const inside = (p: { xM: number; yM: number; zM: number }, path: (string | number)[]) => {
-      if (p.xM > doc.room.widthM) ctx.addIssue({ code: 'custom', path: [...path, 'xM'], message: `xM must be within the room width (${doc.room.widthM} m)` });
-      if (p.yM > doc.room.lengthM) ctx.addIssue({ code: 'custom', path: [...path, 'yM'], message: `yM must be within the room length (${doc.room.lengthM} m)` });
-      if (p.zM > doc.room.heightM) ctx.addIssue({ code: 'custom', path: [...path, 'zM'], message: `zM must be within the room height (${doc.room.heightM} m)` });
-    };
-    doc.seats.forEach((s, i) => inside(s, ['seats', i]));
-    doc.speakers.forEach((s, i) => inside(s, ['speakers', i]));
-    doc.subs.forEach((s, i) => inside(s, ['subs', i]));
   });
+
+/** The System document (SPEC §3): the draft's rules, and every seat, speaker and sub inside the room. */
+export const systemDocumentSchema = systemDocumentDraftSchema.superRefine((doc, ctx) => refineInsideRoom(ctx, doc.room, documentPositions(doc)));
 
 export type SystemDocument = z.infer<typeof systemDocumentSchema>;
 export type SpeakerProfile = z.infer<typeof speakerProfileSchema>;

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { POST } from '@/app/api/v1/blend/route';
 import { assertInDelta } from '../helpers/assert-in-delta';
+import { speedMps, mul, div, add, scale, bw2, lr4, late, levelDb, type C } from '../helpers/complex-oracle';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any -- answers are read loosely; the assertions check the shapes
 type Json = Record<string, any>;
@@ -27,6 +28,9 @@ const specExample = body([
   { name: 'sub', filter: { family: 'butterworth', order: 2, response: 'lowpass', cornerHz: 80 }, gainDb: 0, delayMs: 2.5, invert: true, distanceM: 3.4 },
 ]);
 
+// ---------------------------------------------------------------- an independent oracle, from the formulas
+
+
 function issuePaths(b: Json): string[] {
   return (b.error?.issues ?? []).map((i: { path: string }) => i.path);
 }
@@ -48,11 +52,40 @@ describe('POST /api/v1/blend', () => {
       expect(v).toBeLessThanOrEqual(180);
     }
     expect(b.metrics).toMatchObject({ crossoverHz: 80, crossoverSource: 'filters', mainsPath: 0, subPath: 1 });
-    for (const key of ['pathLevelsDb', 'sumLevelDb', 'phaseDifferenceDeg', 'maxDeviationDb', 'maxDeviationHz', 'deepestDipDb', 'deepestDipHz', 'minus3DbHz', 'referenceLevelDb', 'peakToPeakDb']) {
-      expect(b.metrics).toHaveProperty(key);
-    }
+    expect(Object.keys(b.metrics).sort()).toEqual(
+      ['bandHz', 'crossoverHz', 'crossoverSource', 'deepestDipDb', 'deepestDipHz', 'flatnessDb', 'mainsPath', 'maxDeviationDb', 'maxDeviationHz', 'minus3DbHz', 'pathLevelsDb', 'phaseDifferenceDeg', 'referenceHz', 'referenceLevelDb', 'subPath', 'sumLevelDb'].sort(),
+    );
     // Butterworth −3.01 dB, Linkwitz–Riley −6.02 dB at the corner (Butterworth 1930; Linkwitz 1976).
     assertInDelta(b.metrics.pathLevelsDb, [-6.021, -3.01], 0.002, 'pathLevelsDb');
+  });
+
+  it('metrics carry the one flatness measure (largest deviation from the sum at 4·fc over fc/2 … 2·fc), checked from the formulas on SPEC §6', async () => {
+    const { body: b } = await post(specExample);
+    const m = b.metrics;
+    expect(m.referenceHz).toBe(320);
+    expect(m.bandHz).toEqual([40, 160]);
+    // LR4 high-pass + BW2 low-pass inverted, the sub 2.5 ms + 3.4 m / c late (Butterworth 1930; Linkwitz 1976;
+    // Kinsler et al. 2000), evaluated here at 48 points per octave from the definition.
+    const lateMs = 2.5 + (1000 * 3.4) / speedMps(20);
+    const sum = (fHz: number) => add(lr4(fHz / 80, 'highpass'), scale(mul(bw2(fHz / 80, 'lowpass'), late(fHz, lateMs)), -1));
+    const ref = levelDb(sum(320));
+    assertInDelta(m.referenceLevelDb, ref, 0.002, 'reference level');
+    let worst = 0;
+    let worstHz = 0;
+    for (let k = -48; k <= 48; k++) {
+      const f = 80 * 2 ** (k / 48);
+      const d = levelDb(sum(f)) - ref;
+      if (Math.abs(d) > Math.abs(worst)) [worst, worstHz] = [d, f];
+    }
+    assertInDelta(m.maxDeviationDb, worst, 0.006, 'signed deviation (0.01 dB)');
+    assertInDelta(m.maxDeviationHz, worstHz, 0.051, 'where');
+    expect(m.flatnessDb).toBe(Math.abs(m.maxDeviationDb));
+    // Rounded to 0.01 dB now (the one measure's rounding everywhere).
+    expect(Math.round(m.maxDeviationDb * 100) / 100).toBe(m.maxDeviationDb);
+    // A dip here, so the deepest dip is the deviation itself.
+    expect(m.deepestDipDb).toBe(m.maxDeviationDb);
+    // The inverted BW2 sub keeps the sum up down to DC: no −3 dB point above 5 Hz.
+    expect(m.minus3DbHz).toBeNull();
   });
 
   it('LR4 high-pass + low-pass, same polarity, sums flat (an all-pass) at every frequency (Linkwitz 1976; REFERENCES.md)', async () => {
@@ -61,6 +94,8 @@ describe('POST /api/v1/blend', () => {
     // The answer is rounded to 0.001 dB (so this reads exactly 0); the dsp's own tests hold it to 1e-9 dB.
     for (const v of b.sum.magnitudeDb) expect(Math.abs(v)).toBe(0);
     expect(Math.abs(b.metrics.maxDeviationDb)).toBeLessThanOrEqual(1e-3);
+    expect(b.metrics.flatnessDb).toBe(0);
+    expect(b.metrics.minus3DbHz).toBeNull(); // flat down to DC
     expect(b.metrics.phaseDifferenceDeg).toBeCloseTo(0, 1);
   });
 
@@ -78,6 +113,13 @@ describe('POST /api/v1/blend', () => {
     expect(inverted.status).toBe(200);
     assertInDelta(inverted.body.metrics.sumLevelDb, 3.01, 0.005, 'BW2 inverted at fc');
     expect(inverted.body.metrics.crossoverSource).toBe('request');
+    // The flatness measure: |H|² = (1 + x²)²/(1 + x⁴) peaks at fc (2, +3.010 dB) against 289/257 at 4·fc (+0.510 dB):
+    // 2.50 dB at 80 Hz (hand algebra on Butterworth 1930); its least, at fc/2 and 2·fc, (1.25)²/1.0625 → +1.165 dB.
+    const m = inverted.body.metrics;
+    assertInDelta(m.flatnessDb, 10 * Math.log10(2) - 10 * Math.log10(289 / 257), 0.006, 'BW2 inverted flatness');
+    expect(m.maxDeviationDb).toBe(m.flatnessDb); // a bump: positive
+    expect(m.maxDeviationHz).toBe(80);
+    assertInDelta(m.deepestDipDb, 10 * Math.log10(1.5625 / 1.0625) - 10 * Math.log10(289 / 257), 0.006, 'least level in the band, above the reference');
     const same = await post(body([path('highpass', 'butterworth', 2), path('lowpass', 'butterworth', 2)], { grid: { startHz: 20, stopHz: 320, pointsPerOctave: 48 } }));
     expect(same.body.metrics.sumLevelDb).toBeLessThan(-60);
     assertInDelta(same.body.metrics.deepestDipHz, 80, 0.01, 'null at the corner');
@@ -124,12 +166,45 @@ describe('POST /api/v1/blend', () => {
     expect(status).toBe(200);
     expect(b.paths.map((p: Json) => p.name)).toEqual(['mains', 'sub 1', 'sub 2']);
     expect(b.metrics.pathLevelsDb).toHaveLength(3);
-    // Unfiltered subs carry the bottom: the sum is still up at 10 Hz, so there is no −3 dB point on the grid.
+    // Unfiltered subs carry the bottom: the sum is still up at 5 Hz (the assessment's floor), so there is no −3 dB point.
     expect(b.metrics.minus3DbHz).toBeNull();
-    // Mains alone (sealed box at 62 Hz under a BW2 high-pass at 80 Hz): the −3 dB point lies above 80 Hz.
+    // Mains alone (sealed box at 62 Hz, Q 0.71, under a BW2 high-pass at 80 Hz): the −3 dB point lies above 80 Hz,
+    // where x⁴/((1−x²)² + x²/q²) of the two (Small 1972; Butterworth 1930) is 3 dB under the level at 4·fc; solved here
+    // by bisection.
     const mainsOnly = await post(body([path('highpass', 'butterworth', 2, { rolloff: { kind: 'sealed', cornerHz: 62, q: 0.71 } })], { crossoverHz: 80 }));
-    expect(mainsOnly.body.metrics.minus3DbHz).toBeGreaterThan(80);
+    const hp2 = (x: number, q: number) => x ** 4 / ((1 - x * x) ** 2 + (x * x) / (q * q));
+    const relDb = (f: number) => 10 * Math.log10((hp2(f / 80, Math.SQRT1_2) * hp2(f / 62, 0.71)) / (hp2(4, Math.SQRT1_2) * hp2(320 / 62, 0.71)));
+    let [lo, hi] = [40, 320];
+    for (let i = 0; i < 60; i++) [lo, hi] = relDb((lo + hi) / 2) < -3 ? [(lo + hi) / 2, hi] : [lo, (lo + hi) / 2];
+    expect(lo).toBeGreaterThan(80);
+    assertInDelta(mainsOnly.body.metrics.minus3DbHz, lo, 0.1, 'mains-only −3 dB point');
+    // And its flatness: the deepest point of the band is fc/2, where both high-passes have fallen furthest.
+    assertInDelta(mainsOnly.body.metrics.flatnessDb, -relDb(40), 0.006, 'mains-only flatness');
+    expect(mainsOnly.body.metrics.deepestDipHz).toBe(40);
     expect(mainsOnly.body.metrics.phaseDifferenceDeg).toBeNull();
+  });
+
+  it('the system −3 dB point is read down to 5 Hz: a sealed sub at 20 Hz sets it; one at 4 Hz is below the floor → null', async () => {
+    const pair = (cornerHz: number) => body([path('highpass', 'linkwitz-riley', 4), path('lowpass', 'linkwitz-riley', 4, { rolloff: { kind: 'sealed', cornerHz, q: Math.SQRT1_2 } })], { crossoverHz: 80 });
+    // The sum from the formulas: LR4 pair (Linkwitz 1976) with the sub's sealed box s²/(s² + s/q + 1) (Small 1972),
+    // relative to 4·fc; where it crosses −3 dB, by bisection.
+    const sealed = (fHz: number, cornerHz: number): C => {
+      const y = fHz / cornerHz;
+      return div([-y * y, 0], [1 - y * y, y / Math.SQRT1_2]);
+    };
+    const rel = (fHz: number, cornerHz: number) => {
+      const sum = (f: number) => add(lr4(f / 80, 'highpass'), mul(lr4(f / 80, 'lowpass'), sealed(f, cornerHz)));
+      return levelDb(sum(fHz)) - levelDb(sum(320));
+    };
+    let [lo, hi] = [5, 80];
+    for (let i = 0; i < 60; i++) [lo, hi] = rel((lo + hi) / 2, 20) < -3 ? [(lo + hi) / 2, hi] : [lo, (lo + hi) / 2];
+    assertInDelta(lo, 20, 0.2, 'oracle: a Butterworth (q = 1/√2) box is −3 dB near its corner (the mains path moves it 0.1 Hz)');
+    const at20 = await post(pair(20));
+    assertInDelta(at20.body.metrics.minus3DbHz, lo, 0.1, '−3 dB point with a 20 Hz sub');
+    // At 4 Hz the sub's box is still above −3 dB at 5 Hz (|S|² = y⁴/(1 + y⁴) at y = 1.25: −1.6 dB): no point to report.
+    expect(rel(5, 4)).toBeGreaterThan(-3);
+    const at4 = await post(pair(4));
+    expect(at4.body.metrics.minus3DbHz).toBeNull();
   });
 
   describe('bad fields are answered 400 with their path', () => {

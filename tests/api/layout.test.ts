@@ -75,13 +75,35 @@ describe('POST /api/v1/layout — angles from the MLP (published: ITU-R BS.775-3
     const { body } = await call({ ...BODY, speakers: [{ channel: 'L', ...at(30, 3) }, { channel: 'C', ...at(0, 2) }, { channel: 'R', ...at(-30, 3) }], subs: [{ name: 'Sub', ...at(40, 3.5, 0.3) }] });
     const c = body.speakers.find((s: Json) => s.channel === 'C');
     const l = body.speakers.find((s: Json) => s.channel === 'L');
-    expect(body.farthest.name).toBe('Sub');
+    expect(body.farthest).toEqual({ name: 'Sub', distanceM: 3.59 });
     const subDistance = Math.hypot(3.5, 0.8);
-    assertInDelta(l.delayMs, ((subDistance - 3) / 343.2146) * 1000, 0.002, 'L waits for the sub');
-    assertInDelta(c.delayMs - l.delayMs, 2.914, 0.002, '1 m = 2.914 ms');
-    assertInDelta(c.trimDb, 20 * Math.log10(2 / 3), 0.01, 'C trim among the speakers');
+    // Processor settings, rounded once: 0.01 ms and 0.1 dB (the Settings sheet's numbers).
+    assertInDelta(l.delayMs, ((subDistance - 3) / 343.2146) * 1000, 0.005 + 1e-9, 'L waits for the sub');
+    expect(l.delayMs).toBe(1.72); // 0.5903 m × 2.9136 ms/m = 1.7199
+    expect(c.delayMs).toBe(4.63); // 1.5903 m × 2.9136 ms/m = 4.6335
+    assertInDelta(c.delayMs - l.delayMs, 2.914, 0.01, '1 m = 2.914 ms');
+    expect(c.trimDb).toBe(-3.5); // 20·log10(2/3) = −3.52, among the speakers
     expect(l.trimDb).toBe(0);
-    expect(body.subs[0].delayMs).toBe(0);
+    expect(body.subs[0]).toEqual({ name: 'Sub', distanceM: 3.59, distanceSource: 'geometry', delayMs: 0, gainDb: 0 });
+  });
+
+  it('the mains delay, each speaker’s offset and each sub’s own delay and gain join in: the channel settings of the Settings sheet', async () => {
+    const { body } = await call({
+      ...BODY,
+      mainsDelayMs: 1.5,
+      speakers: [{ channel: 'L', ...at(30, 3) }, { channel: 'C', ...at(0, 2), trimDb: 0.5 }, { channel: 'R', ...at(-30, 3) }],
+      subs: [{ name: 'Sub', ...at(40, 3.5, 0.3), delayMs: 2, gainDb: -3 }],
+    });
+    // Totals: L and R 1.72 + 1.5 = 3.22, C 4.63 + 1.5 = 6.13, sub 0 + 2 = 2; the shared 2 ms taken out.
+    expect(body.speakers.map((s: Json) => [s.channel, s.delayMs, s.trimDb])).toEqual([
+      ['L', 1.22, 0],
+      ['C', 4.13, -3], // −3.52 + 0.5 = −3.02
+      ['R', 1.22, 0],
+    ]);
+    expect(body.subs[0]).toMatchObject({ delayMs: 0, gainDb: -3 });
+    // Left out, they are 0: five speakers on one circle, no subs, all 0 ms and 0 dB.
+    const plain = await call(BODY);
+    expect(plain.body.speakers.map((s: Json) => [s.delayMs, s.trimDb])).toEqual(Array.from({ length: 5 }, () => [0, 0]));
   });
 
   it('a distance override replaces the geometry for delay; radiusM returns the template’s nominal positions kept inside the room', async () => {
@@ -113,6 +135,11 @@ describe('POST /api/v1/layout — bad input answered with the field named', () =
     expect(pathsOf(body)).toEqual(['speakers.3.aim.kind']);
     const second = await call({ ...BODY, speakers: [{ channel: 'L', xM: 5.5, yM: 1, zM: 1 }, { channel: 'C', ...listener }, { channel: 'R', ...at(-30), aim: { kind: 'seat', seatId: 'nobody' } }] });
     expect(pathsOf(second.body)).toEqual(['speakers.0.xM', 'speakers.1.xM', 'speakers.2.aim.seatId']);
+  });
+  it('a negative mains or sub delay, a trim beyond ±30 dB and a text gain, by their paths', async () => {
+    const { status, body } = await call({ ...BODY, mainsDelayMs: -1, speakers: [{ ...ITU_51[0], trimDb: 31 }], subs: [{ name: 'Sub', ...at(40, 3.5, 0.3), delayMs: -0.5, gainDb: 'loud' }] });
+    expect(status).toBe(400);
+    expect(pathsOf(body)).toEqual(['mainsDelayMs', 'speakers.0.trimDb', 'subs.0.delayMs', 'subs.0.gainDb']);
   });
   it('non-numeric coordinates, a negative temperature below −20 °C and 33 speakers', async () => {
     expect(pathsOf((await call({ ...BODY, temperatureC: -40, speakers: [{ ...ITU_51[0], yM: 'front' }] })).body)).toEqual(['speakers.0.yM', 'temperatureC']);

@@ -1,7 +1,12 @@
+import { Suspense } from 'react';
 import { SignUpForm } from '@/components/auth/sign-up-form';
 
 export const metadata = { title: 'Create account' };
 
 export default function SignUpPage() {
-  return <SignUpForm />;
+  return (
+    <Suspense>
+      <SignUpForm />
+    </Suspense>
+  );
 }

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import Complex from 'complex.js';
 import { readFileSync } from 'node:fs';
-import { alignSubToMains, blendResponse, blendSumResponse, crossoverSweep, logFrequencyGridHz, rolloffResponse, rolloffSections, type PathSpec, type RolloffSpec } from '@/dsp';
+import { alignSubToMains, blendResponse, blendSumResponse, crossoverSweep, logFrequencyGridHz, type SystemModel, rolloffResponse, rolloffSections, type PathSpec, type RolloffSpec } from '@/dsp';
 import { angleDiffDeg, assertInDelta } from '../../helpers/assert-in-delta';
 
 interface Fixture {
@@ -95,12 +95,20 @@ describe('rolloffResponse / rolloffSections with a list of roll-offs', () => {
 describe('crossover sweep and Timing with several roll-offs', () => {
   const subRolloff: RolloffSpec[] = [{ kind: 'sealed', cornerHz: 24, q: 0.7 }, { kind: 'lowpass', cornerHz: 180, q: 0.7 }];
   it('a sub’s low roll-off changes the sweep only through the sub: a roll-off far below the band barely matters', () => {
-    const base = { temperatureC: 20, mainsRolloff: [{ kind: 'sealed' as const, cornerHz: 60, q: 0.707 }], mainsFilter: { family: 'linkwitz-riley' as const, order: 4 }, subFilter: { family: 'linkwitz-riley' as const, order: 4 }, candidatesHz: [80, 120] };
-    const both = crossoverSweep({ ...base, subRolloff });
-    const upperOnly = crossoverSweep({ ...base, subRolloff: subRolloff[1]! });
-    const tooHigh = crossoverSweep({ ...base, subRolloff: [{ kind: 'sealed', cornerHz: 70, q: 0.7 }, subRolloff[1]!] });
-    const at = (rows: typeof both.rows, hz: number) => rows.find((r) => r.crossoverHz === hz)!;
-    // A 24 Hz sealed sub shifts the ±1-octave band around 120 Hz by little; a 70 Hz one by much more.
+    const model = (rolloff: SystemModel['subs'][number]['rolloff']): SystemModel => ({
+      temperatureC: 20,
+      crossoverHz: 80,
+      mainsHighpass: { family: 'linkwitz-riley', order: 4 },
+      subLowpass: { family: 'linkwitz-riley', order: 4 },
+      mains: { name: 'L', distanceM: 3, delayMs: 0, gainDb: 0, invert: false, rolloff: [{ kind: 'sealed', cornerHz: 60, q: 0.707 }] },
+      subs: [{ name: 'sub', distanceM: 3, delayMs: 0, gainDb: 0, invert: false, rolloff }],
+    });
+    const sweep = (rolloff: SystemModel['subs'][number]['rolloff']) => crossoverSweep({ model: model(rolloff), pairings: [{ mainsFilter: { family: 'linkwitz-riley', order: 4 }, subFilter: { family: 'linkwitz-riley', order: 4 } }], candidatesHz: [80, 120] });
+    const both = sweep(subRolloff);
+    const upperOnly = sweep(subRolloff[1]!);
+    const tooHigh = sweep([{ kind: 'sealed', cornerHz: 70, q: 0.7 }, subRolloff[1]!]);
+    const at = (rows: typeof both.rows, hz: number) => rows.find((r) => r.crossoverHz === hz && !r.present)!;
+    // A 24 Hz sealed sub shifts the flatness band around 120 Hz by little; a 70 Hz one by much more.
     expect(Math.abs(at(both.rows, 120).flatnessDb - at(upperOnly.rows, 120).flatnessDb)).toBeLessThan(0.5);
     expect(at(both.rows, 120).flatnessDb).not.toBe(at(upperOnly.rows, 120).flatnessDb);
     expect(Math.abs(at(tooHigh.rows, 80).flatnessDb - at(upperOnly.rows, 80).flatnessDb)).toBeGreaterThan(0.5);

@@ -5,8 +5,10 @@ import { expect, type Page } from '@playwright/test';
  * Serious and critical axe violations inside `include` (default `main`), as readable lines; an empty list passes.
  * Scanning only the page's own content keeps axe quick on a busy machine.
  */
-export async function seriousViolations(page: Page, label: string, include = 'main'): Promise<string[]> {
-  const results = await new AxeBuilder({ page }).include(include).analyze();
+export async function seriousViolations(page: Page, label: string, include = 'main', exclude: readonly string[] = []): Promise<string[]> {
+  let builder = new AxeBuilder({ page }).include(include);
+  for (const selector of exclude) builder = builder.exclude(selector);
+  const results = await builder.analyze();
   return results.violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
     .map((v) => `${label}: ${v.id} — ${v.help} (${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join(', ')})`);

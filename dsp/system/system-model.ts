@@ -1,0 +1,68 @@
+import type { PathSpec } from '../blend/blend-types';
+import type { FilterShape, RolloffChain } from '../filters/filter-types';
+
+/** One source of the system as it sounds at the seat: its air path, its processor delay, level and polarity. */
+export interface SystemSource {
+  readonly name: string;
+  /** Air path to the seat, m. */
+  readonly distanceM: number;
+  /** Processor delay of this source (distance alignment and any extra delay, as the processor runs it), ms ≥ 0. */
+  readonly delayMs: number;
+  /** Level at the seat relative to level-matched sources, dB. */
+  readonly gainDb: number;
+  readonly invert: boolean;
+  /** The speaker's natural roll-off(s): a main's low roll-off; a sub's [low, upper] roll-offs. */
+  readonly rolloff?: RolloffChain;
+}
+
+/** Bass management: the crossover point and the two slopes. */
+export interface CrossoverSetting {
+  readonly crossoverHz: number;
+  readonly mainsHighpass: FilterShape;
+  readonly subLowpass: FilterShape;
+}
+
+/** One main channel and every sub, as the processor runs them: the whole system behind every plot and piece of advice. */
+export interface SystemModel extends CrossoverSetting {
+  readonly temperatureC: number;
+  readonly mains: SystemSource;
+  readonly subs: readonly SystemSource[];
+}
+
+/**
+ * The paths of a system: the main channel (high-pass at the crossover × its roll-off) first, then every sub (low-pass
+ * at the crossover × its roll-offs), each with its gain, polarity, processor delay and air path. Every evaluation of
+ * a System — Blend, the Crossover sweep, Timing, Lessons, Measured — sums exactly these.
+ * @example systemPaths(model).length // 1 + model.subs.length
+ */
+export function systemPaths(model: SystemModel): PathSpec[] {
+  const { crossoverHz } = model;
+  const path = (s: SystemSource, filter: PathSpec['filter']): PathSpec => ({
+    name: s.name,
+    filter,
+    ...(s.rolloff !== undefined ? { rolloff: s.rolloff } : {}),
+    gainDb: s.gainDb,
+    delayMs: s.delayMs,
+    invert: s.invert,
+    distanceM: s.distanceM,
+  });
+  return [
+    path(model.mains, { ...model.mainsHighpass, response: 'highpass', cornerHz: crossoverHz }),
+    ...model.subs.map((s) => path(s, { ...model.subLowpass, response: 'lowpass', cornerHz: crossoverHz })),
+  ];
+}
+
+/**
+ * The model with sub k's delay moved by changes[k].shiftMs and its polarity flipped when changes[k].flip; processor
+ * delays stay positive: whatever would go below 0 is added to every other source instead, and the delay all sources
+ * then share is taken out (a common delay changes no level).
+ */
+export function retimeSources(model: SystemModel, changes: readonly { readonly shiftMs: number; readonly flip: boolean }[]): SystemModel {
+  const subDelays = model.subs.map((s, k) => s.delayMs + (changes[k]?.shiftMs ?? 0));
+  const common = Math.min(model.mains.delayMs, ...subDelays);
+  return {
+    ...model,
+    mains: { ...model.mains, delayMs: model.mains.delayMs - common },
+    subs: model.subs.map((s, k) => ({ ...s, delayMs: (subDelays[k] as number) - common, invert: changes[k]?.flip ? !s.invert : s.invert })),
+  };
+}
