@@ -184,8 +184,12 @@ export function PredictedBlend({ items, mainsId, subId, onPick, subTarget, onSub
             <h4 className="text-sm font-semibold">Best delay and polarity on the measured pair</h4>
             {a ? (
               <>
+                <p className={`text-base font-semibold ${a.keep ? 'text-ok' : ''}`} data-testid="measured-advice">
+                  {a.keep ? 'Keep the present setting' : 'Change the delays as below'}
+                </p>
+                <p className="num text-xs text-ink-soft">{a.reason}</p>
                 <p className="text-sm" data-testid="measured-recommendation">
-                  Set the sub delay to <span className="num font-semibold">{formatNumber(a.subDelayMs, 2)} ms</span> and the mains delay to{' '}
+                  {a.keep ? 'Flattest found: ' : ''}processor delays (as on the Settings sheet) sub <span className="num font-semibold">{formatNumber(a.subDelayMs, 2)} ms</span> and mains{' '}
                   <span className="num font-semibold">{formatNumber(a.mainsDelayMs, 2)} ms</span>, sub polarity <span className="font-semibold">{a.invert ? 'inverted' : 'normal'}</span>
                   {a.flipPolarity ? ' (flipped)' : ''}
                   {a.addDelayMs < 0.01 ? ': the delays stay as they are' : `: the sub moves ${formatNumber(a.addDelayMs, 2)} ms ${a.addTo === 'sub' ? 'later' : 'earlier'} against the mains`}. Flatness within ±1 octave of the crossover{' '}
@@ -213,9 +217,11 @@ export function PredictedBlend({ items, mainsId, subId, onPick, subTarget, onSub
                   heightPx={200}
                 />
                 <div className="flex flex-wrap items-center gap-2">
-                  <Button onClick={apply} disabled={readOnly}>
-                    Apply to System
-                  </Button>
+                  {a.keep ? null : (
+                    <Button onClick={apply} disabled={readOnly}>
+                      Apply to System
+                    </Button>
+                  )}
                   {applied ? <span className="text-xs text-ok" role="status">{applied}</span> : null}
                 </div>
               </>

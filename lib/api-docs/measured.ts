@@ -124,7 +124,7 @@ export const MEASURED_DOCS: ApiRouteDoc[] = [
       { name: 'paths', type: '{ name, magnitudeDb, phaseDeg, phaseEstimated }[]', description: 'Each curve with its settings applied.' },
       { name: 'predictedSum', type: '{ magnitudeDb, phaseDeg }', description: 'The complex sum of the processed curves.' },
       { name: 'measuredSum', type: '{ magnitudeDb, phaseDeg }', description: 'The complex sum of the curves as measured (no processing).' },
-      { name: 'alignment', type: 'object | null', description: 'addTo, addDelayMs, subDelayMs, mainsDelayMs, invert, flipPolarity, flatnessBeforeDb, flatnessDb, crossoverLevelDb, timingWindowMs [from, to] (sub minus mains), levelVersusDelay, recommendedSum. Null when the curves do not cover half to four times the crossover (alignmentNote says why).' },
+      { name: 'alignment', type: 'object | null', description: 'keep (true when the best setting is under 0.5 dB flatter than the present: keep it), reason, addTo, addDelayMs, subDelayMs and mainsDelayMs (processor delays, as on the Settings sheet), invert, flipPolarity, flatnessBeforeDb, flatnessDb, crossoverLevelDb, timingWindowMs [from, to] (sub minus mains), levelVersusDelay, recommendedSum. Null when the curves do not cover half to four times the crossover (alignmentNote says why).' },
     ],
     examples: [
       {

@@ -5,6 +5,7 @@
  * is dsp's; here only the shared grid, processor bookkeeping and rounding.
  */
 import {
+  ADVICE_RULES,
   bestMeasuredAlignment,
   logFrequencyGridHz,
   predictMeasuredBlend,
@@ -16,8 +17,8 @@ import {
 import { invalid } from '@/lib/errors';
 import type { PredictRequest, PredictRequestInput } from '@/lib/validations/measurement';
 import type { SystemDocument } from '@/lib/validations/system';
-import { blendMainSpeaker } from './index';
-import { roundTo } from './blend-compute';
+import { roundTo } from './rounding';
+import { applyTimingToDocument, systemModelFromDocument, timingSettingsOf } from './system-from-document';
 
 /** The points of one curve, as stored or sent inline. */
 export interface CurvePoints {
@@ -50,6 +51,10 @@ export interface PredictAnswer {
   measuredSum: { magnitudeDb: number[]; phaseDeg: number[] };
   /** Best extra delay and sub polarity found on the measured pair; null when the curves do not cover fc/2 … 4fc. */
   alignment: null | {
+    /** True when the best setting is under ADVICE_RULES.audibleGainDb (0.5 dB) flatter than the present: keep it. */
+    keep: boolean;
+    /** One sentence: what the change gains, or why the present setting stays. */
+    reason: string;
     addTo: 'sub' | 'mains';
     addDelayMs: number;
     subDelayMs: number;
@@ -142,7 +147,14 @@ export function computeMeasuredPrediction(req: PredictRequest, curves: { mains: 
       measured: [input(m, { ...mainsPath, delayMs: mainsDelayMs }), input(s, { ...subPathSpec, delayMs: subDelayMs, invert: a.invertSub })],
       temperatureC: req.temperatureC,
     });
+    // The one advice rule (ADVICE_RULES): a change under 0.5 dB of the flatness measure is not worth making.
+    const gainDb = a.flatnessBeforeDb - a.flatnessDb;
+    const keep = gainDb < ADVICE_RULES.audibleGainDb;
     alignment = {
+      keep,
+      reason: keep
+        ? `Keep the present setting (±${a.flatnessBeforeDb.toFixed(2)} dB on the measured pair): the best delay and polarity gain only ${Math.max(0, gainDb).toFixed(2)} dB, under the ${ADVICE_RULES.audibleGainDb} dB a listener could hear in the bass.`
+        : `Flatness on the measured pair ±${a.flatnessBeforeDb.toFixed(2)} dB → ±${a.flatnessDb.toFixed(2)} dB (${gainDb.toFixed(2)} dB better).`,
       addTo: next >= offsetMs ? 'sub' : 'mains',
       addDelayMs: r3(Math.abs(a.relativeDelayMs)),
       subDelayMs: r3(subDelayMs),
@@ -199,43 +211,49 @@ export function predictRequestFromDocument(
   target: PredictTarget,
   options: { smoothingFraction?: number } = {},
 ): PredictRequestInput | null {
-  const speaker = blendMainSpeaker(doc, target.channel);
-  const sub = doc.subs[target.subIndex === 'all' ? 0 : target.subIndex];
-  if (!speaker || !sub) return null;
+  // The processor's delays come from the whole-system model (the one channel-settings function), so the
+  // measured curves get what the processor runs: distance alignment plus the mains and sub delays.
+  const model = systemModelFromDocument(doc, target.channel);
+  const k = target.subIndex === 'all' ? 0 : target.subIndex;
+  const sub = doc.subs[k];
+  const subSource = model?.subs[k];
+  if (!model || !sub || !subSource) return null;
   const bm = doc.bassManagement;
   return {
     temperatureC: doc.room.temperatureC,
     crossoverHz: bm.crossoverHz,
     mainsHighpass: { family: bm.mainsHighpass.family, order: bm.mainsHighpass.order },
     subLowpass: { family: bm.subLowpass.family, order: bm.subLowpass.order },
-    mains: { name: speaker.channel, curve: curves.mains, gainDb: speaker.trimDb, delayMs: bm.mainsDelayMs, invert: false },
-    sub: { name: target.subIndex === 'all' ? 'All subs' : sub.name, curve: curves.sub, gainDb: sub.gainDb, delayMs: sub.delayMs, invert: sub.invert },
+    mains: { name: model.mains.name, curve: curves.mains, gainDb: model.mains.gainDb, delayMs: model.mains.delayMs, invert: false },
+    sub: { name: target.subIndex === 'all' ? 'All subs' : sub.name, curve: curves.sub, gainDb: sub.gainDb, delayMs: subSource.delayMs, invert: sub.invert },
     smoothingFraction: options.smoothingFraction ?? 0,
   };
 }
 
 /**
- * Writes the measured-pair recommendation into the document: the chosen sub's delay and polarity
- * and the mains delay. When the mains delay moves, the other subs move by the same amount so their
- * own alignment to the mains is kept; then what every path has in common is taken out.
+ * Writes the measured-pair recommendation into the document: the processor delays it states (the mains', the chosen
+ * sub's) and the sub's polarity. Other subs keep their timing against the mains (they move with the mains delay);
+ * with "all" every sub moves and flips together. Delays are written back through the one channel-settings bookkeeping
+ * (applyTimingToDocument), so the processor runs exactly the advised settings.
  */
-export function applyMeasuredRecommendation(doc: SystemDocument, subIndex: number | 'all', rec: { subDelayMs: number; mainsDelayMs: number; invert: boolean; flipPolarity: boolean }): SystemDocument {
-  const clamp = (v: number) => Math.min(100, Math.max(0, roundTo(v, 2)));
-  const mainsShift = rec.mainsDelayMs - doc.bassManagement.mainsDelayMs;
-  // "all": the measurement is of every sub playing together (with the first sub's settings): all move alike.
-  const first = doc.subs[0];
+export function applyMeasuredRecommendation(
+  doc: SystemDocument,
+  subIndex: number | 'all',
+  rec: { subDelayMs: number; mainsDelayMs: number; invert: boolean; flipPolarity: boolean },
+  channel?: string,
+): SystemDocument {
+  const model = systemModelFromDocument(doc, channel);
+  if (!model) return doc;
+  const before = timingSettingsOf(model);
+  const mainsShift = rec.mainsDelayMs - before.mainsDelayMs;
+  const first = before.subs[0];
   const allShift = first ? rec.subDelayMs - first.delayMs : 0;
-  const subs = doc.subs.map((s, k) =>
+  const subs = before.subs.map((s, k) =>
     subIndex === 'all'
-      ? { ...s, delayMs: s.delayMs + allShift, invert: rec.flipPolarity ? !s.invert : s.invert }
+      ? { delayMs: s.delayMs + allShift, invert: rec.flipPolarity ? !s.invert : s.invert }
       : k === subIndex
-        ? { ...s, delayMs: rec.subDelayMs, invert: rec.invert }
-        : { ...s, delayMs: s.delayMs + mainsShift },
+        ? { delayMs: rec.subDelayMs, invert: rec.invert }
+        : { delayMs: s.delayMs + mainsShift, invert: s.invert },
   );
-  const common = Math.min(rec.mainsDelayMs, ...subs.map((s) => s.delayMs));
-  return {
-    ...doc,
-    bassManagement: { ...doc.bassManagement, mainsDelayMs: clamp(rec.mainsDelayMs - common) },
-    subs: subs.map((s) => ({ ...s, delayMs: clamp(s.delayMs - common) })),
-  };
+  return applyTimingToDocument(doc, before, { mainsDelayMs: rec.mainsDelayMs, subs });
 }
