@@ -33,7 +33,7 @@ import { Client, uniqueEmail } from '../helpers/http';
  * would accept is not sent (and counted as such). So a 2xx is always a bug, never bad luck.
  */
 
-const BODIES_PER_ROUTE = Number(process.env.HOSTILE_BODIES_PER_ROUTE ?? 1000);
+const BODIES_PER_ROUTE = Number(process.env.HOSTILE_BODIES_PER_ROUTE ?? 600);
 const UPLOADS = Number(process.env.HOSTILE_UPLOADS ?? 300);
 const IN_FLIGHT = 16;
 const SEED = Number(process.env.HOSTILE_SEED ?? 20_240_808);

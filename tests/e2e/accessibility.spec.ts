@@ -13,9 +13,11 @@ const PANELS = [
   { name: 'Measured', ready: 'measured-panel' },
 ] as const;
 
-// Modes draws a mode map and seat plots with thousands of SVG elements: its text and its plots are scanned apart.
+// Modes draws a mode table of every mode below 200 Hz, a mode map and seat plots with thousands of SVG elements:
+// its text and controls, its mode table and its plots are scanned apart.
 const PARTS: { label: string; include: string; exclude: string[] }[] = [
-  { label: 'text and controls', include: '[role=tabpanel]', exclude: ['[role=tabpanel] svg'] },
+  { label: 'text and controls', include: '[role=tabpanel]', exclude: ['[role=tabpanel] svg', '[data-testid=mode-table]'] },
+  { label: 'mode table', include: '[data-testid=mode-table]', exclude: [] },
   { label: 'plots', include: '[role=tabpanel] svg', exclude: [] },
 ];
 
