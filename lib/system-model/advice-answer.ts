@@ -3,7 +3,7 @@
  * setting, the settings a piece of advice would run, and the plain reason when the present setting is kept.
  * Rounded once, here, at the edge.
  */
-import { ADVICE_RULES, effectiveMinus3Hz, FLATNESS_DEFINITION, type AdviceComparison, type BlendAssessment, type SystemModel } from '@/dsp';
+import { ADVICE_RULES, FLATNESS_DEFINITION, type AdviceComparison, type BlendAssessment, type SystemModel } from '@/dsp';
 import { roundTo } from './rounding';
 
 /** One setting's assessment (levels relative to the sum at 4·fc). */
@@ -92,4 +92,3 @@ export function adviceAnswer(keep: boolean, present: BlendAssessment, after: Ble
 
 /** The flatness measure's definition, as every answer states it. */
 export const FLATNESS_TEXT = FLATNESS_DEFINITION.text;
-export { effectiveMinus3Hz };

@@ -10,7 +10,6 @@ import { assessmentAnswer, settingsAnswer, type AssessmentAnswer, type SettingsA
 import { roundTo } from './rounding';
 import { modelFromRequest } from './timing';
 
-export { roundTo };
 
 function rounded(values: ArrayLike<number>, decimals: number): number[] {
   const k = 10 ** decimals;

@@ -218,12 +218,11 @@ export function predictRequestFromDocument(
   const sub = doc.subs[k];
   const subSource = model?.subs[k];
   if (!model || !sub || !subSource) return null;
-  const bm = doc.bassManagement;
   return {
-    temperatureC: doc.room.temperatureC,
-    crossoverHz: bm.crossoverHz,
-    mainsHighpass: { family: bm.mainsHighpass.family, order: bm.mainsHighpass.order },
-    subLowpass: { family: bm.subLowpass.family, order: bm.subLowpass.order },
+    temperatureC: model.temperatureC,
+    crossoverHz: model.crossoverHz,
+    mainsHighpass: { ...model.mainsHighpass },
+    subLowpass: { ...model.subLowpass },
     mains: { name: model.mains.name, curve: curves.mains, gainDb: model.mains.gainDb, delayMs: model.mains.delayMs, invert: false },
     sub: { name: target.subIndex === 'all' ? 'All subs' : sub.name, curve: curves.sub, gainDb: sub.gainDb, delayMs: subSource.delayMs, invert: sub.invert },
     smoothingFraction: options.smoothingFraction ?? 0,

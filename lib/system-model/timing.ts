@@ -68,7 +68,7 @@ export interface TimingAnswer {
 const r3 = (v: number) => roundTo(v, 3);
 
 /** A roll-off chain as the request schema takes it (a plain array). */
-export const asChain = (r: RolloffChain): RolloffSpec | RolloffSpec[] => (Array.isArray(r) ? [...r] : (r as RolloffSpec));
+const asChain = (r: RolloffChain): RolloffSpec | RolloffSpec[] => (Array.isArray(r) ? [...r] : (r as RolloffSpec));
 
 /** The whole-system model a Timing (or Crossover sweep) request describes. */
 export function modelFromRequest(req: Pick<TimingRequest, 'temperatureC' | 'crossoverHz' | 'mainsHighpass' | 'subLowpass' | 'mains' | 'subs'>): SystemModel {
