@@ -21,6 +21,34 @@ const config = [
       'no-restricted-imports': ['error', { paths: ['sequelize'], patterns: ['@/models', '@/models/*'] }],
     },
   },
+  {
+    // No import cycles anywhere in the app: layers import downward only (dsp ← lib ← components ← app).
+    files: ['app/**/*.{ts,tsx}', 'components/**/*.{ts,tsx}', 'lib/**/*.{ts,tsx}', 'dsp/**/*.ts', 'models/**/*.ts', 'migrations/**/*.ts'],
+    rules: {
+      'import/no-cycle': ['error', { ignoreExternal: true }],
+    },
+  },
+  {
+    // A soft size limit: a file past 300 lines usually holds two ideas. Named exceptions below.
+    files: ['app/**/*.{ts,tsx}', 'components/**/*.{ts,tsx}', 'lib/**/*.{ts,tsx}', 'dsp/**/*.ts', 'models/**/*.ts', 'scripts/**/*.ts'],
+    ignores: [
+      'lib/api-docs/**', // the API page's field tables: data, one file a route group
+      'scripts/test.ts', // the one test runner, read top to bottom
+    ],
+    rules: {
+      'max-lines': ['error', { max: 300, skipBlankLines: true, skipComments: true }],
+    },
+  },
+  {
+    // Components reach stored data through the API (SWR hooks), never the server's data layer: types only.
+    files: ['components/**/*.{ts,tsx}'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['@/lib/data', '@/lib/data/*', '@/models', '@/models/*'], allowTypeImports: true, message: 'Components may import types from lib/data, never its functions (use the API through lib/hooks).' }] },
+      ],
+    },
+  },
 ];
 
 export default config;

@@ -5,7 +5,7 @@ export interface IssueDetail {
   message: string;
 }
 
-/** An error the caller can act on; it becomes a JSON answer as SPEC §6 describes. */
+/** An error the caller can act on; it becomes the API's one JSON error answer (DEVELOPERS.md, "The flow of a request"). */
 export class AppError extends Error {
   constructor(
     readonly status: number,

@@ -1,8 +1,20 @@
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
-import { AppError, errorBody, fromZod, invalid, tooLarge, toAppError, unsupportedMedia } from './errors';
+import { errorBody, fromZod, invalid, tooLarge, toAppError, unsupportedMedia } from './errors';
 
-export const DEFAULT_BODY_LIMIT_BYTES = 256 * 1024;
+/** Largest request bodies the JSON routes read, in bytes; a larger body is answered 413 before it is parsed. */
+export const BODY_LIMIT_BYTES = {
+  /** Compute requests, System documents and Lesson Steps: the default of `parseJson`. */
+  standard: 256 * 1024,
+  /** Small forms: names, e-mail addresses, roles, revisions. */
+  form: 16 * 1024,
+  /** A Speaker profile. */
+  profile: 32 * 1024,
+  /** A Lesson's new Step order (up to 200 ids). */
+  stepOrder: 32 * 1024,
+  /** POST /api/v1/measured/predict: two measured curves inline, up to 20 000 points each. */
+  measuredCurves: 2 * 1024 * 1024,
+} as const;
 
 export function json(data: unknown, status = 200, headers: Record<string, string> = {}) {
   return NextResponse.json(data, { status, headers: { 'Cache-Control': 'no-store', ...headers } });
@@ -17,7 +29,7 @@ export function errorResponse(error: unknown) {
 }
 
 /** Reads at most `limitBytes` of the body as text, answering 413 beyond (without buffering it all). */
-export async function readBodyText(request: Request, limitBytes = DEFAULT_BODY_LIMIT_BYTES): Promise<string> {
+export async function readBodyText(request: Request, limitBytes: number = BODY_LIMIT_BYTES.standard): Promise<string> {
   const declared = Number(request.headers.get('content-length') ?? NaN);
   if (Number.isFinite(declared) && declared > limitBytes) throw tooLarge(limitBytes);
   if (!request.body) return '';
@@ -38,7 +50,7 @@ export async function readBodyText(request: Request, limitBytes = DEFAULT_BODY_L
 }
 
 /** Parses a JSON body against a zod schema: 415 for other media types, 413 when too large, 400 otherwise. */
-export async function parseJson<S extends z.ZodType>(request: Request, schema: S, limitBytes = DEFAULT_BODY_LIMIT_BYTES): Promise<z.infer<S>> {
+export async function parseJson<S extends z.ZodType>(request: Request, schema: S, limitBytes: number = BODY_LIMIT_BYTES.standard): Promise<z.infer<S>> {
   const type = request.headers.get('content-type') ?? '';
   if (!/^application\/(.+\+)?json\b/i.test(type)) throw unsupportedMedia('application/json');
   const text = await readBodyText(request, limitBytes);
@@ -63,7 +75,7 @@ export function parseQuery<S extends z.ZodType>(request: Request, schema: S): z.
 
 type Handler<C> = (request: Request, context: C) => Promise<Response>;
 
-/** Wraps a route handler so every thrown error becomes the JSON error answer of SPEC §6. */
+/** Wraps a route handler so every thrown error becomes the one JSON error answer (`lib/errors.ts`, the API page /docs/api). */
 export function route<C = unknown>(handler: Handler<C>): Handler<C> {
   return async (request, context) => {
     try {
@@ -73,5 +85,3 @@ export function route<C = unknown>(handler: Handler<C>): Handler<C> {
     }
   };
 }
-
-export { AppError };

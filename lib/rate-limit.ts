@@ -41,5 +41,3 @@ export async function recordFailedSignIn(email: string, address: string): Promis
 export async function clearFailedSignIns(email: string): Promise<void> {
   await limiters().byEmail.delete(email).catch(() => undefined);
 }
-
-export const SIGN_IN_LIMIT_MESSAGE = message;

@@ -10,11 +10,14 @@ import { migration as createPasswordResetTokens } from './20261201000800-create-
 import { migration as createRateLimits } from './20261201000900-create-rate-limits';
 import { migration as createDevMessages } from './20261201001000-create-dev-messages';
 import { migration as createSpeakerProfiles } from './20261201002000-create-speaker-profiles';
+import { migration as createMeasurements } from './20261201003000-create-measurements';
 import { migration as createLessons } from './20261201004000-create-lessons';
 import { migration as createLessonSteps } from './20261201004100-create-lesson-steps';
-import { migration as createMeasurements } from './20261201003000-create-measurements';
 
-/** Every migration in the order it runs; a new migration is added at the end. */
+/**
+ * Every migration, in the order it runs: by name, which is its file name (a timestamp first), so the order never
+ * depends on where an entry sits in this list. umzug records each run by name in `umzug_meta`.
+ */
 export const migrations: Migration[] = [
   createUsers,
   createWorkspaces,
@@ -27,7 +30,7 @@ export const migrations: Migration[] = [
   createRateLimits,
   createDevMessages,
   createSpeakerProfiles,
+  createMeasurements,
   createLessons,
   createLessonSteps,
-  createMeasurements,
-];
+].sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));

@@ -16,9 +16,7 @@ import { Measurement } from './measurement';
 export { DevMessage, Invitation, Membership, PasswordResetToken, ShareLink, System, SystemRevision, User, Workspace };
 export type { SiteRole } from './user';
 export type { WorkspaceRole } from './membership';
-export type { ShareTarget } from './share-link';
 export { SpeakerProfileRow };
-export type { SpeakerProfileKind } from './speaker-profile';
 
 export { Lesson, LessonStep };
 

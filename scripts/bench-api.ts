@@ -7,7 +7,7 @@
 import autocannon from 'autocannon';
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { computeBlend } from '../lib/system-model/blend-compute';
+import { computeBlend } from '../lib/system-model/blend';
 import { blendRequestSchema } from '../lib/validations/compute-blend';
 
 const BASE_URL = (process.env.BENCH_URL ?? 'http://127.0.0.1:3000').replace(/\/$/, '');

@@ -1,5 +1,5 @@
 /**
- * Invented measured files for the invented "Juniper Lane screening room" (SPEC §8), generated from
+ * Invented measured files for the invented "Juniper Lane screening room" (README, "Demo data"), generated from
  * the model: each speaker's natural roll-off and air path to the seat (dsp), a seat-specific room
  * ripple taken from the modal sum at that seat (dsp summedModalResponse, as a minimum-phase
  * deviation below ~300 Hz), and seeded noise. Deterministic: the same seed gives the same bytes.

@@ -1,5 +1,5 @@
 /**
- * The invented demo (SPEC §8): workspace "Larkspur AV" (fictional), its users, two Systems.
+ * The invented demo (README, "Demo data"): workspace "Larkspur AV" (fictional), its users, two Systems.
  * Idempotent: finds what exists by e-mail and name, creates only what is missing.
  */
 import { db } from '../lib/db';

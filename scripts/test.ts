@@ -173,6 +173,8 @@ async function main() {
     catcher = await startMailCatcher(env.SMTP_URL, databaseUrl);
 
     tallies.push(await step('lint', bin('eslint'), ['--max-warnings=0', '.'], env));
+    // Exports, types and files nothing uses (knip.json names the entry points: app, scripts, tests, migrations).
+    tallies.push(await step('unused exports (knip)', bin('knip'), ['--include', 'exports,types,files', '--no-progress', '--no-config-hints'], env));
     tallies.push(await step('type-check', bin('tsc'), ['--noEmit', '-p', '.'], env));
     // The app is built and served first, so integration tests can call it over HTTP with real sessions.
     const build = await step('production build', bin('next'), ['build'], { ...env, NODE_ENV: 'production' });

@@ -1,11 +1,11 @@
 import { formatHzReadout, formatSigned, formatValue } from '@/components/charts';
-import type { BlendMetricsAnswer } from '@/lib/system-model/blend-compute';
+import type { BlendMetricsAnswer } from '@/lib/system-model/blend';
 
 function Item({ label, value, detail, testId, tone }: { label: string; value: string; detail?: string; testId: string; tone?: 'warn' }) {
   return (
     <div className="flex min-w-0 flex-col rounded-md border border-line bg-white px-3 py-2">
       <dt className="text-xs text-ink-soft">{label}</dt>
-      <dd className={`num text-base font-semibold ${tone === 'warn' ? 'text-[#92400E]' : 'text-ink'}`} data-testid={testId}>
+      <dd className={`num text-base font-semibold ${tone === 'warn' ? 'text-warn-strong' : 'text-ink'}`} data-testid={testId}>
         {value}
       </dd>
       {detail ? <dd className="text-xs text-ink-faint">{detail}</dd> : null}
@@ -13,7 +13,7 @@ function Item({ label, value, detail, testId, tone }: { label: string; value: st
   );
 }
 
-/** The Blend read-outs (SPEC §4): levels at the crossover, phase difference, the one flatness measure, dip, −3 dB point. */
+/** The Blend read-outs: levels at the crossover, phase difference, the one flatness measure, dip, −3 dB point. */
 export function BlendReadouts({ metrics, pathNames }: { metrics: BlendMetricsAnswer | null; pathNames: string[] }) {
   if (!metrics) {
     return <p className="text-sm text-ink-faint">Read-outs appear when the blend has been computed.</p>;

@@ -2,15 +2,14 @@
 
 import { useId, useMemo, useState } from 'react';
 import { formatHzReadout, formatNumber, formatSigned } from '@/components/charts';
-import { useSystem } from '@/components/editor/system-context';
+import { useSystem } from '@/components/system/system-context';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { NumberField } from '@/components/ui/number-field';
 import { DEMO_PROFILES } from '@/lib/demo/profiles';
 import { useCrossoverSweep } from '@/lib/hooks/use-crossover-sweep';
-import { blendMainSpeaker } from '@/lib/system-model';
-import type { CrossoverSweepAnswerRow } from '@/lib/system-model/blend-compute';
-import { applySweepRow, candidateRangeHz, sweepRequestFromDocument } from '@/lib/system-model/blend-sweep';
+import { blendMainSpeaker } from '@/lib/system-model/system-from-document';
+import { applyCrossoverSweepToDocument, candidateRangeHz, crossoverSweepRequestFromDocument, type CrossoverSweepAnswerRow } from '@/lib/system-model/crossover-sweep';
 import type { Slope, SpeakerProfile } from '@/lib/validations/system';
 import { slopeShortName } from './slope-select';
 
@@ -94,7 +93,7 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
 
   const run = () => {
     setApplied(null);
-    const request = sweepRequestFromDocument(doc, { channel: speaker?.channel, mainsProfile, subProfile, pairings, candidatesHz });
+    const request = crossoverSweepRequestFromDocument(doc, { channel: speaker?.channel, mainsProfile, subProfile, pairings, candidatesHz });
     if (request) void sweep.run(request);
   };
 
@@ -108,7 +107,7 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
 
   const apply = (row: CrossoverSweepAnswerRow) => {
     // Exactly the crossover, slopes, delays and polarities the row was assessed with (and the profiles tried in).
-    update((d) => applySweepRow(d, row, { channel: speaker?.channel, mainsProfile, subProfile }));
+    update((d) => applyCrossoverSweepToDocument(d, row, { channel: speaker?.channel, mainsProfile, subProfile }));
     setApplied(`${formatHzReadout(row.crossoverHz)}, ${pairingKey(row)}, ${settingsText(row)}`);
   };
   const lowestClearHz = sweep.lowestClearHz;
@@ -161,7 +160,7 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
             const key = pairingKey(p);
             const on = picked.has(key);
             return (
-              <label key={key} className={`flex items-center gap-2 rounded-md border px-2.5 py-1 text-sm ${on ? 'border-mains bg-[#EEF7F6]' : 'border-line bg-white'}`}>
+              <label key={key} className={`flex items-center gap-2 rounded-md border px-2.5 py-1 text-sm ${on ? 'border-mains bg-tint-info' : 'border-line bg-white'}`}>
                 <input
                   type="checkbox"
                   checked={on}
@@ -174,7 +173,7 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
                       return next;
                     })
                   }
-                  className="h-4 w-4 accent-[#0F766E]"
+                  className="h-4 w-4 accent-mains"
                 />
                 <span className="num">{key}</span>
                 {i === 0 ? <span className="text-xs text-ink-faint">(this System)</span> : null}
@@ -189,7 +188,7 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
         </Button>
         {sweep.total > 0 ? (
           <div className="flex items-center gap-2 text-sm text-ink-soft">
-            <progress max={sweep.total} value={sweep.done} aria-label="Crossover sweep progress" className="h-2 w-40 accent-[#0F766E]" />
+            <progress max={sweep.total} value={sweep.done} aria-label="Crossover sweep progress" className="h-2 w-40 accent-mains" />
             <span className="num" aria-live="polite">
               {sweep.done} of {sweep.total} batches
             </span>
@@ -232,7 +231,7 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
               {(showAll ? rows : rows.slice(0, 10)).map((r) => (
                 <tr
                   key={`${pairingKey(r)}-${r.crossoverHz}-${r.present ? 'present' : 'try'}`}
-                  className={`border-b border-line ${r.rank === 1 ? 'bg-[#EEF7F6]' : ''} ${r.keepsBass && !r.nearMainsRolloff ? '' : 'text-ink-soft'}`}
+                  className={`border-b border-line ${r.rank === 1 ? 'bg-tint-info' : ''} ${r.keepsBass && !r.nearMainsRolloff ? '' : 'text-ink-soft'}`}
                   data-testid={`sweep-row-${r.rank}`}
                   title={settingsText(r)}
                 >

@@ -8,8 +8,6 @@ const ORDERS: Record<Slope['family'], number[]> = {
   'linkwitz-riley': [2, 4, 8],
 };
 
-export const FAMILY_LABEL: Record<Slope['family'], string> = { butterworth: 'Butterworth', 'linkwitz-riley': 'Linkwitz–Riley' };
-
 /** "LR4", "BW2": the trade's short name of a slope. */
 export function slopeShortName(s: { family: Slope['family']; order: number }): string {
   return `${s.family === 'butterworth' ? 'BW' : 'LR'}${s.order}`;

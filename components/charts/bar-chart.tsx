@@ -5,7 +5,8 @@ import type { Ref } from 'react';
 import { scaleLinear } from 'd3-scale';
 import { finiteExtent } from './series';
 import { formatNumber, formatSigned, formatValue } from './format';
-import { chartColors, chartMetrics, fontSans, numberStyle, statusColors, statusWords } from './theme';
+import { chartSvgAttributes } from './chart-svg';
+import { chartColors, chartMetrics, numberStyle, statusColors, statusWords } from './theme';
 import type { ChartEmphasis, ChartStatus } from './theme';
 import { useContainerWidth } from './use-container-width';
 
@@ -95,15 +96,8 @@ export function BarChart(props: BarChartProps) {
     <div ref={containerRef} className={['w-full', className].filter(Boolean).join(' ')} data-chart="bar">
       <svg
         ref={ref}
-        xmlns="http://www.w3.org/2000/svg"
-        width={widthPx}
-        height={heightPx}
-        viewBox={`0 0 ${widthPx} ${heightPx}`}
-        role="img"
-        aria-labelledby={`${uid}-title`}
-        aria-describedby={`${uid}-desc`}
+        {...chartSvgAttributes(uid, widthPx, heightPx, font)}
         className="block h-auto w-full"
-        style={{ fontFamily: fontSans, fontSize: font }}
       >
         <title id={`${uid}-title`}>{title}</title>
         <desc id={`${uid}-desc`}>{[description, ...bars.map(rowText)].filter(Boolean).join('. ')}</desc>

@@ -18,7 +18,7 @@ export interface ChartExportButtonsProps {
 }
 
 const buttonClass =
-  'inline-flex min-h-8 items-center rounded-md border border-[#D6D3CB] bg-white px-2.5 py-1 text-sm text-[#18202A] hover:bg-[#F6F4EF] focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-[#18202A] disabled:opacity-60';
+  'inline-flex min-h-8 items-center rounded-md border border-edge bg-white px-2.5 py-1 text-sm text-ink hover:bg-paper focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-ink disabled:opacity-60';
 
 /** "SVG", "PNG" and (with `csv`) "CSV" download buttons for one chart. */
 export function ChartExportButtons({ svgRef, filename, csv, subject = 'plot', className }: ChartExportButtonsProps) {
@@ -58,7 +58,7 @@ export function ChartExportButtons({ svgRef, filename, csv, subject = 'plot', cl
         </button>
       ) : null}
       {error ? (
-        <span role="status" className="text-sm text-[#B91C1C]">
+        <span role="status" className="text-sm text-fail">
           {error}
         </span>
       ) : null}

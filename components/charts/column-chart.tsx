@@ -4,7 +4,8 @@ import { useId } from 'react';
 import type { Ref } from 'react';
 import { scaleBand, scaleLinear } from 'd3-scale';
 import { formatNumber } from './format';
-import { chartColors, chartMetrics, fontSans, numberStyle } from './theme';
+import { chartSvgAttributes } from './chart-svg';
+import { chartColors, chartMetrics, numberStyle } from './theme';
 import type { ChartEmphasis } from './theme';
 import { useContainerWidth } from './use-container-width';
 
@@ -71,15 +72,8 @@ export function ColumnChart(props: ColumnChartProps) {
     <div ref={containerRef} className={['w-full', className].filter(Boolean).join(' ')} data-chart="column">
       <svg
         ref={ref}
-        xmlns="http://www.w3.org/2000/svg"
-        width={widthPx}
-        height={heightPx}
-        viewBox={`0 0 ${widthPx} ${heightPx}`}
-        role="img"
-        aria-labelledby={`${uid}-title`}
-        aria-describedby={`${uid}-desc`}
+        {...chartSvgAttributes(uid, widthPx, heightPx, font)}
         className="block h-auto w-full"
-        style={{ fontFamily: fontSans, fontSize: font }}
       >
         <title id={`${uid}-title`}>{title}</title>
         <desc id={`${uid}-desc`}>

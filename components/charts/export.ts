@@ -1,4 +1,5 @@
 import Papa from 'papaparse';
+import { chartColors } from './theme';
 
 /**
  * Downloads of rendered charts: the `<svg>` as an SVG file or a PNG (drawn at 2× onto a canvas),
@@ -120,7 +121,7 @@ export function downloadCsv(csv: string, filename: string): void {
  * PNG of the chart at `scale` × its size (default 2, sharp on high-density screens and in print)
  * on a white background. Text uses the fonts the browser can give an image (usually system ones).
  */
-export async function svgToPngBlob(svg: SVGSVGElement, scale = 2, background = '#FFFFFF'): Promise<Blob> {
+export async function svgToPngBlob(svg: SVGSVGElement, scale = 2, background: string = chartColors.surface): Promise<Blob> {
   const text = serializeSvg(svg);
   const sizes = text.match(/<svg[^>]*\swidth="([\d.]+)"[^>]*\sheight="([\d.]+)"/);
   const width = Number(sizes?.[1] ?? svg.clientWidth);

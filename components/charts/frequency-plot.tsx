@@ -1,7 +1,7 @@
 'use client';
 
 import { LinePlot } from './line-plot';
-import type { AxisTicks, CommonPlotProps, XMarker } from './line-plot';
+import type { AxisTicks, CommonPlotProps, XMarker } from './plot-types';
 import { logTicks, thinLogTicks } from './log-ticks';
 
 export type FrequencyQuantity = 'magnitude' | 'phase' | 'group-delay' | 'custom';

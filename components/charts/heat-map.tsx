@@ -6,7 +6,8 @@ import { scaleLinear } from 'd3-scale';
 import { divergingColor } from './color-ramp';
 import { finiteExtent } from './series';
 import { formatNumber, formatValue } from './format';
-import { chartColors, chartMetrics, fontSans, numberStyle } from './theme';
+import { chartSvgAttributes } from './chart-svg';
+import { chartColors, chartMetrics, numberStyle } from './theme';
 import type { ChartEmphasis } from './theme';
 import { useContainerWidth } from './use-container-width';
 
@@ -127,26 +128,19 @@ export function HeatMap(props: HeatMapProps) {
 
   return (
     <div ref={containerRef} className={['w-full', className].filter(Boolean).join(' ')} data-chart="heat-map">
-      <div className="min-h-7 text-[#18202A]" style={{ fontSize: font + 1 }} data-part="readout">
+      <div className="min-h-7 text-ink" style={{ fontSize: font + 1 }} data-part="readout">
         {hover ? (
           <span style={numberStyle}>
             x {formatNumber(hover.xM, 2)} m, y {formatNumber(hover.yM, 2)} m: {valueLabel} {formatValue(hover.value, unit, digits)}
           </span>
         ) : (
-          <span className="text-[#4B5563]">Hover or touch the map to read values.</span>
+          <span className="text-ink-muted">Hover or touch the map to read values.</span>
         )}
       </div>
       <svg
         ref={ref}
-        xmlns="http://www.w3.org/2000/svg"
-        width={widthPx}
-        height={heightPx}
-        viewBox={`0 0 ${widthPx} ${heightPx}`}
-        role="img"
-        aria-labelledby={`${uid}-title`}
-        aria-describedby={`${uid}-desc`}
+        {...chartSvgAttributes(uid, widthPx, heightPx, font)}
         className="block h-auto w-full touch-pan-y select-none"
-        style={{ fontFamily: fontSans, fontSize: font }}
         onPointerMove={onPointerMove}
         onPointerDown={onPointerMove}
         onPointerLeave={(event) => {

@@ -2,7 +2,7 @@ export { FrequencyPlot, formatHzReadout, frequencyAxisTicks, MAX_PLOT_HZ } from 
 export type { FrequencyMarker, FrequencyPlotProps, FrequencyQuantity } from './frequency-plot';
 export { XYPlot } from './xy-plot';
 export type { XYPlotProps } from './xy-plot';
-export type { CommonPlotProps, PlotTrace, PointMarker, ReferenceLine, XBand, XMarker } from './line-plot';
+export type { CommonPlotProps, PlotTrace, PointMarker, ReferenceLine, XBand, XMarker } from './plot-types';
 export { BarChart } from './bar-chart';
 export type { Bar, BarChartProps } from './bar-chart';
 export { HeatMap, heatMapDomain } from './heat-map';
@@ -20,7 +20,7 @@ export type { LogTick, LogTicks } from './log-ticks';
 export { formatNumber, formatSigned, formatValue } from './format';
 export { finiteExtent, nearestIndex, tracePath } from './series';
 export { divergingColor, DIVERGING_STOPS } from './color-ramp';
-export { chartColors, chartMetrics, statusColors, traceStyles } from './theme';
+export { chartColors, chartMetrics, divergingStops, overlayColors, seatColors, statusColors, subColors, subTraceStyle, traceStyles } from './theme';
 export type { ChartEmphasis, ChartStatus } from './theme';
 export { useContainerWidth } from './use-container-width';
 export { useCrosshair } from './use-crosshair';

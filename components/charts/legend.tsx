@@ -38,7 +38,7 @@ export function Legend({ items, hidden, onToggle, emphasis = 'default', label }:
             onClick={() => onToggle(item.id)}
             title={shown ? `Hide ${item.label}` : `Show ${item.label}`}
             style={{ font: 'inherit' }}
-            className="inline-flex min-h-8 items-center gap-1.5 rounded-md px-2 py-1 text-[#18202A] hover:bg-[#F6F4EF] focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-[#18202A] aria-[pressed=false]:text-[#6B7280]"
+            className="inline-flex min-h-8 items-center gap-1.5 rounded-md px-2 py-1 text-ink hover:bg-paper focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-ink aria-[pressed=false]:text-ink-quiet"
           >
             <svg width={swatchW} height={swatchH} aria-hidden="true" focusable="false">
               <line
@@ -53,7 +53,7 @@ export function Legend({ items, hidden, onToggle, emphasis = 'default', label }:
               />
             </svg>
             <span className={shown ? undefined : 'line-through decoration-1'}>{item.label}</span>
-            {item.note ? <span className="text-[0.85em] text-[#4B5563]">({item.note})</span> : null}
+            {item.note ? <span className="text-[0.85em] text-ink-muted">({item.note})</span> : null}
           </button>
         );
       })}

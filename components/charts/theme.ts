@@ -1,5 +1,6 @@
 /**
- * Seamline plot colours and sizes (SPEC §7). One place for every colour a chart draws, so the
+ * Seamline colours and plot sizes. One place for every colour a component draws in SVG or script (Tailwind
+ * classes use the tokens of tailwind.config.ts, the same values), so the
  * palette stays consistent across pages and a dark theme can later swap this object.
  */
 
@@ -21,7 +22,23 @@ export const chartColors = {
   warn: '#B45309',
   fail: '#B91C1C',
   band: '#0F766E',
+  // The outline of the Seamline mark (the same warm grey as the app's rules).
+  frame: '#D9D4C7',
+  // A heat-map cell without a value.
+  missing: '#d1d5db',
 } as const;
+
+/** The diverging ramp for signed fields (a room mode's pressure), from −1 to +1: teal, paper white, amber to brown. */
+export const divergingStops = ['#0B4F4A', '#0F766E', '#6FB3A8', '#F6F4EF', '#E3A669', '#B45309', '#6B3A1F'] as const;
+
+/** Measured responses overlaid on one plot, in order: the mains teal, the sub amber, then hues apart from both. */
+export const overlayColors = ['#0F766E', '#B45309', '#1D4ED8', '#7C3AED', '#BE185D', '#4D7C0F', '#6B3A1F', '#0E7490'] as const;
+
+/** Seat curves on Modes: distinct hues that are neither the mains teal nor the sub amber (the MLP is drawn in ink). */
+export const seatColors = ['#2563EB', '#7C3AED', '#BE185D', '#4D7C0F', '#0E7490', '#9F1239', '#57534E', '#1D4ED8'] as const;
+
+/** One curve per sub at a seat on Modes: ambers, browns and oranges, the first the sub colour. */
+export const subColors = [chartColors.sub, '#92400E', '#D97706', '#78350F', '#EA580C', '#A16207', '#C2410C', '#854D0E'] as const;
 
 /** Ready-made trace styles; spread into a trace: `{ id: 'sum', label: 'Sum', values, ...traceStyles.sum }`. */
 export const traceStyles = {
@@ -31,6 +48,12 @@ export const traceStyles = {
   sum: { color: chartColors.sum, width: 3 },
   target: { color: chartColors.target, width: 1.5, dashed: true },
 } as const;
+
+/** Sub k's trace style (0-based): amber and brown alternate, and from the third sub on they are dashed so each stays apart. */
+export function subTraceStyle(k: number): { color: string; width: number; dashed?: boolean } {
+  const base = k % 2 ? traceStyles.sub2 : traceStyles.sub;
+  return k >= 2 ? { ...base, dashed: true } : base;
+}
 
 export type ChartStatus = 'ok' | 'warn' | 'fail';
 

@@ -2,7 +2,7 @@
 
 import { scaleLinear } from 'd3-scale';
 import { LinePlot } from './line-plot';
-import type { AxisTicks, CommonPlotProps, PointMarker, XBand, XMarker } from './line-plot';
+import type { AxisTicks, CommonPlotProps, PointMarker, XBand, XMarker } from './plot-types';
 import { finiteExtent } from './series';
 import { formatNumber, formatValue } from './format';
 

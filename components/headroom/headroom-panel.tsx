@@ -2,11 +2,11 @@
 
 import { useRef, useState } from 'react';
 import { BarChart, ChartExportButtons, type Bar } from '@/components/charts';
-import { useSystem } from '@/components/editor/system-context';
+import { useSystem } from '@/components/system/system-context';
 import { Notice } from '@/components/ui/notice';
 import { NumberField } from '@/components/ui/number-field';
 import { useHeadroom, type HeadroomAnswer, type HeadroomRowOut } from '@/lib/hooks/use-headroom';
-import { profileById } from '@/lib/system-model';
+import { profileById } from '@/lib/system-model/geometry';
 import { systemChannelSettings } from '@/lib/system-model/channel-settings';
 import { formatLength } from '@/lib/units';
 
@@ -48,10 +48,10 @@ export function HeadroomPanel() {
           <fieldset className="flex flex-col gap-1 text-sm">
             <legend className="text-xs font-medium text-ink-soft">Several subs add</legend>
             <label className="inline-flex items-center gap-1.5">
-              <input type="radio" name="sub-summation" checked={subSummation === 'coherent'} onChange={() => setSummation('coherent')} className="accent-[#0F766E]" /> in phase (+6 dB per doubling)
+              <input type="radio" name="sub-summation" checked={subSummation === 'coherent'} onChange={() => setSummation('coherent')} className="accent-mains" /> in phase (+6 dB per doubling)
             </label>
             <label className="inline-flex items-center gap-1.5">
-              <input type="radio" name="sub-summation" checked={subSummation === 'power'} onChange={() => setSummation('power')} className="accent-[#0F766E]" /> as power (+3 dB per doubling)
+              <input type="radio" name="sub-summation" checked={subSummation === 'power'} onChange={() => setSummation('power')} className="accent-mains" /> as power (+3 dB per doubling)
             </label>
           </fieldset>
         </div>
@@ -146,7 +146,7 @@ function HeadroomTable({ data, onPower, readOnly }: { data: HeadroomAnswer; onPo
       <div className="overflow-x-auto rounded-md border border-line bg-white">
         <table className="w-full min-w-[52rem] text-sm" data-testid="headroom-table">
           <caption className="sr-only">Maximum SPL at the MLP, target, headroom or deficit and power needed for each channel and sub</caption>
-          <thead className="bg-[#F6F4EF] text-left text-ink-soft">
+          <thead className="bg-paper text-left text-ink-soft">
             <tr>
               <th scope="col" className="px-2 py-1.5 font-medium">Channel</th>
               <th scope="col" className="px-2 py-1.5 text-right font-medium">Sensitivity</th>

@@ -76,7 +76,7 @@ export function FloorPlan({ doc, layout, selected, onSelect, units, outside = []
         <desc id={`${uid}-d`}>
           {`Room ${widthM} m wide and ${lengthM} m long, front wall at the top. ${doc.speakers.length} speakers, ${doc.subs.length} subs, ${doc.seats.length} seats. Speakers within their recommended range are teal, outside it amber. Faint wedges show each channel's recommended azimuth range from the MLP.`}
         </desc>
-        <rect x={sx(0)} y={sy(0)} width={planW} height={planH} fill="#FFFFFF" stroke={chartColors.ink} strokeWidth={1.5} />
+        <rect x={sx(0)} y={sy(0)} width={planW} height={planH} fill={chartColors.surface} stroke={chartColors.ink} strokeWidth={1.5} />
         <text x={sx(widthM / 2)} y={sy(0) - 8} textAnchor="middle" fill={chartColors.inkMuted}>
           Front wall
         </text>
@@ -127,7 +127,7 @@ export function FloorPlan({ doc, layout, selected, onSelect, units, outside = []
             <g key={key} transform={`translate(${sx(s.xM)},${sy(s.yM)})`} onClick={() => onSelect(key)} style={{ cursor: 'pointer' }}>
               <rect x={-size / 2} y={-size / 2} width={size} height={size} rx={3} fill={problems(`subs.${i}`).length ? chartColors.fail : chartColors.sub} stroke={selected === key ? chartColors.ink : 'none'} strokeWidth={2} />
               {outsideMark(`subs.${i}`, 14)}
-              <text y={4} textAnchor="middle" fill="#FFFFFF" fontSize={9} fontWeight={700}>
+              <text y={4} textAnchor="middle" fill={chartColors.surface} fontSize={9} fontWeight={700}>
                 {doc.subs.length > 1 ? `S${i + 1}` : 'S'}
               </text>
             </g>
@@ -141,8 +141,8 @@ export function FloorPlan({ doc, layout, selected, onSelect, units, outside = []
           const w = Math.max(22, s.channel.length * 7 + 8);
           return (
             <g key={key} transform={`translate(${sx(s.xM)},${sy(s.yM)})`} onClick={() => onSelect(key)} style={{ cursor: 'pointer' }} data-speaker={s.channel}>
-              <rect x={-w / 2} y={-9} width={w} height={18} rx={isHeight ? 9 : 2} fill={isHeight ? '#FFFFFF' : color} stroke={selected === key ? chartColors.ink : color} strokeWidth={selected === key ? 2.5 : 1.5} strokeDasharray={isHeight ? '3 2' : undefined} />
-              <text y={4} textAnchor="middle" fill={isHeight ? color : '#FFFFFF'} fontWeight={700} fontSize={10}>
+              <rect x={-w / 2} y={-9} width={w} height={18} rx={isHeight ? 9 : 2} fill={isHeight ? chartColors.surface : color} stroke={selected === key ? chartColors.ink : color} strokeWidth={selected === key ? 2.5 : 1.5} strokeDasharray={isHeight ? '3 2' : undefined} />
+              <text y={4} textAnchor="middle" fill={isHeight ? color : chartColors.surface} fontWeight={700} fontSize={10}>
                 {s.channel}
               </text>
               {outsideMark(`speakers.${i}`, w / 2 + 6)}

@@ -123,7 +123,7 @@ export function AddToLessonButton({ doc, name, panel }: { doc: SystemDocument; n
               </p>
             ) : null}
             {added ? (
-              <p className="text-sm text-[#14532D]" data-testid="added-to-lesson">
+              <p className="text-sm text-tint-ink-ok" data-testid="added-to-lesson">
                 Added as Step {added.position} of “{added.lessonTitle}”.{' '}
                 <Link href={`/lessons/${added.lessonId}`} className="underline">
                   Open the Lesson

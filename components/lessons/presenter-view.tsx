@@ -5,6 +5,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { describeSweep } from '@/lib/system-model/lesson-sweep';
 import type { AppLessonStep } from '@/lib/data/lessons';
 import { StepPlot } from './step-plot';
+import { SweepButtons } from './sweep-buttons';
 import { TalkingPoints } from './talking-points';
 import { useSweepPlayer } from './use-sweep-player';
 
@@ -110,7 +111,7 @@ export function PresenterView({ lessonId, title, steps, initialStep }: Props) {
         ) : null}
       </div>
       <footer className="flex flex-wrap items-center gap-3 border-t border-line bg-white px-6 py-2 text-base">
-        <Link href={`/lessons/${lessonId}`} className="rounded-md px-2 py-1 text-ink-soft hover:bg-[#EFECE4]">
+        <Link href={`/lessons/${lessonId}`} className="rounded-md px-2 py-1 text-ink-soft hover:bg-wash">
           ← {title}
         </Link>
         <span className="ml-auto" />
@@ -124,14 +125,7 @@ export function PresenterView({ lessonId, title, steps, initialStep }: Props) {
           →
         </button>
         {step.sweep ? (
-          <>
-            <button type="button" onClick={player.toggle} className="rounded-md border border-line px-3 py-1.5" data-testid="sweep-toggle">
-              {player.playing ? 'Pause sweep' : 'Play sweep'}
-            </button>
-            <button type="button" onClick={player.restart} className="rounded-md border border-line px-3 py-1.5">
-              Restart
-            </button>
-          </>
+          <SweepButtons player={player} />
         ) : null}
         <button type="button" onClick={() => setShowPoints((s) => !s)} aria-pressed={showPoints} className="rounded-md border border-line px-3 py-1.5">
           {showPoints ? 'Hide points' : 'Show points'} (P)

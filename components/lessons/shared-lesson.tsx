@@ -8,6 +8,7 @@ import { describeSweep } from '@/lib/system-model/lesson-sweep';
 import type { SharedLesson as SharedLessonData } from '@/lib/data/lessons';
 import type { SystemDocument } from '@/lib/validations/system';
 import { StepPlot } from './step-plot';
+import { SweepButtons } from './sweep-buttons';
 import { TalkingPoints } from './talking-points';
 import { useSweepPlayer } from './use-sweep-player';
 
@@ -75,18 +76,13 @@ export function SharedLesson({ lesson }: { lesson: SharedLessonData }) {
               <StepPlot step={step} progress={player.progress} compact />
               {step.sweep ? (
                 <div className="flex flex-wrap items-center gap-2 text-sm">
-                  <button type="button" onClick={player.toggle} className="rounded-md border border-line px-3 py-1.5" data-testid="sweep-toggle">
-                    {player.playing ? 'Pause sweep' : 'Play sweep'}
-                  </button>
-                  <button type="button" onClick={player.restart} className="rounded-md border border-line px-3 py-1.5">
-                    Restart
-                  </button>
+                  <SweepButtons player={player} />
                   <span className="text-ink-soft">{describeSweep(step.sweep)}</span>
                 </div>
               ) : null}
               <TalkingPoints text={step.points} className="text-base leading-relaxed" />
               <div>
-                <Link href={stepEditorHref(step.document, step.panel, `${lesson.title} – step ${index + 1}`)} className="inline-flex rounded-md bg-mains px-3.5 py-2 text-sm font-medium text-white hover:bg-[#0B5E58]">
+                <Link href={stepEditorHref(step.document, step.panel, `${lesson.title} – step ${index + 1}`)} className="inline-flex rounded-md bg-mains px-3.5 py-2 text-sm font-medium text-white hover:bg-mains-dark">
                   Open this step in the editor
                 </Link>
                 <p className="mt-1 text-xs text-ink-faint">Opens a copy as a new, unsaved System; the Lesson stays as it is.</p>

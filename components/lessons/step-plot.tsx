@@ -2,8 +2,8 @@
 
 import { useEffect, useMemo } from 'react';
 import { FrequencyPlot, traceStyles, chartColors, type FrequencyMarker, type PlotTrace } from '@/components/charts';
-import { applySweepValue, formatSweepValue, sweepValueAt } from '@/lib/system-model/lesson-sweep';
-import { axialModesHz, lessonFrame, FRAME_START_HZ } from '@/lib/system-model/lesson-frame';
+import { applyLessonSweepToDocument, formatSweepValue, sweepValueAt } from '@/lib/system-model/lesson-sweep';
+import { axialModesHz, computeLessonFrame, FRAME_START_HZ } from '@/lib/system-model/lesson-frame';
 import type { LessonPanel, LessonTrace, Sweep } from '@/lib/validations/lesson';
 import type { SystemDocument } from '@/lib/validations/system';
 
@@ -42,8 +42,8 @@ const fmtDb = (v: number) => (Number.isFinite(v) && v < -60 ? 'null (below −60
 export function StepPlot({ step, progress = 0, emphasis = 'default', compact = false }: { step: StepPlotStep; progress?: number; emphasis?: 'default' | 'projector'; compact?: boolean }) {
   const { sweep } = step;
   const value = useMemo(() => (sweep ? sweepValueAt(sweep, progress) : null), [sweep, progress]);
-  const doc = useMemo(() => (sweep && value ? applySweepValue(step.document, sweep, value) : step.document), [step.document, sweep, value]);
-  const frame = useMemo(() => lessonFrame(doc), [doc]);
+  const doc = useMemo(() => (sweep && value ? applyLessonSweepToDocument(step.document, sweep, value) : step.document), [step.document, sweep, value]);
+  const frame = useMemo(() => computeLessonFrame(doc), [doc]);
   const modes = useMemo(() => (step.panel === 'modes' ? axialModesHz(step.document, 200) : []), [step.panel, step.document]);
 
   // Count drawn frames for the frame-rate bench (after commit; never during render).

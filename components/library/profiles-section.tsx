@@ -6,7 +6,8 @@ import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/client/api';
 import { profilesApi, useProfiles, type ProfileItem } from '@/lib/hooks/use-profiles';
 import type { ProfileFields } from '@/lib/validations/profile';
-import { Modal } from './modal';
+import { ConfirmDelete } from '@/components/ui/confirm-delete';
+import { Modal } from '@/components/ui/modal';
 import { EMPTY_PROFILE, ProfileForm } from './profile-form';
 
 type Role = 'owner' | 'editor' | 'viewer';
@@ -53,7 +54,7 @@ export function ProfilesSection({ workspaces }: { workspaces: { id: string; name
         <div className="overflow-x-auto rounded-lg border border-line bg-white">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">Speaker profiles in your workspaces</caption>
-            <thead className="border-b border-line bg-[#FAF9F5] text-xs uppercase tracking-wide text-ink-faint">
+            <thead className="border-b border-line bg-shade text-xs uppercase tracking-wide text-ink-faint">
               <tr>
                 <th scope="col" className="px-3 py-2">Name</th>
                 <th scope="col" className="px-3 py-2">Kind</th>
@@ -114,32 +115,24 @@ export function ProfilesSection({ workspaces }: { workspaces: { id: string; name
         ) : null}
       </Modal>
 
-      <Modal open={deleting !== null} onClose={() => setDeleting(null)} title="Delete this profile?">
-        <p className="text-sm">
-          <span className="font-semibold">{deleting?.name}</span> leaves the Library. Systems that use it keep their own copy, so none of them changes.
-        </p>
-        <div className="flex justify-end gap-2">
-          <Button variant="secondary" onClick={() => setDeleting(null)}>
-            Keep it
-          </Button>
-          <Button
-            variant="danger"
-            onClick={async () => {
-              if (!deleting) return;
-              try {
-                await profilesApi.remove(deleting.id);
-                setMessage({ kind: 'ok', text: `Deleted “${deleting.name}”.` });
-                await mutate();
-              } catch (e) {
-                setMessage({ kind: 'error', text: e instanceof ApiError ? e.message : 'That did not work; nothing was changed.' });
-              }
-              setDeleting(null);
-            }}
-          >
-            Delete
-          </Button>
-        </div>
-      </Modal>
+      <ConfirmDelete
+        open={deleting !== null}
+        title="Delete this profile?"
+        onKeep={() => setDeleting(null)}
+        onDelete={async () => {
+          if (!deleting) return;
+          try {
+            await profilesApi.remove(deleting.id);
+            setMessage({ kind: 'ok', text: `Deleted “${deleting.name}”.` });
+            await mutate();
+          } catch (e) {
+            setMessage({ kind: 'error', text: e instanceof ApiError ? e.message : 'That did not work; nothing was changed.' });
+          }
+          setDeleting(null);
+        }}
+      >
+        <span className="font-semibold">{deleting?.name}</span> leaves the Library. Systems that use it keep their own copy, so none of them changes.
+      </ConfirmDelete>
     </section>
   );
 }

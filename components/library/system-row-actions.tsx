@@ -7,7 +7,8 @@ import { Button, buttonClass } from '@/components/ui/button';
 import { ApiError } from '@/lib/client/api';
 import { systemsApi } from '@/lib/hooks/use-systems';
 import { ShareDialog } from '@/components/share/share-dialog';
-import { Modal } from './modal';
+import { ConfirmDelete } from '@/components/ui/confirm-delete';
+import { Modal } from '@/components/ui/modal';
 
 interface Props {
   id: string;
@@ -135,26 +136,18 @@ export function SystemRowActions({ id, name, revision, canEdit, deleted }: Props
         </form>
       </Modal>
 
-      <Modal open={confirmDelete} onClose={() => setConfirmDelete(false)} title="Delete this System?">
-        <p className="text-sm">
-          <span className="font-semibold">{name}</span> moves to Recently deleted, where anyone who can edit this workspace can restore it for 30 days. Its share links stop
-          working while it is deleted.
-        </p>
-        <div className="flex justify-end gap-2">
-          <Button variant="secondary" onClick={() => setConfirmDelete(false)}>
-            Keep it
-          </Button>
-          <Button
-            variant="danger"
-            disabled={busy}
-            onClick={async () => {
-              if (await run(() => systemsApi.remove(id))) setConfirmDelete(false);
-            }}
-          >
-            Delete
-          </Button>
-        </div>
-      </Modal>
+      <ConfirmDelete
+        open={confirmDelete}
+        title="Delete this System?"
+        onKeep={() => setConfirmDelete(false)}
+        busy={busy}
+        onDelete={async () => {
+          if (await run(() => systemsApi.remove(id))) setConfirmDelete(false);
+        }}
+      >
+        <span className="font-semibold">{name}</span> moves to Recently deleted, where anyone who can edit this workspace can restore it for 30 days. Its share links stop
+        working while it is deleted.
+      </ConfirmDelete>
     </div>
   );
 }

@@ -110,7 +110,7 @@ export function SystemsTable({ view, items, total, page, pageSize, query, tags, 
         <div className="overflow-x-auto rounded-lg border border-line bg-white">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">{view === 'deleted' ? 'Recently deleted Systems' : 'Systems in your workspaces'}</caption>
-            <thead className="border-b border-line bg-[#FAF9F5] text-xs uppercase tracking-wide text-ink-faint">
+            <thead className="border-b border-line bg-shade text-xs uppercase tracking-wide text-ink-faint">
               <tr>
                 <th scope="col" className="px-3 py-2">
                   Name
@@ -145,7 +145,7 @@ export function SystemsTable({ view, items, total, page, pageSize, query, tags, 
                       <ul className="mt-1 flex flex-wrap gap-1" aria-label="Tags">
                         {s.tags.map((t) => (
                           <li key={t}>
-                            <Link href={href(view, { q: query.q, tag: t, sort: query.sort }, 1)} className="rounded bg-[#EFECE4] px-1.5 py-0.5 text-xs text-ink-soft hover:bg-[#E4DFD3]">
+                            <Link href={href(view, { q: query.q, tag: t, sort: query.sort }, 1)} className="rounded bg-wash px-1.5 py-0.5 text-xs text-ink-soft hover:bg-wash-strong">
                               {t}
                             </Link>
                           </li>

@@ -5,11 +5,11 @@ import { usePathname } from 'next/navigation';
 import { useSession } from 'next-auth/react';
 import { useMemo, useState } from 'react';
 import { useSWRConfig } from 'swr';
-import { useSystem } from '@/components/editor/system-context';
+import { useSystem } from '@/components/system/system-context';
 import { Notice } from '@/components/ui/notice';
 import { useCompute } from '@/lib/hooks/use-compute';
 import { deleteMeasurement, useMeasurementList, useMeasurementPoints, useSystemWorkspace, type MeasurementItem } from '@/lib/hooks/use-measurements';
-import { predictRequestFromDocument, type PredictAnswer } from '@/lib/system-model/measured';
+import { measuredRequestFromDocument, type PredictAnswer } from '@/lib/system-model/measured';
 import { MeasurementList, type CurveItem } from './measurement-list';
 import { MeasurementUpload, type LocalCurve } from './measurement-upload';
 import { OverlayPlot } from './overlay-plot';
@@ -80,7 +80,7 @@ export function MeasuredPanel() {
   };
   const mainsCurve = curveRef(mainsId);
   const subCurve = curveRef(subId);
-  const predictBody = mainsCurve && subCurve ? predictRequestFromDocument(doc, { mains: mainsCurve, sub: subCurve }, { subIndex: subTarget }, { smoothingFraction: smoothing }) : null;
+  const predictBody = mainsCurve && subCurve ? measuredRequestFromDocument(doc, { mains: mainsCurve, sub: subCurve }, { subIndex: subTarget }, { smoothingFraction: smoothing }) : null;
   const prediction = useCompute<PredictAnswer>('/api/v1/measured/predict', predictBody);
 
   const canWrite = signedIn && (!systemId || (workspace.data ? workspace.data.role !== 'viewer' : false));

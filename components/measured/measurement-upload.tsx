@@ -119,7 +119,7 @@ export function MeasurementUpload({ systemId, canSave, saveBlockedReason, seatNa
       </h3>
       <div
         {...getRootProps({
-          className: `flex flex-col items-center justify-center gap-2 rounded-md border-2 border-dashed px-3 py-5 text-center text-sm ${isDragActive ? 'border-mains bg-[#EEF7F6]' : 'border-line bg-paper'}`,
+          className: `flex flex-col items-center justify-center gap-2 rounded-md border-2 border-dashed px-3 py-5 text-center text-sm ${isDragActive ? 'border-mains bg-tint-info' : 'border-line bg-paper'}`,
         })}
         data-testid="measurement-dropzone"
       >
@@ -134,7 +134,7 @@ export function MeasurementUpload({ systemId, canSave, saveBlockedReason, seatNa
       {savedNote ? <Notice kind="ok">{savedNote}</Notice> : null}
 
       {stage.kind === 'refused' ? (
-        <div role="alert" data-testid="measurement-errors" className="rounded-md border border-[#E7B4B4] bg-[#FBEDED] px-3 py-2 text-sm text-[#7F1414]">
+        <div role="alert" data-testid="measurement-errors" className="rounded-md border border-tint-edge-fail bg-tint-fail px-3 py-2 text-sm text-tint-ink-fail">
           <p className="font-semibold">
             {stage.fileName}: {stage.message}
           </p>

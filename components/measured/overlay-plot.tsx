@@ -1,17 +1,16 @@
 'use client';
 
 import { useMemo, useRef, useState } from 'react';
-import { ChartExportButtons, FrequencyPlot, chartColors, finiteExtent, formatSigned, type PlotTrace } from '@/components/charts';
-import { useSystem } from '@/components/editor/system-context';
+import { ChartExportButtons, FrequencyPlot, chartColors, finiteExtent, formatSigned, overlayColors, type PlotTrace } from '@/components/charts';
+import { useSystem } from '@/components/system/system-context';
 import { Button } from '@/components/ui/button';
 import { NumberField } from '@/components/ui/number-field';
 import { bandPowerAverageDb, logFrequencyGridHz, resampleCurve, smoothFractionalOctave } from '@/dsp';
 import { useCompute } from '@/lib/hooks/use-compute';
-import type { BlendAnswer } from '@/lib/system-model/blend-compute';
-import { blendRequestFromDocument } from '@/lib/system-model';
+import { blendRequestFromDocument, type BlendAnswer } from '@/lib/system-model/blend';
 import type { CurveItem } from './measurement-list';
 
-export const OVERLAY_COLORS = ['#0F766E', '#B45309', '#1D4ED8', '#7C3AED', '#BE185D', '#4D7C0F', '#6B3A1F', '#0E7490'];
+export const OVERLAY_COLORS = overlayColors;
 
 const DISPLAY = { startHz: 10, stopHz: 20000, pointsPerOctave: 48 } as const;
 

@@ -2,12 +2,12 @@
 
 import { useRef, useState } from 'react';
 import { ChartExportButtons, FrequencyPlot, XYPlot, chartColors, formatNumber, traceStyles, type PlotTrace } from '@/components/charts';
-import { useSystem } from '@/components/editor/system-context';
+import { useSystem } from '@/components/system/system-context';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { NumberField } from '@/components/ui/number-field';
 import type { ApiError } from '@/lib/client/api';
-import { applyMeasuredRecommendation, type PredictAnswer } from '@/lib/system-model/measured';
+import { applyMeasuredToDocument, type PredictAnswer } from '@/lib/system-model/measured';
 import type { CurveItem } from './measurement-list';
 
 interface Props {
@@ -71,7 +71,7 @@ export function PredictedBlend({ items, mainsId, subId, onPick, subTarget, onSub
 
   function apply() {
     if (!a) return;
-    update((d) => applyMeasuredRecommendation(d, subTarget, a));
+    update((d) => applyMeasuredToDocument(d, subTarget, a));
     setApplied(
       `Applied: ${subTarget === 'all' ? 'all subs' : (sub?.name ?? 'sub')} ${a.flipPolarity ? 'polarity flipped, ' : ''}${a.addTo === 'sub' ? `sub delay ${formatNumber(a.subDelayMs, 2)} ms` : `mains delay ${formatNumber(a.mainsDelayMs, 2)} ms`}. Save the System to keep it.`,
     );
@@ -87,28 +87,22 @@ export function PredictedBlend({ items, mainsId, subId, onPick, subTarget, onSub
         <ChartExportButtons svgRef={magRef} filename="measured-predicted-blend" subject="prediction" />
       </div>
       <div className="grid gap-3 sm:grid-cols-3">
-        <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
-          Mains measurement
-          <select className={select} value={mainsId ?? ''} onChange={(e) => onPick('mains', e.target.value)} data-testid="pick-mains">
-            {!mainsId ? <option value="">(none yet)</option> : null}
-            {items.map((i) => (
-              <option key={i.id} value={i.id}>
-                {i.name}
-              </option>
-            ))}
-          </select>
-        </label>
-        <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
-          Sub measurement
-          <select className={select} value={subId ?? ''} onChange={(e) => onPick('sub', e.target.value)} data-testid="pick-sub">
-            {!subId ? <option value="">(none yet)</option> : null}
-            {items.map((i) => (
-              <option key={i.id} value={i.id}>
-                {i.name}
-              </option>
-            ))}
-          </select>
-        </label>
+        {(['mains', 'sub'] as const).map((which) => {
+          const picked = which === 'mains' ? mainsId : subId;
+          return (
+            <label key={which} className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
+              {which === 'mains' ? 'Mains measurement' : 'Sub measurement'}
+              <select className={select} value={picked ?? ''} onChange={(e) => onPick(which, e.target.value)} data-testid={`pick-${which}`}>
+                {!picked ? <option value="">(none yet)</option> : null}
+                {items.map((i) => (
+                  <option key={i.id} value={i.id}>
+                    {i.name}
+                  </option>
+                ))}
+              </select>
+            </label>
+          );
+        })}
         <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
           The sub measurement is of
           <select className={select} value={String(subTarget)} onChange={(e) => onSubTarget(e.target.value === 'all' ? 'all' : Number(e.target.value))}>

@@ -36,7 +36,7 @@ export function ModeTable({ modes, selected, onSelect, schroederHz, coincident }
         <span className="text-xs font-medium text-ink-soft">Show</span>
         {KINDS.map((k) => (
           <label key={k} className="inline-flex items-center gap-1.5">
-            <input type="checkbox" checked={kinds[k]} onChange={(e) => setKinds((s) => ({ ...s, [k]: e.target.checked }))} className="accent-[#0F766E]" />
+            <input type="checkbox" checked={kinds[k]} onChange={(e) => setKinds((s) => ({ ...s, [k]: e.target.checked }))} className="accent-mains" />
             {k} <span className="num text-ink-faint">({modes.filter((m) => m.kind === k).length})</span>
           </label>
         ))}
@@ -47,7 +47,7 @@ export function ModeTable({ modes, selected, onSelect, schroederHz, coincident }
       <div className="max-h-96 overflow-auto rounded-md border border-line bg-white">
         <table className="w-full text-sm" data-testid="mode-table">
           <caption className="sr-only">Room modes: frequency, indices along the length, width and height, and kind</caption>
-          <thead className="sticky top-0 bg-[#F6F4EF] text-ink-soft">
+          <thead className="sticky top-0 bg-paper text-ink-soft">
             <tr>
               {header('frequencyHz', 'Frequency (Hz)')}
               {header('nL', 'nL', 'Index along the length')}
@@ -64,11 +64,11 @@ export function ModeTable({ modes, selected, onSelect, schroederHz, coincident }
               const key = m.indices.join(',');
               const isSelected = sameIndices(selected, m.indices);
               return (
-                <tr key={key} className={`border-t border-line ${isSelected ? 'bg-[#EEF7F6]' : ''} ${m.frequencyHz > schroederHz ? 'text-ink-soft' : ''}`}>
+                <tr key={key} className={`border-t border-line ${isSelected ? 'bg-tint-info' : ''} ${m.frequencyHz > schroederHz ? 'text-ink-soft' : ''}`}>
                   <td className="num px-2 py-1">
                     {m.frequencyHz.toFixed(2)}
                     {coincident.has(key) ? (
-                      <span className="ml-1.5 rounded bg-[#FBF3EA] px-1 text-xs text-[#6B3206]" title="Near-coincident: within 2 % of another mode below the Schroeder frequency">
+                      <span className="ml-1.5 rounded bg-tint-warn px-1 text-xs text-tint-ink-warn" title="Near-coincident: within 2 % of another mode below the Schroeder frequency">
                         <span aria-hidden="true">≈</span>
                         <span className="sr-only">near-coincident</span>
                       </span>
@@ -83,7 +83,7 @@ export function ModeTable({ modes, selected, onSelect, schroederHz, coincident }
                       type="button"
                       aria-pressed={isSelected}
                       onClick={() => onSelect([m.indices[0], m.indices[1], m.indices[2]])}
-                      className={`rounded border px-2 py-0.5 text-xs ${isSelected ? 'border-mains bg-mains text-white' : 'border-line hover:bg-[#EFECE4]'}`}
+                      className={`rounded border px-2 py-0.5 text-xs ${isSelected ? 'border-mains bg-mains text-white' : 'border-line hover:bg-wash'}`}
                     >
                       {isSelected ? 'Mapped' : 'Map'}
                       <span className="sr-only">{` mode (${key}) at ${m.frequencyHz.toFixed(1)} Hz`}</span>

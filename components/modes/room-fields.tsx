@@ -1,16 +1,16 @@
 'use client';
 
-import { useSystem } from '@/components/editor/system-context';
+import { useSystem } from '@/components/system/system-context';
 import { NumberField } from '@/components/ui/number-field';
 import type { ApiError } from '@/lib/client/api';
-import { withRoom } from '@/lib/system-model/room-edit';
+import { applyRoomToDocument } from '@/lib/system-model/room-modes';
 import type { SystemDocument } from '@/lib/validations/system';
 
 /** Room length, width, height, RT60 and air temperature, with the API's messages beside the field at fault. */
 export function RoomFields({ error, maxHz, onMaxHz }: { error?: ApiError; maxHz: number; onMaxHz: (hz: number) => void }) {
   const { doc, update, units, readOnly } = useSystem();
   // The room changes alone: seats, speakers and subs stay where they are, even beyond a wall that moved in (the panel says so).
-  const set = (patch: Partial<SystemDocument['room']>) => update((d) => withRoom(d, patch).doc);
+  const set = (patch: Partial<SystemDocument['room']>) => update((d) => applyRoomToDocument(d, patch).doc);
   const room = doc.room;
   const e = (path: string) => error?.field(path) ?? error?.field(`room.${path}`);
   return (

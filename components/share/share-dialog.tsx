@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import { Modal } from '@/components/library/modal';
+import { Modal } from '@/components/ui/modal';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/client/api';
@@ -73,7 +73,7 @@ export function ShareDialog({ systemId, buttonLabel = 'Share', variant = 'second
                   readOnly
                   value={l.url}
                   onFocus={(e) => e.currentTarget.select()}
-                  className="num w-full rounded-md border border-line bg-[#FAF9F5] px-2 py-1.5 text-xs"
+                  className="num w-full rounded-md border border-line bg-shade px-2 py-1.5 text-xs"
                   data-testid="share-url"
                 />
                 <div className="flex flex-wrap items-center gap-2">
@@ -85,7 +85,7 @@ export function ShareDialog({ systemId, buttonLabel = 'Share', variant = 'second
                     <Button variant="secondary" className="px-2.5 py-1.5" onClick={() => void copy(l.url)}>
                       {copied === l.url ? 'Copied' : 'Copy'}
                     </Button>
-                    <a href={l.url} target="_blank" rel="noreferrer" className="rounded-md px-2.5 py-1.5 text-sm font-medium hover:bg-[#EFECE4]">
+                    <a href={l.url} target="_blank" rel="noreferrer" className="rounded-md px-2.5 py-1.5 text-sm font-medium hover:bg-wash">
                       Open
                     </a>
                     <Button variant="danger" className="px-2.5 py-1.5" disabled={busy} onClick={() => void act(() => systemsApi.revokeLink(l.token), 'The link was revoked; it now answers “not found”.')} data-testid="share-revoke">

@@ -1,3 +1,5 @@
+import { chartColors } from '@/components/charts/theme';
+
 export type Paper = 'A4' | 'letter';
 
 /**
@@ -9,7 +11,7 @@ export function sheetPrintCss(paper: Paper): string {
   return `
 @page { size: ${paper === 'A4' ? 'A4' : 'letter'} portrait; margin: 14mm 14mm 16mm; }
 @media print {
-  html, body { background: #fff !important; }
+  html, body { background: ${chartColors.surface} !important; }
   main { max-width: none !important; padding: 0 !important; }
   .settings-sheet { border: 0 !important; border-radius: 0 !important; padding: 0 !important; max-width: none !important; gap: 4mm !important; font-size: 9.5pt; }
   .settings-sheet h1 { font-size: 16pt; }

@@ -1,4 +1,5 @@
-import { SETTING_DECIMALS, settingsSheet } from '@/lib/system-model/settings-sheet';
+import type { ReactNode } from 'react';
+import { computeSettingsSheet, SETTING_DECIMALS } from '@/lib/system-model/settings-sheet';
 import { formatLength } from '@/lib/units';
 import type { SystemDocument } from '@/lib/validations/system';
 
@@ -21,13 +22,41 @@ const D = SETTING_DECIMALS;
 /** A column's plain meaning under its heading. */
 const Meaning = ({ children }: { children: string }) => <span className="block max-w-40 text-[0.7rem] font-normal normal-case leading-tight tracking-normal">{children}</span>;
 
+/** A settings table that scrolls sideways on a narrow screen, with its head row (see SheetHead). */
+function SheetTable({ columns, children }: { columns: Parameters<typeof SheetHead>[0]['columns']; children: ReactNode }) {
+  return (
+    <div className="overflow-x-auto">
+      <table className="sheet-table w-full text-left text-sm">
+        <SheetHead columns={columns} />
+        {children}
+      </table>
+    </div>
+  );
+}
+
+/** The head row of a settings table: numbers right-aligned, and a column's meaning in small type under its name. */
+function SheetHead({ columns }: { columns: readonly { label: string; right?: boolean; meaning?: string }[] }) {
+  return (
+    <thead>
+      <tr className="border-b border-ink text-xs uppercase tracking-wide text-ink-faint">
+        {columns.map((c, i) => (
+          <th key={c.label} scope="col" className={['py-1.5', i < columns.length - 1 ? 'pr-3' : '', c.right ? 'text-right' : '', c.meaning ? 'align-bottom' : ''].filter(Boolean).join(' ')}>
+            {c.label}
+            {c.meaning ? <Meaning>{c.meaning}</Meaning> : null}
+          </th>
+        ))}
+      </tr>
+    </thead>
+  );
+}
+
 /**
- * The printable Settings sheet (SPEC §5): the processor settings per channel and per sub, the
+ * The printable Settings sheet: the processor settings per channel and per sub, the
  * room-mode summary and notes, dated and with the revision. A pure render of the document, so the
  * editor, the Library and the shared page print the same thing.
  */
 export function SettingsSheet({ name, revision, savedAt, savedBy, workspaceName, document, printedAt }: Props) {
-  const sheet = settingsSheet(document);
+  const sheet = computeSettingsSheet(document);
   return (
     <article className="settings-sheet mx-auto flex max-w-[60rem] flex-col gap-5 rounded-lg border border-line bg-white p-5 text-ink sm:p-8" aria-labelledby="sheet-title">
       <header className="flex flex-wrap items-start gap-x-6 gap-y-2 border-b-2 border-ink pb-3">
@@ -80,44 +109,37 @@ export function SettingsSheet({ name, revision, savedAt, savedBy, workspaceName,
           Main channels <span className="text-sm font-normal text-ink-faint">(distances to {sheet.mlpName})</span>
         </h2>
         {sheet.channels.length ? (
-          <div className="overflow-x-auto">
-            <table className="sheet-table w-full text-left text-sm">
-              <thead>
-                <tr className="border-b border-ink text-xs uppercase tracking-wide text-ink-faint">
-                  <th scope="col" className="py-1.5 pr-3">Channel</th>
-                  <th scope="col" className="py-1.5 pr-3 text-right">Distance</th>
-                  <th scope="col" className="py-1.5 pr-3 text-right align-bottom">
-                    Delay<Meaning>distance alignment plus the mains delay</Meaning>
+          <SheetTable
+            columns={[
+              { label: 'Channel' },
+              { label: 'Distance', right: true },
+              { label: 'Delay', right: true, meaning: 'distance alignment plus the mains delay' },
+              { label: 'Trim', right: true, meaning: 'level match by distance plus the channel’s offset' },
+              { label: 'High-pass', right: true },
+              { label: 'Slope' },
+            ]}
+          >
+            <tbody className="num [&_td]:whitespace-nowrap">
+              {sheet.channels.map((c) => (
+                <tr key={c.id} className="border-b border-line">
+                  <th scope="row" className="py-1.5 pr-3 font-sans font-semibold">
+                    {c.channel}
+                    <span className="block text-xs font-normal text-ink-faint">{c.profileName}</span>
                   </th>
-                  <th scope="col" className="py-1.5 pr-3 text-right align-bottom">
-                    Trim<Meaning>level match by distance plus the channel’s offset</Meaning>
-                  </th>
-                  <th scope="col" className="py-1.5 pr-3 text-right">High-pass</th>
-                  <th scope="col" className="py-1.5">Slope</th>
+                  <td className="py-1.5 pr-3 text-right" data-testid={`sheet-distance-${c.channel}`}>
+                    {f(c.distanceM, D.distanceM)} m<span className="block text-xs text-ink-faint">{feet(c.distanceM)}{c.distanceSource === 'measured' ? ' · measured' : ''}</span>
+                  </td>
+                  <td className="py-1.5 pr-3 text-right" data-testid={`sheet-delay-${c.channel}`}>{f(c.delayMs, D.delayMs)} ms</td>
+                  <td className="py-1.5 pr-3 text-right" data-testid={`sheet-trim-${c.channel}`}>
+                    {signed(c.trimDb, D.trimDb)} dB
+                    {c.offsetDb !== 0 ? <span className="block text-xs text-ink-faint">offset {signed(c.offsetDb, D.trimDb)} dB</span> : null}
+                  </td>
+                  <td className="py-1.5 pr-3 text-right">{f(c.highpassHz, 0)} Hz</td>
+                  <td className="py-1.5 font-sans text-xs">{c.slope}</td>
                 </tr>
-              </thead>
-              <tbody className="num [&_td]:whitespace-nowrap">
-                {sheet.channels.map((c) => (
-                  <tr key={c.id} className="border-b border-line">
-                    <th scope="row" className="py-1.5 pr-3 font-sans font-semibold">
-                      {c.channel}
-                      <span className="block text-xs font-normal text-ink-faint">{c.profileName}</span>
-                    </th>
-                    <td className="py-1.5 pr-3 text-right" data-testid={`sheet-distance-${c.channel}`}>
-                      {f(c.distanceM, D.distanceM)} m<span className="block text-xs text-ink-faint">{feet(c.distanceM)}{c.distanceSource === 'measured' ? ' · measured' : ''}</span>
-                    </td>
-                    <td className="py-1.5 pr-3 text-right" data-testid={`sheet-delay-${c.channel}`}>{f(c.delayMs, D.delayMs)} ms</td>
-                    <td className="py-1.5 pr-3 text-right" data-testid={`sheet-trim-${c.channel}`}>
-                      {signed(c.trimDb, D.trimDb)} dB
-                      {c.offsetDb !== 0 ? <span className="block text-xs text-ink-faint">offset {signed(c.offsetDb, D.trimDb)} dB</span> : null}
-                    </td>
-                    <td className="py-1.5 pr-3 text-right">{f(c.highpassHz, 0)} Hz</td>
-                    <td className="py-1.5 font-sans text-xs">{c.slope}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+              ))}
+            </tbody>
+          </SheetTable>
         ) : (
           <p className="text-sm text-ink-soft">No main speakers in this System.</p>
         )}
@@ -133,47 +155,42 @@ export function SettingsSheet({ name, revision, savedAt, savedBy, workspaceName,
           Subwoofers
         </h2>
         {sheet.subs.length ? (
-          <div className="overflow-x-auto">
-            <table className="sheet-table w-full text-left text-sm">
-              <thead>
-                <tr className="border-b border-ink text-xs uppercase tracking-wide text-ink-faint">
-                  <th scope="col" className="py-1.5 pr-3">Sub</th>
-                  <th scope="col" className="py-1.5 pr-3 text-right">Distance</th>
-                  <th scope="col" className="py-1.5 pr-3 text-right align-bottom">
-                    Delay<Meaning>distance alignment plus the sub’s own delay</Meaning>
+          <SheetTable
+            columns={[
+              { label: 'Sub' },
+              { label: 'Distance', right: true },
+              { label: 'Delay', right: true, meaning: 'distance alignment plus the sub’s own delay' },
+              { label: 'Polarity' },
+              { label: 'Gain', right: true },
+              { label: 'Low-pass', right: true },
+              { label: 'Slope' },
+            ]}
+          >
+            <tbody className="num [&_td]:whitespace-nowrap">
+              {sheet.subs.map((s) => (
+                <tr key={s.id} className="border-b border-line">
+                  <th scope="row" className="py-1.5 pr-3 font-sans font-semibold">
+                    {s.name}
+                    {s.count > 1 ? ` ×${s.count}` : ''}
+                    <span className="block text-xs font-normal text-ink-faint">{s.profileName}</span>
                   </th>
-                  <th scope="col" className="py-1.5 pr-3">Polarity</th>
-                  <th scope="col" className="py-1.5 pr-3 text-right">Gain</th>
-                  <th scope="col" className="py-1.5 pr-3 text-right">Low-pass</th>
-                  <th scope="col" className="py-1.5">Slope</th>
+                  <td className="py-1.5 pr-3 text-right" data-testid={`sheet-sub-distance-${s.id}`}>
+                    {f(s.distanceM, D.distanceM)} m<span className="block text-xs text-ink-faint">{feet(s.distanceM)}{s.distanceSource === 'measured' ? ' · measured' : ''}</span>
+                  </td>
+                  <td className="py-1.5 pr-3 text-right" data-testid={`sheet-sub-delay-${s.id}`}>
+                    {f(s.delayMs, D.delayMs)} ms
+                    {s.ownDelayMs !== 0 ? <span className="block text-xs text-ink-faint">own delay {f(s.ownDelayMs, D.delayMs)} ms</span> : null}
+                  </td>
+                  <td className={`py-1.5 pr-3 font-sans ${s.polarity === 'inverted' ? 'font-semibold text-sub' : ''}`}>{s.polarity === 'inverted' ? 'Inverted (180°)' : 'Normal'}</td>
+                  <td className="py-1.5 pr-3 text-right" data-testid={`sheet-sub-gain-${s.id}`}>
+                    {signed(s.gainDb, D.trimDb)} dB
+                  </td>
+                  <td className="py-1.5 pr-3 text-right">{f(s.lowpassHz, 0)} Hz</td>
+                  <td className="py-1.5 font-sans text-xs">{s.slope}</td>
                 </tr>
-              </thead>
-              <tbody className="num [&_td]:whitespace-nowrap">
-                {sheet.subs.map((s) => (
-                  <tr key={s.id} className="border-b border-line">
-                    <th scope="row" className="py-1.5 pr-3 font-sans font-semibold">
-                      {s.name}
-                      {s.count > 1 ? ` ×${s.count}` : ''}
-                      <span className="block text-xs font-normal text-ink-faint">{s.profileName}</span>
-                    </th>
-                    <td className="py-1.5 pr-3 text-right" data-testid={`sheet-sub-distance-${s.id}`}>
-                      {f(s.distanceM, D.distanceM)} m<span className="block text-xs text-ink-faint">{feet(s.distanceM)}{s.distanceSource === 'measured' ? ' · measured' : ''}</span>
-                    </td>
-                    <td className="py-1.5 pr-3 text-right" data-testid={`sheet-sub-delay-${s.id}`}>
-                      {f(s.delayMs, D.delayMs)} ms
-                      {s.ownDelayMs !== 0 ? <span className="block text-xs text-ink-faint">own delay {f(s.ownDelayMs, D.delayMs)} ms</span> : null}
-                    </td>
-                    <td className={`py-1.5 pr-3 font-sans ${s.polarity === 'inverted' ? 'font-semibold text-sub' : ''}`}>{s.polarity === 'inverted' ? 'Inverted (180°)' : 'Normal'}</td>
-                    <td className="py-1.5 pr-3 text-right" data-testid={`sheet-sub-gain-${s.id}`}>
-                      {signed(s.gainDb, D.trimDb)} dB
-                    </td>
-                    <td className="py-1.5 pr-3 text-right">{f(s.lowpassHz, 0)} Hz</td>
-                    <td className="py-1.5 font-sans text-xs">{s.slope}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+              ))}
+            </tbody>
+          </SheetTable>
         ) : (
           <p className="text-sm text-ink-soft">No subwoofers in this System.</p>
         )}

@@ -21,19 +21,19 @@ export async function AppHeader() {
         <nav aria-label="Main" className="flex flex-wrap items-center gap-1 text-sm">
           {caller
             ? NAV.map((n) => (
-                <Link key={n.href} href={n.href} className="rounded-md px-2.5 py-1.5 text-ink hover:bg-[#EFECE4]">
+                <Link key={n.href} href={n.href} className="rounded-md px-2.5 py-1.5 text-ink hover:bg-wash">
                   {n.label}
                 </Link>
               ))
             : null}
-          <Link href="/systems/new" className="rounded-md bg-mains px-2.5 py-1.5 font-medium text-white hover:bg-[#0B5E58]">
+          <Link href="/systems/new" className="rounded-md bg-mains px-2.5 py-1.5 font-medium text-white hover:bg-mains-dark">
             New System
           </Link>
-          <Link href="/docs/api" className="rounded-md px-2.5 py-1.5 text-ink hover:bg-[#EFECE4]">
+          <Link href="/docs/api" className="rounded-md px-2.5 py-1.5 text-ink hover:bg-wash">
             API
           </Link>
           {caller?.siteRole === 'admin' ? (
-            <Link href="/admin/users" className="rounded-md px-2.5 py-1.5 text-ink hover:bg-[#EFECE4]">
+            <Link href="/admin/users" className="rounded-md px-2.5 py-1.5 text-ink hover:bg-wash">
               Users
             </Link>
           ) : null}
@@ -48,10 +48,10 @@ export async function AppHeader() {
             </>
           ) : (
             <>
-              <Link href="/sign-in" className="rounded-md px-2 py-1 hover:bg-[#EFECE4]">
+              <Link href="/sign-in" className="rounded-md px-2 py-1 hover:bg-wash">
                 Sign in
               </Link>
-              <Link href="/sign-up" className="rounded-md border border-line px-2 py-1 hover:bg-[#EFECE4]">
+              <Link href="/sign-up" className="rounded-md border border-line px-2 py-1 hover:bg-wash">
                 Create account
               </Link>
             </>

@@ -4,7 +4,7 @@ import { signOut } from 'next-auth/react';
 
 export function SignOutButton() {
   return (
-    <button type="button" onClick={() => signOut({ callbackUrl: '/' })} className="rounded-md px-2 py-1 text-sm text-ink hover:bg-[#EFECE4]">
+    <button type="button" onClick={() => signOut({ callbackUrl: '/' })} className="rounded-md px-2 py-1 text-sm text-ink hover:bg-wash">
       Sign out
     </button>
   );

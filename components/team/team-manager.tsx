@@ -84,7 +84,7 @@ export function TeamManager({ userId }: { userId: string }) {
           <div className="overflow-x-auto rounded-lg border border-line bg-white">
             <table className="w-full text-left text-sm">
               <caption className="sr-only">Members of {current.name}</caption>
-              <thead className="border-b border-line bg-[#FAF9F5] text-xs uppercase tracking-wide text-ink-faint">
+              <thead className="border-b border-line bg-shade text-xs uppercase tracking-wide text-ink-faint">
                 <tr>
                   <th className="px-3 py-2">Name</th>
                   <th className="px-3 py-2">E-mail</th>

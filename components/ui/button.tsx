@@ -3,10 +3,10 @@ import type { ButtonHTMLAttributes } from 'react';
 type Variant = 'primary' | 'secondary' | 'danger' | 'ghost';
 
 const styles: Record<Variant, string> = {
-  primary: 'bg-mains text-white hover:bg-[#0B5E58] disabled:bg-[#7AA8A3]',
-  secondary: 'bg-white text-ink border border-line hover:bg-[#EFECE4]',
-  danger: 'bg-fail text-white hover:bg-[#951717]',
-  ghost: 'text-ink hover:bg-[#EFECE4]',
+  primary: 'bg-mains text-white hover:bg-mains-dark disabled:bg-mains-pale',
+  secondary: 'bg-white text-ink border border-line hover:bg-wash',
+  danger: 'bg-fail text-white hover:bg-fail-dark',
+  ghost: 'text-ink hover:bg-wash',
 };
 
 export function buttonClass(variant: Variant = 'primary', extra = '') {

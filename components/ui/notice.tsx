@@ -1,10 +1,10 @@
 import type { ReactNode } from 'react';
 
 const tone = {
-  info: 'border-[#B8D8D4] bg-[#EEF7F6] text-ink',
-  warn: 'border-[#E8C9A5] bg-[#FBF3EA] text-[#6B3206]',
-  error: 'border-[#E7B4B4] bg-[#FBEDED] text-[#7F1414]',
-  ok: 'border-[#B9DCC3] bg-[#EEF8F1] text-[#14532D]',
+  info: 'border-tint-edge-info bg-tint-info text-ink',
+  warn: 'border-tint-edge-warn bg-tint-warn text-tint-ink-warn',
+  error: 'border-tint-edge-fail bg-tint-fail text-tint-ink-fail',
+  ok: 'border-tint-edge-ok bg-tint-ok text-tint-ink-ok',
 };
 
 export function Notice({ kind = 'info', children, title }: { kind?: keyof typeof tone; children: ReactNode; title?: string }) {

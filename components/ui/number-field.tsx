@@ -92,7 +92,7 @@ export function NumberField({ label, value, onChange, unit, min, max, step = 1, 
             if (!localError) setDraft(null);
           }}
           onChange={(e) => commit(e.target.value)}
-          className={`num w-24 rounded-md border bg-white px-2 py-1.5 text-sm disabled:cursor-not-allowed disabled:border-dashed disabled:bg-[#F1EFE9] disabled:text-ink-soft ${message ? 'border-fail' : 'border-line'}`}
+          className={`num w-24 rounded-md border bg-white px-2 py-1.5 text-sm disabled:cursor-not-allowed disabled:border-dashed disabled:bg-muted disabled:text-ink-soft ${message ? 'border-fail' : 'border-line'}`}
         />
         {slider && min !== undefined && max !== undefined ? (
           <input
@@ -109,7 +109,7 @@ export function NumberField({ label, value, onChange, unit, min, max, step = 1, 
               setLocalError(null);
               onChange(fromShown(n));
             }}
-            className="min-w-0 flex-1 accent-[#0F766E] disabled:opacity-50"
+            className="min-w-0 flex-1 accent-mains disabled:opacity-50"
           />
         ) : null}
       </div>

@@ -1,10 +1,11 @@
+import { speedOfSoundMps } from '../air/speed-of-sound';
 import { MAX_PATHS, type BlendOptions, type BlendResult, type PathCurves } from './blend-types';
 import { accumulatePath, finishPath, finishSum, toBlendGrid, type BlendGrid } from './blend-kernel';
-import { blendSpeedMps, compilePath, type CompiledPath } from './path-plan';
+import { compilePath, type CompiledPath } from './path-plan';
 
 /** Validates temperatureC and the paths and compiles them (shared by blendResponse and blendSumResponse). */
 export function compileBlendPaths(temperatureC: number, paths: BlendOptions['paths']): CompiledPath[] {
-  const speed = blendSpeedMps(temperatureC);
+  const speed = speedOfSoundMps(temperatureC);
   if (!Array.isArray(paths) || paths.length === 0) throw new RangeError('paths must contain at least one path');
   if (paths.length > MAX_PATHS) throw new RangeError(`paths must contain at most ${MAX_PATHS} paths (got ${paths.length})`);
   return paths.map((p, k) => compilePath(p, speed, `paths[${k}]`));

@@ -1,4 +1,3 @@
-import { speedOfSoundMps } from '../air/speed-of-sound';
 import { filterSections, rolloffSections } from '../filters/analog-sections';
 import { assertFinite, assertNonNegative } from '../internal/guards';
 import { compileSections, type SectionPlan } from '../internal/section-plan';
@@ -30,9 +29,4 @@ export function compilePath(path: PathSpec, speedMps: number, prefix = 'path'): 
   const gain = Math.pow(10, path.gainDb / 20) * (path.invert ? -1 : 1);
   const delayS = path.delayMs / 1000 + (path.distanceM ?? 0) / speedMps;
   return { name: String(path.name), plan: compileSections(sections, gain), delayS };
-}
-
-/** Speed of sound for a blend, validating temperatureC. */
-export function blendSpeedMps(temperatureC: number): number {
-  return speedOfSoundMps(temperatureC);
 }

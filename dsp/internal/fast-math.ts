@@ -83,13 +83,3 @@ export function sinCos(x: number, out: Float64Array, offset: number): void {
     out[offset + 1] = s;
   }
 }
-
-const TWO_PI = 2 * Math.PI;
-const INV_TWO_PI = 1 / TWO_PI;
-/** Wraps radians to (−π, π]. */
-export function wrapRad(x: number): number {
-  let y = x - TWO_PI * Math.round(x * INV_TWO_PI);
-  if (y <= -Math.PI) y += TWO_PI;
-  else if (y > Math.PI) y -= TWO_PI;
-  return y;
-}

@@ -1,5 +1,6 @@
 import { speedOfSoundMps } from '../air/speed-of-sound';
 import { assertFinite } from '../internal/guards';
+import { withoutCommonDelayMs } from '../timing/remove-common-delay';
 
 /** One main channel as the processor is told it: distance to the MLP, delay on top of distance alignment, level offset. */
 export interface ChannelSettingsMain {
@@ -67,9 +68,9 @@ export function channelSettings({ temperatureC, mains, subs }: ChannelSettingsOp
   if (farthestIndex < 0) return { mains: [], subs: [], farthestIndex: -1, farthestDistanceM: 0 };
   const farthestDistanceM = (all[farthestIndex] as (typeof all)[number]).distanceM;
   // The alignment part is rounded first, so a change of an extra delay by whole hundredths moves the setting by
-  // exactly that much (what Timing recommends is what the processor gets).
-  const totals = all.map((a) => roundToStep((1000 * (farthestDistanceM - a.distanceM)) / c, SETTING_RESOLUTION.delayMs) + a.extraDelayMs);
-  const common = Math.min(...totals);
+  // exactly that much (what Timing recommends is what the processor gets); the shared delay is taken out before the
+  // final rounding.
+  const delaysMs = withoutCommonDelayMs(all.map((a) => roundToStep((1000 * (farthestDistanceM - a.distanceM)) / c, SETTING_RESOLUTION.delayMs) + a.extraDelayMs));
   let farthestMainM = 0;
   for (const m of mains) farthestMainM = Math.max(farthestMainM, m.distanceM);
   return {
@@ -77,7 +78,7 @@ export function channelSettings({ temperatureC, mains, subs }: ChannelSettingsOp
       assertFinite(`mains[${i}].trimDb`, m.trimDb);
       return {
         distanceM: roundToStep(m.distanceM, SETTING_RESOLUTION.distanceM),
-        delayMs: roundToStep((totals[i] as number) - common, SETTING_RESOLUTION.delayMs),
+        delayMs: roundToStep(delaysMs[i] as number, SETTING_RESOLUTION.delayMs),
         trimDb: roundToStep(20 * Math.log10(m.distanceM / farthestMainM) + m.trimDb, SETTING_RESOLUTION.trimDb),
       };
     }),
@@ -85,7 +86,7 @@ export function channelSettings({ temperatureC, mains, subs }: ChannelSettingsOp
       assertFinite(`subs[${j}].gainDb`, s.gainDb);
       return {
         distanceM: roundToStep(s.distanceM, SETTING_RESOLUTION.distanceM),
-        delayMs: roundToStep((totals[mains.length + j] as number) - common, SETTING_RESOLUTION.delayMs),
+        delayMs: roundToStep(delaysMs[mains.length + j] as number, SETTING_RESOLUTION.delayMs),
         gainDb: roundToStep(s.gainDb, SETTING_RESOLUTION.trimDb),
       };
     }),

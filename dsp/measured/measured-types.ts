@@ -1,12 +1,5 @@
 import type { PathSpec } from '../blend/blend-types';
 
-/** A measured response at one seat: magnitude in dB, phase in degrees when the measurement has it. */
-export interface MeasuredCurve {
-  readonly frequencyHz: Float64Array | readonly number[];
-  readonly magnitudeDb: Float64Array | readonly number[];
-  readonly phaseDeg?: Float64Array | readonly number[];
-}
-
 /** A measured path: its curve (on the shared grid) and the processor settings to apply to it. */
 export interface MeasuredPathInput {
   readonly magnitudeDb: Float64Array | readonly number[];

@@ -1,7 +1,7 @@
 import { bandLevelDb, effectiveMinus3Hz, type BlendAssessment } from './blend-assessment';
 
 /**
- * When a change is worth recommending (common practice, REFERENCES.md):
+ * When a change is worth recommending (common practice; DEVELOPERS.md, "One model of the whole system"):
  * - a change in the flatness measure under 0.5 dB is hard to hear in the bass, so it is not worth making;
  * - settings within 0.1 dB of each other are near-equal: the smallest change wins (least delay added, then no flip);
  * - a setting may not raise the system −3 dB point by more than a third of an octave, nor cut the level below the

@@ -69,7 +69,7 @@ export function assessmentGrid(crossoverHz: number): BlendGrid {
 
 /**
  * Assesses a blend with the one flatness measure, the deepest dip, the level at the crossover and the system −3 dB
- * point (REFERENCES.md: the reference is the mains' passband, two octaves above the crossover — our choice).
+ * point (the reference is the mains' passband, two octaves above the crossover — our choice, documented on the API page).
  * @example assessBlend({ temperatureC: 20, paths: [lr4High80, lr4Low80], crossoverHz: 80 }).flatnessDb // ≈ 0 (Linkwitz 1976)
  */
 export function assessBlend({ temperatureC, paths, crossoverHz }: AssessBlendOptions): BlendAssessment {

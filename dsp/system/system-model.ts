@@ -1,5 +1,6 @@
 import type { PathSpec } from '../blend/blend-types';
 import type { FilterShape, RolloffChain } from '../filters/filter-types';
+import { withoutCommonDelayMs } from '../timing/remove-common-delay';
 
 /** One source of the system as it sounds at the seat: its air path, its processor delay, level and polarity. */
 export interface SystemSource {
@@ -58,11 +59,10 @@ export function systemPaths(model: SystemModel): PathSpec[] {
  * then share is taken out (a common delay changes no level).
  */
 export function retimeSources(model: SystemModel, changes: readonly { readonly shiftMs: number; readonly flip: boolean }[]): SystemModel {
-  const subDelays = model.subs.map((s, k) => s.delayMs + (changes[k]?.shiftMs ?? 0));
-  const common = Math.min(model.mains.delayMs, ...subDelays);
+  const [mainsDelayMs, ...subDelaysMs] = withoutCommonDelayMs([model.mains.delayMs, ...model.subs.map((s, k) => s.delayMs + (changes[k]?.shiftMs ?? 0))]);
   return {
     ...model,
-    mains: { ...model.mains, delayMs: model.mains.delayMs - common },
-    subs: model.subs.map((s, k) => ({ ...s, delayMs: (subDelays[k] as number) - common, invert: changes[k]?.flip ? !s.invert : s.invert })),
+    mains: { ...model.mains, delayMs: mainsDelayMs as number },
+    subs: model.subs.map((s, k) => ({ ...s, delayMs: subDelaysMs[k] as number, invert: changes[k]?.flip ? !s.invert : s.invert })),
   };
 }

@@ -45,7 +45,7 @@ export const BLEND_DOCS: ApiRouteDoc[] = [
     id: 'blend',
     method: 'POST',
     path: '/api/v1/blend',
-    summary: 'The complex sum of up to 16 paths (crossover filter × natural roll-off × gain × polarity × delay) and its read-outs at the crossover (SPEC §6).',
+    summary: 'The complex sum of up to 16 paths (crossover filter × natural roll-off × gain × polarity × delay) and its read-outs at the crossover.',
     auth: 'none',
     fields: [
       { name: 'temperatureC', type: 'number', unit: '°C', required: true, description: 'Air temperature, −20…50; sets the speed of sound for distanceM.' },
@@ -86,7 +86,7 @@ export const BLEND_DOCS: ApiRouteDoc[] = [
     ],
     examples: [
       {
-        title: 'SPEC §6: LR4 mains high-pass, BW2 sub low-pass inverted, 2.5 ms and 3.4 m on the sub',
+        title: 'LR4 mains high-pass, BW2 sub low-pass inverted, 2.5 ms and 3.4 m on the sub',
         request: {
           temperatureC: 20,
           grid: { startHz: 10, stopHz: 1000, pointsPerOctave: 48 },

@@ -6,7 +6,7 @@ import { LIBRARY_DOCS } from './library';
 import { MEASURED_DOCS } from './measured';
 import type { ApiRouteDoc } from './types';
 
-export type { ApiExample, ApiField, ApiRouteDoc } from './types';
+export type { ApiField, ApiRouteDoc } from './types';
 
 /** Every documented route, in the order the API page shows them. */
 export const API_DOCS: ApiRouteDoc[] = [...BLEND_DOCS, ...ROOM_DOCS, ...LIBRARY_DOCS, ...MEASURED_DOCS, ...LESSON_DOCS, ...AUTH_DOCS];

@@ -18,7 +18,7 @@ const STEP_FIELDS: ApiField[] = [
   { name: 'step.traces', type: '("mains" | "subs" | "sum" | "target" | "phase")[]', description: 'Traces shown (default mains, subs, sum, target).' },
   { name: 'step.sweep', type: 'object | null', description: '{ parameter: "subDelayMs" | "subPolarity" | "crossoverHz" | "filter" | "subDistanceM" | "mainsGainDb", from, to, durationS }; for subPolarity from/to are "normal" | "inverted", for filter slope choices such as "butterworth-2", "linkwitz-riley-4".' },
   { name: 'step.sweep.durationS', type: 'number', unit: 's', description: 'How long the sweep takes, 1–60 s (default 6).' },
-  { name: 'step.document', type: 'System document', description: 'The snapshot (SPEC §3 schema). Either this or step.fromSystemId.' },
+  { name: 'step.document', type: 'System document', description: 'The snapshot (a System document, the same schema as a saved System). Either this or step.fromSystemId.' },
   { name: 'step.fromSystemId', type: 'uuid', description: "Copy a saved System's current document (the caller must be able to read it). Later saves of that System do not change the Step." },
 ];
 

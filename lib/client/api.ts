@@ -1,4 +1,4 @@
-/** Client-side JSON calls that turn SPEC §6 error bodies into a typed ApiError. */
+/** Client-side JSON calls that turn the API's error bodies (`{ error: { code, message, issues } }`) into a typed ApiError. */
 export interface ApiIssue {
   path: string;
   message: string;

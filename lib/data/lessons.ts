@@ -1,13 +1,12 @@
 import { Op, type Transaction } from 'sequelize';
 import { callerWorkspaces, requireMembership, type Caller } from '@/lib/access';
-import { config } from '@/lib/config';
 import { db } from '@/lib/db';
-import { conflict, invalid, notFound } from '@/lib/errors';
-import { newToken } from '@/lib/tokens';
-import { DEFAULT_TRACES, LESSON_PANELS, stepFieldsSchema, sweepSchema, type LessonPanel, type LessonTrace, type StepCreateInput, type StepUpdateInput, type Sweep } from '@/lib/validations/lesson';
+import { conflict, notFound } from '@/lib/errors';
+import { DEFAULT_TRACES, LESSON_PANELS, stepFieldsSchema, sweepSchema, type LessonPanel, type LessonTrace, type Sweep } from '@/lib/validations/lesson';
 import { systemDocumentSchema, type SystemDocument } from '@/lib/validations/system';
-import { Lesson, LessonStep, ShareLink, User, Workspace } from '@/models';
-import { getSystem, personalWorkspaceId } from './systems';
+import { Lesson, LessonStep, User, Workspace } from '@/models';
+import { assertUuid } from './ids';
+import { personalWorkspaceId } from './systems';
 
 export interface AppLessonStep {
   id: string;
@@ -48,6 +47,7 @@ export interface SharedLesson {
   steps: Omit<AppLessonStep, 'id' | 'updatedAt'>[];
 }
 
+/** A Lesson's share link as the API answers it (lib/data/share-links.ts makes and reads them). */
 export interface AppLessonShareLink {
   token: string;
   url: string;
@@ -64,11 +64,8 @@ const include = [
   { model: Workspace, as: 'workspace', attributes: ['id', 'name'] },
 ];
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-const TOKEN_SHAPE = /^[A-Za-z0-9_-]{16,64}$/;
-
 /** Stored rows are re-validated on the way out, so nothing malformed reaches a page. */
-function toStep(s: LessonStep): AppLessonStep {
+export function toStep(s: LessonStep): AppLessonStep {
   const panel = (LESSON_PANELS as readonly string[]).includes(s.panel) ? (s.panel as LessonPanel) : 'blend';
   const traces = stepFieldsSchema.shape.traces.safeParse(s.traces);
   const sweep = s.sweep == null ? null : sweepSchema.safeParse(s.sweep);
@@ -103,13 +100,14 @@ function toSummary(l: LessonRow, role: AppLessonSummary['role'], stepCount: numb
 
 async function findLive(id: string, transaction?: Transaction): Promise<LessonRow> {
   db();
-  if (!UUID.test(id)) throw notFound('That Lesson');
+  assertUuid(id, 'That Lesson');
   const l = (await Lesson.findByPk(id, { include, transaction })) as LessonRow | null;
   if (!l || l.deletedAt) throw notFound('That Lesson');
   return l;
 }
 
-async function stepsOf(lessonId: string, transaction?: Transaction): Promise<LessonStep[]> {
+/** A Lesson's Step rows in order (no access check: for the data layer's own use after one). */
+export async function stepsOf(lessonId: string, transaction?: Transaction): Promise<LessonStep[]> {
   return LessonStep.findAll({ where: { lessonId }, order: [['position', 'ASC']], transaction });
 }
 
@@ -150,7 +148,7 @@ export async function createLesson(caller: Caller, input: { title: string; descr
  * (when `revision` is given; a stale one is 409 with `currentRevision` and nothing changes), the
  * change applied, and the revision bumped, all in one transaction.
  */
-async function writeLesson(caller: Caller, id: string, revision: number | undefined, change: (lesson: Lesson, t: Transaction) => Promise<void>): Promise<AppLesson> {
+export async function writeLesson(caller: Caller, id: string, revision: number | undefined, change: (lesson: Lesson, t: Transaction) => Promise<void>): Promise<AppLesson> {
   const first = await findLive(id);
   await requireMembership(caller, first.workspaceId, 'editor', 'That Lesson');
   await db().transaction(async (t) => {
@@ -181,128 +179,6 @@ export async function deleteLesson(caller: Caller, id: string): Promise<void> {
   const l = await findLive(id);
   await requireMembership(caller, l.workspaceId, 'editor', 'That Lesson');
   await Lesson.update({ deletedAt: new Date() }, { where: { id, deletedAt: null } });
-}
-
-/** Positions 1…n in the given order (the unique constraint is deferred to the commit). */
-async function renumber(steps: LessonStep[], t: Transaction): Promise<void> {
-  for (let i = 0; i < steps.length; i++) {
-    const step = steps[i] as LessonStep;
-    if (step.position !== i + 1) await LessonStep.update({ position: i + 1 }, { where: { id: step.id }, transaction: t });
-  }
-}
-
-/** Adds a Step (a copy of the document, or of a saved System's current document) at `position` or the end. */
-export async function addStep(caller: Caller, id: string, input: StepCreateInput): Promise<AppLesson> {
-  const { fromSystemId, document, ...fields } = input.step;
-  // The copy is taken now: later saves of that System do not reach the Step.
-  const snapshot = fromSystemId ? (await getSystem(caller, fromSystemId)).document : document;
-  if (!snapshot) throw invalid('step.document: send a System document or fromSystemId', [{ path: 'step.document', message: 'send a System document or fromSystemId' }]);
-  return writeLesson(caller, id, input.revision, async (lesson, t) => {
-    const steps = await stepsOf(lesson.id, t);
-    if (steps.length >= 200) throw invalid('A Lesson holds at most 200 Steps.', [{ path: 'step', message: 'a Lesson holds at most 200 Steps' }]);
-    const at = Math.min(input.position ?? steps.length + 1, steps.length + 1);
-    const created = await LessonStep.create(
-      { lessonId: lesson.id, position: steps.length + 1, title: fields.title, points: fields.points, panel: fields.panel, traces: fields.traces, sweep: fields.sweep, document: snapshot },
-      { transaction: t },
-    );
-    if (at <= steps.length) {
-      const order = [...steps];
-      order.splice(at - 1, 0, created);
-      await renumber(order, t);
-    }
-  });
-}
-
-async function stepOf(lessonId: string, stepId: string, t: Transaction): Promise<LessonStep> {
-  if (!UUID.test(stepId)) throw notFound('That Step');
-  const step = await LessonStep.findOne({ where: { id: stepId, lessonId }, transaction: t });
-  if (!step) throw notFound('That Step');
-  return step;
-}
-
-export async function updateStep(caller: Caller, id: string, stepId: string, input: StepUpdateInput): Promise<AppLesson> {
-  return writeLesson(caller, id, input.revision, async (lesson, t) => {
-    const step = await stepOf(lesson.id, stepId, t);
-    const s = input.step;
-    await step.update(
-      {
-        ...(s.title !== undefined ? { title: s.title } : {}),
-        ...(s.points !== undefined ? { points: s.points } : {}),
-        ...(s.panel !== undefined ? { panel: s.panel } : {}),
-        ...(s.traces !== undefined ? { traces: s.traces } : {}),
-        ...(s.sweep !== undefined ? { sweep: s.sweep } : {}),
-        ...(s.document !== undefined ? { document: s.document } : {}),
-      },
-      { transaction: t },
-    );
-  });
-}
-
-export async function deleteStep(caller: Caller, id: string, stepId: string, revision: number): Promise<AppLesson> {
-  return writeLesson(caller, id, revision, async (lesson, t) => {
-    const step = await stepOf(lesson.id, stepId, t);
-    await step.destroy({ transaction: t });
-    await renumber((await stepsOf(lesson.id, t)).filter((s) => s.id !== stepId), t);
-  });
-}
-
-/** `stepIds` must name every Step of the Lesson exactly once, in the new order. */
-export async function reorderSteps(caller: Caller, id: string, input: { revision: number; stepIds: string[] }): Promise<AppLesson> {
-  return writeLesson(caller, id, input.revision, async (lesson, t) => {
-    const steps = await stepsOf(lesson.id, t);
-    const byId = new Map(steps.map((s) => [s.id, s]));
-    const unique = new Set(input.stepIds);
-    if (unique.size !== input.stepIds.length || unique.size !== steps.length || input.stepIds.some((s) => !byId.has(s))) {
-      throw invalid(`stepIds must list each of this Lesson's ${steps.length} Steps exactly once.`, [{ path: 'stepIds', message: `must list each of the ${steps.length} Steps exactly once` }]);
-    }
-    await renumber(input.stepIds.map((s) => byId.get(s) as LessonStep), t);
-  });
-}
-
-/** The public address of a lesson's share link (the student view). */
-export function lessonShareUrl(token: string): string {
-  return `${config.appUrl}/s/${token}`;
-}
-
-const toLink = (l: ShareLink): AppLessonShareLink => ({ token: l.token, url: lessonShareUrl(l.token), lessonId: l.targetId, createdAt: l.createdAt.toISOString(), revokedAt: l.revokedAt ? l.revokedAt.toISOString() : null });
-
-/** An editor creates a read-only link to a Lesson (256-bit token from the CSPRNG). */
-export async function createLessonShareLink(caller: Caller | null, lessonId: string): Promise<AppLessonShareLink> {
-  const l = await findLive(lessonId);
-  await requireMembership(caller, l.workspaceId, 'editor', 'That Lesson');
-  const link = await ShareLink.create({ token: newToken(), targetType: 'lesson', targetId: l.id, workspaceId: l.workspaceId, createdById: caller!.id });
-  return toLink(link);
-}
-
-/** The Lesson's live links (editors: a token is as good as read access for anyone holding it). */
-export async function listLessonShareLinks(caller: Caller | null, lessonId: string): Promise<AppLessonShareLink[]> {
-  const l = await findLive(lessonId);
-  await requireMembership(caller, l.workspaceId, 'editor', 'That Lesson');
-  const rows = await ShareLink.findAll({ where: { targetType: 'lesson', targetId: l.id, revokedAt: null }, order: [['createdAt', 'DESC']] });
-  return rows.map(toLink);
-}
-
-/** Revokes one of the Lesson's links; twice is harmless; a token of another Lesson is 404. */
-export async function revokeLessonShareLink(caller: Caller | null, lessonId: string, token: string): Promise<AppLessonShareLink> {
-  const l = await findLive(lessonId);
-  await requireMembership(caller, l.workspaceId, 'editor', 'That Lesson');
-  if (!TOKEN_SHAPE.test(token)) throw notFound('That share link');
-  const link = await ShareLink.findOne({ where: { token, targetType: 'lesson', targetId: l.id } });
-  if (!link) throw notFound('That share link');
-  if (!link.revokedAt) await link.update({ revokedAt: new Date() });
-  return toLink(link);
-}
-
-/** The Lesson behind a live link, for anyone holding the token; null when unknown, revoked or deleted. */
-export async function getLessonByShareToken(token: string): Promise<SharedLesson | null> {
-  db();
-  if (!TOKEN_SHAPE.test(token)) return null;
-  const link = await ShareLink.findOne({ where: { token, targetType: 'lesson', revokedAt: null } });
-  if (!link) return null;
-  const lesson = await Lesson.findByPk(link.targetId);
-  if (!lesson || lesson.deletedAt) return null;
-  const steps = (await stepsOf(lesson.id)).map(toStep).map((s) => ({ position: s.position, title: s.title, points: s.points, panel: s.panel, traces: s.traces, sweep: s.sweep, document: s.document }));
-  return { title: lesson.title, description: lesson.description, sharedAt: link.createdAt.toISOString(), steps };
 }
 
 /** For the demo seed: the lesson with this title in the workspace, created with its Steps when missing. */

@@ -5,6 +5,7 @@ import { notFound } from '@/lib/errors';
 import type { ParsedMeasurement } from '@/lib/measurements/parse-measurement';
 import type { MeasurementListQuery, MeasurementUploadFields } from '@/lib/validations/measurement';
 import { Measurement, System, User, Workspace, type MeasurementData } from '@/models';
+import { assertUuid } from './ids';
 import { personalWorkspaceId } from './systems';
 
 /** A measurement without its points (list rows, upload answers). */
@@ -59,7 +60,7 @@ function toApp(r: Row): AppMeasurement {
 
 async function findRow(id: string, withData: boolean): Promise<Row> {
   db();
-  if (!/^[0-9a-f-]{36}$/i.test(id)) throw notFound('That measurement');
+  assertUuid(id, 'That measurement');
   const r = (await Measurement.findByPk(id, { include, ...(withData ? {} : { attributes: { exclude: ['data'] } }) })) as Row | null;
   if (!r) throw notFound('That measurement');
   return r;

@@ -4,6 +4,7 @@ import { db } from '@/lib/db';
 import { notFound } from '@/lib/errors';
 import { profileFieldsSchema, type ProfileFields, type ProfileListQuery } from '@/lib/validations/profile';
 import { SpeakerProfileRow, User, Workspace } from '@/models';
+import { assertUuid } from './ids';
 import { personalWorkspaceId } from './systems';
 
 export interface AppProfile extends ProfileFields {
@@ -57,7 +58,7 @@ export async function listProfiles(caller: Caller, query: ProfileListQuery): Pro
 
 async function findRow(id: string): Promise<Row> {
   db();
-  if (!/^[0-9a-f-]{36}$/i.test(id)) throw notFound('That Speaker profile');
+  assertUuid(id, 'That Speaker profile');
   const r = (await SpeakerProfileRow.findByPk(id, { include })) as Row | null;
   if (!r) throw notFound('That Speaker profile');
   return r;

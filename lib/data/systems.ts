@@ -2,6 +2,7 @@ import { col, fn, Op, type OrderItem, type WhereOptions } from 'sequelize';
 import { callerWorkspaces, requireMembership, type Caller } from '@/lib/access';
 import { db } from '@/lib/db';
 import { conflict, notFound } from '@/lib/errors';
+import { isUuid } from '@/lib/validations/common';
 import type { SystemListQuery } from '@/lib/validations/library';
 import { systemDocumentSchema, type SystemDocument } from '@/lib/validations/system';
 import { System, SystemRevision, User, Workspace } from '@/models';
@@ -103,10 +104,15 @@ export async function listTags(caller: Caller): Promise<string[]> {
   return rows.map((r) => r.tag);
 }
 
-async function findLive(id: string, { includeDeleted = false } = {}): Promise<SystemRow> {
+/** The System row with `id`, or null when no System has that id (or the id cannot be one). Database errors are thrown. */
+async function findRow(id: string): Promise<SystemRow | null> {
+  if (!isUuid(id)) return null;
   db();
-  if (!/^[0-9a-f-]{36}$/i.test(id)) throw notFound('That System');
-  const s = (await System.findByPk(id, { include })) as SystemRow | null;
+  return (await System.findByPk(id, { include })) as SystemRow | null;
+}
+
+async function findLive(id: string, { includeDeleted = false } = {}): Promise<SystemRow> {
+  const s = await findRow(id);
   if (!s || (s.deletedAt && !includeDeleted)) throw notFound('That System');
   return s;
 }
@@ -117,14 +123,14 @@ export async function getSystem(caller: Caller, id: string): Promise<AppSystem> 
   return { ...toSummary(s), document: readDocument(s.document), role };
 }
 
-/** For share links and lesson snapshots: no caller check (the caller has checked the token). */
+/**
+ * For share links: no caller check (the caller has checked the token). Null when no live System has this id; a
+ * database error is thrown, so an outage answers 503 rather than passing for a link that does not work.
+ */
 export async function getSystemUnchecked(id: string): Promise<AppSystem | null> {
-  try {
-    const s = await findLive(id);
-    return { ...toSummary(s), document: readDocument(s.document), role: 'viewer' };
-  } catch {
-    return null;
-  }
+  const s = await findRow(id);
+  if (!s || s.deletedAt) return null;
+  return { ...toSummary(s), document: readDocument(s.document), role: 'viewer' };
 }
 
 export async function personalWorkspaceId(caller: Caller): Promise<string> {

@@ -40,19 +40,8 @@ export async function findUserByEmail(email: string): Promise<User | null> {
   return User.findOne({ where: { email: email.trim().toLowerCase() } });
 }
 
-export async function getUser(id: string): Promise<AppUser | null> {
-  db();
-  const u = await User.findByPk(id);
-  return u ? toAppUser(u) : null;
-}
-
 export async function listUsers(): Promise<(AppUser & { workspaceCount: number })[]> {
   db();
   const users = await User.findAll({ order: [['createdAt', 'ASC']], include: [{ model: Membership, as: 'memberships', attributes: ['id'] }] });
   return users.map((u) => ({ ...toAppUser(u), workspaceCount: ((u as unknown as { memberships?: unknown[] }).memberships ?? []).length }));
-}
-
-export async function setPassword(userId: string, password: string): Promise<void> {
-  db();
-  await User.update({ passwordHash: await hashPassword(password) }, { where: { id: userId } });
 }

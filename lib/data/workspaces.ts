@@ -1,7 +1,7 @@
 import { Op } from 'sequelize';
 import { requireMembership, type Caller } from '@/lib/access';
 import { db } from '@/lib/db';
-import { conflict, invalid, notFound } from '@/lib/errors';
+import { conflict, notFound } from '@/lib/errors';
 import { Membership, User, Workspace, type WorkspaceRole } from '@/models';
 
 export interface AppWorkspace {
@@ -99,8 +99,3 @@ export async function addMember(workspaceId: string, userId: string, role: Works
   await Membership.create({ workspaceId, userId, role });
 }
 
-export function assertUuid(id: string, what = 'That'): void {
-  if (!/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id)) throw notFound(what);
-}
-
-export { invalid };

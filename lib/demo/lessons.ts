@@ -55,7 +55,7 @@ function classroom(change: { slope?: Slope; invert?: boolean; subAtM?: number; s
 
 const ALL: LessonTrace[] = ['mains', 'subs', 'sum', 'target'];
 
-/** The invented demo Lesson "Why the sub and mains cancel" (SPEC §8). */
+/** The invented demo Lesson "Why the sub and mains cancel" (README, "Demo data"). */
 export function demoLesson(): { title: string; description: string; steps: DemoStep[] } {
   return {
     title: 'Why the sub and mains cancel',

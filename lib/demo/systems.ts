@@ -18,7 +18,7 @@ function speakers(profileId: string, amplifierPowerW: number, list: SpeakerSeed[
 
 /**
  * The invented "Juniper Lane screening room": 6.4 × 4.9 × 2.7 m, 7.1.4, two subs in the front
- * corners, three seats on the first row (SPEC §8). Invented for the demo.
+ * corners, three seats on the first row (README, "Demo data"). Invented for the demo.
  */
 export function juniperLaneDocument(): SystemDocument {
   return {

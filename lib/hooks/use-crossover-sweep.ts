@@ -2,7 +2,7 @@
 
 import { useCallback, useRef, useState } from 'react';
 import { ApiError, apiFetch } from '@/lib/client/api';
-import type { CrossoverSweepAnswer, CrossoverSweepAnswerRow } from '@/lib/system-model/blend-compute';
+import type { CrossoverSweepAnswer, CrossoverSweepAnswerRow } from '@/lib/system-model/crossover-sweep';
 import { rankSweepRows } from '@/dsp';
 import type { CrossoverSweepRequest } from '@/lib/validations/compute-blend';
 

@@ -1,12 +1,11 @@
 'use client';
 
 import { useCompute } from '@/lib/hooks/use-compute';
-import type { HeadroomAnswer } from '@/lib/system-model/headroom-compute';
-import { headroomRequestFromDocument, type HeadroomOptions } from '@/lib/system-model/headroom-request';
+import { headroomRequestFromDocument, type HeadroomAnswer, type HeadroomOptions } from '@/lib/system-model/headroom';
 import { outsideForMlpGeometry, positionsOutsideRoom } from '@/lib/system-model/room-bounds';
 import type { SystemDocument } from '@/lib/validations/system';
 
-export type { HeadroomAnswer, HeadroomRowOut } from '@/lib/system-model/headroom-compute';
+export type { HeadroomAnswer, HeadroomRowOut } from '@/lib/system-model/headroom';
 
 /**
  * Maximum SPL at the MLP against the target, per channel and per sub (POST /api/v1/headroom). Nothing is asked, and no

@@ -1,12 +1,11 @@
 'use client';
 
 import { useCompute } from '@/lib/hooks/use-compute';
-import type { LayoutAnswer } from '@/lib/system-model/layout-compute';
-import { layoutRequestFromDocument } from '@/lib/system-model/layout-request';
+import { layoutRequestFromDocument, type LayoutAnswer } from '@/lib/system-model/layout';
 import { positionsOutsideRoom } from '@/lib/system-model/room-bounds';
 import type { SystemDocument } from '@/lib/validations/system';
 
-export type { LayoutAnswer, LayoutSpeakerOut } from '@/lib/system-model/layout-compute';
+export type { LayoutAnswer } from '@/lib/system-model/layout';
 
 /**
  * Angles, pass/warn, toe-in, delays and trims of the System's speakers (POST /api/v1/layout). Nothing is asked, and no

@@ -2,28 +2,14 @@
 
 import useSWR from 'swr';
 import { ApiError, apiFetch, jsonFetcher, type ApiIssue } from '@/lib/client/api';
+import type { AppMeasurement, AppMeasurementSummary } from '@/lib/data/measurements';
+import type { AppSystem } from '@/lib/data/systems';
 
-export interface MeasurementItem {
-  id: string;
-  workspaceId: string;
-  workspaceName: string;
-  systemId: string | null;
-  name: string;
-  seat: string | null;
-  role: string | null;
-  pointCount: number;
-  startHz: number;
-  stopHz: number;
-  hasPhase: boolean;
-  createdByName: string | null;
-  createdAt: string;
-}
-
-export interface MeasurementPoints extends MeasurementItem {
-  frequencyHz: number[];
-  magnitudeDb: number[];
-  phaseDeg: number[] | null;
-}
+/** The API's answers, typed by the data layer that makes them (type imports only: nothing of the server is bundled). */
+export type MeasurementItem = AppMeasurementSummary;
+export type MeasurementPoints = AppMeasurement;
+/** POST /api/v1/measurements answers the stored measurement without its points. */
+export type UploadAnswer = AppMeasurementSummary;
 
 /** The caller's measurements (of one workspace when given); null skips the request (signed out). */
 export function useMeasurementList(query: { workspaceId?: string } | null) {
@@ -42,16 +28,7 @@ export function useMeasurementPoints(ids: readonly string[]) {
 
 /** The workspace a saved System lives in (for listing that workspace's measurements). */
 export function useSystemWorkspace(systemId: string | null) {
-  return useSWR<{ workspaceId: string; workspaceName: string; role: 'owner' | 'editor' | 'viewer' }, ApiError>(systemId ? `/api/v1/systems/${systemId}` : null, jsonFetcher, { revalidateOnFocus: false });
-}
-
-export interface UploadAnswer {
-  id: string;
-  name: string;
-  pointCount: number;
-  startHz: number;
-  stopHz: number;
-  hasPhase: boolean;
+  return useSWR<Pick<AppSystem, 'workspaceId' | 'workspaceName' | 'role'>, ApiError>(systemId ? `/api/v1/systems/${systemId}` : null, jsonFetcher, { revalidateOnFocus: false });
 }
 
 /**

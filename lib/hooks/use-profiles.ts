@@ -2,16 +2,11 @@
 
 import useSWR from 'swr';
 import { apiFetch, jsonFetcher } from '@/lib/client/api';
+import type { AppProfile } from '@/lib/data/profiles';
 import type { ProfileFields } from '@/lib/validations/profile';
 
-export interface ProfileItem extends ProfileFields {
-  id: string;
-  workspaceId: string;
-  workspaceName: string;
-  createdByName: string | null;
-  createdAt: string;
-  updatedAt: string;
-}
+/** A Library Speaker profile as the API answers it (the data layer's type; a type import only). */
+export type ProfileItem = AppProfile;
 
 /** Speaker profiles of the caller's workspaces (optionally one workspace, one kind). */
 export function useProfiles(query: { workspaceId?: string; kind?: 'main' | 'sub'; q?: string } = {}) {

@@ -1,12 +1,13 @@
 'use client';
 
 import { useCompute } from '@/lib/hooks/use-compute';
-import type { RoomModesAnswer, RoomResponseAnswer } from '@/lib/system-model/room-compute';
 import { outsideUnder, positionsOutsideRoom } from '@/lib/system-model/room-bounds';
-import { roomModesRequestFromDocument, roomResponseRequestFromDocument, type RoomResponseOptions } from '@/lib/system-model/room-request';
+import { roomModesRequestFromDocument, type RoomModesAnswer } from '@/lib/system-model/room-modes';
+import { roomResponseRequestFromDocument, type RoomResponseAnswer, type RoomResponseOptions } from '@/lib/system-model/room-response';
 import type { SystemDocument } from '@/lib/validations/system';
 
-export type { RoomModesAnswer, RoomResponseAnswer } from '@/lib/system-model/room-compute';
+export type { RoomModesAnswer } from '@/lib/system-model/room-modes';
+export type { RoomResponseAnswer } from '@/lib/system-model/room-response';
 
 /** The room's modes and their checks (POST /api/v1/room-modes), debounced and kept while the next answer comes. */
 export function useRoomModes(doc: SystemDocument, maxHz = 200) {

@@ -2,27 +2,13 @@
 
 import useSWR from 'swr';
 import { jsonFetcher } from '@/lib/client/api';
+import type { AppInvitation } from '@/lib/data/invitations';
+import type { AppMember, AppWorkspace } from '@/lib/data/workspaces';
 
-export interface WorkspaceItem {
-  id: string;
-  name: string;
-  personal: boolean;
-  role: 'owner' | 'editor' | 'viewer';
-  memberCount: number;
-}
-export interface MemberItem {
-  userId: string;
-  name: string;
-  email: string;
-  role: 'owner' | 'editor' | 'viewer';
-  since: string;
-}
-export interface InvitationItem {
-  id: string;
-  email: string;
-  role: 'owner' | 'editor' | 'viewer';
-  expiresAt: string;
-}
+/** The API's answers, typed by the data layer that makes them (type imports only: nothing of the server is bundled). */
+export type WorkspaceItem = AppWorkspace;
+export type MemberItem = AppMember;
+export type InvitationItem = AppInvitation;
 
 export function useWorkspaces() {
   return useSWR<{ items: WorkspaceItem[] }>('/api/v1/workspaces', jsonFetcher);

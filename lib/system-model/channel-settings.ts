@@ -6,7 +6,7 @@
  */
 import { channelSettings, type ChannelSettings } from '@/dsp';
 import type { SystemDocument } from '@/lib/validations/system';
-import { distanceToSeatM } from './index';
+import { distanceToSeatM } from './geometry';
 
 const cache = new WeakMap<SystemDocument, ChannelSettings>();
 

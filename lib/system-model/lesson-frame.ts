@@ -1,12 +1,13 @@
 /**
- * One frame of a Lesson Step's plot: the System's mains channel and subs summed by dsp/ in the
- * browser (so a sweep can be recomputed every animation frame without a round trip), with the
- * blend read-outs at the crossover. Inputs come from blendRequestFromDocument, so the numbers are
- * the ones POST /api/v1/blend gives for the same document.
+ * Lesson frame: one frame of a Lesson Step's plot (`computeLessonFrame`), the System's mains channel and subs summed by
+ * dsp/ in the browser (so a sweep can be recomputed every animation frame without a round trip), with the blend
+ * read-outs at the crossover. The paths are the whole-system model's (`systemPaths`), the same ones
+ * POST /api/v1/blend sums for the document. No request and nothing written back: a frame is computed from the document.
  */
-import { assessBlend, blendMetrics, blendResponse, logFrequencyGridHz, roomModes, type BlendAssessment, type BlendMetrics, type BlendResult } from '@/dsp';
+import { assessBlend, blendMetrics, blendResponse, logFrequencyGridHz, roomModes, systemPaths, type BlendAssessment, type BlendMetrics, type BlendResult } from '@/dsp';
 import type { SystemDocument } from '@/lib/validations/system';
-import { blendRequestFromDocument, distanceToSeatM } from './index';
+import { distanceToSeatM } from './geometry';
+import { systemModelFromDocument } from './system-from-document';
 
 export const FRAME_START_HZ = 10;
 export const FRAME_STOP_HZ = 1000;
@@ -32,14 +33,16 @@ export interface LessonFrame {
 }
 
 /** The blend of the document's mains channel (L) and all its subs; null when it has no speakers. */
-export function lessonFrame(doc: SystemDocument): LessonFrame | null {
-  const req = blendRequestFromDocument(doc, { startHz: FRAME_START_HZ, stopHz: FRAME_STOP_HZ, pointsPerOctave: POINTS_PER_OCTAVE });
-  if (!req) return null;
-  const result = blendResponse({ temperatureC: req.temperatureC, frequencyHz: frameGridHz(), paths: req.paths });
+export function computeLessonFrame(doc: SystemDocument): LessonFrame | null {
+  const model = systemModelFromDocument(doc);
+  if (!model) return null;
+  const paths = systemPaths(model);
+  const temperatureC = doc.room.temperatureC;
+  const result = blendResponse({ temperatureC, frequencyHz: frameGridHz(), paths });
   const crossoverHz = doc.bassManagement.crossoverHz;
-  const metrics = req.paths.length >= 1 ? blendMetrics(result, { crossoverHz, mainsIndex: 0, subIndex: req.paths.length > 1 ? 1 : 0 }) : null;
-  const assessment = req.paths.length >= 1 ? assessBlend({ temperatureC: req.temperatureC, paths: req.paths, crossoverHz }) : null;
-  const main = req.paths[0];
+  const metrics = paths.length >= 1 ? blendMetrics(result, { crossoverHz, mainsIndex: 0, subIndex: paths.length > 1 ? 1 : 0 }) : null;
+  const assessment = paths.length >= 1 ? assessBlend({ temperatureC, paths, crossoverHz }) : null;
+  const main = paths[0];
   return {
     result,
     metrics,

@@ -1,11 +1,12 @@
 /**
- * A Lesson Step's sweep: which value one parameter has at a moment of the animation, and the
- * System document with that value applied. Pure bookkeeping, shared by the editor preview, the
- * Presenter view and the student view; the blend itself is computed by dsp/ (see lesson-frame.ts).
+ * Lesson sweep: which value one parameter of a Lesson Step's sweep has at a moment of the animation (`sweepValueAt`),
+ * and the System document with that value applied (`applyLessonSweepToDocument`). Pure bookkeeping, shared by the
+ * editor preview, the Presenter view and the student view; the blend itself is computed by dsp/ (see lesson-frame.ts).
  */
 import { FILTER_CHOICES, filterChoiceLabel, filterChoiceSlope, type FilterChoice, type Sweep } from '@/lib/validations/lesson';
 import type { SystemDocument } from '@/lib/validations/system';
 import { mlpSeat } from './geometry';
+import { roundTo } from './rounding';
 
 export type SweepValue = { kind: 'number'; value: number } | { kind: 'polarity'; inverted: boolean } | { kind: 'filter'; choice: FilterChoice };
 
@@ -45,8 +46,8 @@ export function sweepValueAt(sweep: Sweep, progress: number): SweepValue {
   }
 }
 
-/** The document with the swept value applied (never mutates `doc`). */
-export function applySweepValue(doc: SystemDocument, sweep: Sweep, value: SweepValue): SystemDocument {
+/** The document with the swept value applied and nothing else changed (never mutates `doc`). */
+export function applyLessonSweepToDocument(doc: SystemDocument, sweep: Sweep, value: SweepValue): SystemDocument {
   const bm = doc.bassManagement;
   switch (sweep.parameter) {
     case 'subDelayMs':
@@ -110,6 +111,6 @@ function atDistanceFromMlp<T extends { xM: number; yM: number; zM: number }>(doc
   const across = distanceM * distanceM - dx * dx - dz * dz;
   if (across < 0) return item;
   const side = item.yM <= mlp.yM ? -1 : 1;
-  const yM = Math.round((mlp.yM + side * Math.sqrt(across)) * 1e4) / 1e4;
+  const yM = roundTo(mlp.yM + side * Math.sqrt(across), 4);
   return yM >= 0 && yM <= doc.room.lengthM ? { ...item, yM } : item;
 }

@@ -1,8 +1,8 @@
 /**
- * Measured: the compute behind POST /api/v1/measured/predict, the document → request glue, and
- * applying the measured-pair recommendation back to the document. The mathematics (resampling,
- * minimum phase, applying a path, the complex sum, the delay scan and Timing window, smoothing)
- * is dsp's; here only the shared grid, processor bookkeeping and rounding.
+ * Measured: the System's request for two measured curves (`measuredRequestFromDocument`), the compute behind
+ * POST /api/v1/measured/predict (`computeMeasured`) and the measured-pair recommendation written back
+ * (`applyMeasuredToDocument`). The mathematics (resampling, minimum phase, applying a path, the complex sum, the delay
+ * scan and Timing window, smoothing) is dsp's; here only the shared grid, processor bookkeeping and rounding.
  */
 import {
   ADVICE_RULES,
@@ -13,12 +13,13 @@ import {
   smoothFractionalOctave,
   type MeasuredPathInput,
   type PathSpec,
+  withoutCommonDelayMs,
 } from '@/dsp';
 import { invalid } from '@/lib/errors';
 import type { PredictRequest, PredictRequestInput } from '@/lib/validations/measurement';
 import type { SystemDocument } from '@/lib/validations/system';
-import { roundTo } from './rounding';
-import { applyTimingToDocument, systemModelFromDocument, timingSettingsOf } from './system-from-document';
+import { roundAllTo, roundAllToSignificant, roundTo } from './rounding';
+import { retimeDocument, systemModelFromDocument, timingSettingsOf } from './system-from-document';
 
 /** The points of one curve, as stored or sent inline. */
 export interface CurvePoints {
@@ -76,14 +77,45 @@ export interface PredictAnswer {
   alignmentNote: string | null;
 }
 
+/** Which System sub a sub measurement stands for, and which main channel the mains measurement. */
+export interface PredictTarget {
+  channel?: string;
+  /** The System sub whose settings apply; "all" takes the first sub's (every sub playing together). */
+  subIndex: number | 'all';
+}
+
+/** The predict body for two curves with the System's current settings (the mains channel's trim, the chosen sub's gain, delay and polarity). */
+export function measuredRequestFromDocument(
+  doc: SystemDocument,
+  curves: { mains: PredictRequestInput['mains']['curve']; sub: PredictRequestInput['sub']['curve'] },
+  target: PredictTarget,
+  options: { smoothingFraction?: number } = {},
+): PredictRequestInput | null {
+  // The processor's delays come from the whole-system model (the one channel-settings function), so the
+  // measured curves get what the processor runs: distance alignment plus the mains and sub delays.
+  const model = systemModelFromDocument(doc, target.channel);
+  const k = target.subIndex === 'all' ? 0 : target.subIndex;
+  const sub = doc.subs[k];
+  const subSource = model?.subs[k];
+  if (!model || !sub || !subSource) return null;
+  return {
+    temperatureC: model.temperatureC,
+    crossoverHz: model.crossoverHz,
+    mainsHighpass: { ...model.mainsHighpass },
+    subLowpass: { ...model.subLowpass },
+    mains: { name: model.mains.name, curve: curves.mains, gainDb: model.mains.gainDb, delayMs: model.mains.delayMs, invert: false },
+    sub: { name: target.subIndex === 'all' ? 'All subs' : sub.name, curve: curves.sub, gainDb: sub.gainDb, delayMs: subSource.delayMs, invert: sub.invert },
+    smoothingFraction: options.smoothingFraction ?? 0,
+  };
+}
+
 const r3 = (v: number) => roundTo(v, 3);
 const r2 = (v: number) => roundTo(v, 2);
-const list = (a: ArrayLike<number>, round: (v: number) => number) => Array.from(a, round);
 
 export const PREDICT_MIN_HZ = 10;
 
 /** Predicts the blend at the measurement seat from two measured curves and the System's settings. */
-export function computeMeasuredPrediction(req: PredictRequest, curves: { mains: CurvePoints; sub: CurvePoints }): PredictAnswer {
+export function computeMeasured(req: PredictRequest, curves: { mains: CurvePoints; sub: CurvePoints }): PredictAnswer {
   const { mains, sub } = curves;
   const topHz = Math.max(1000, 4.5 * req.crossoverHz);
   const startHz = Math.max(PREDICT_MIN_HZ, mains.frequencyHz[0] as number, sub.frequencyHz[0] as number);
@@ -120,7 +152,7 @@ export function computeMeasuredPrediction(req: PredictRequest, curves: { mains: 
   const asMeasured = predictMeasuredBlend({ frequencyHz: grid, measured: [input(m, wire(mainsPath)), input(s, wire(subPathSpec))], temperatureC: req.temperatureC });
 
   const fraction = req.smoothingFraction;
-  const smooth = (db: Float64Array): number[] => list(fraction > 0 ? smoothFractionalOctave({ frequencyHz: grid, magnitudeDb: db, fraction }).magnitudeDb : db, r3);
+  const smooth = (db: Float64Array): number[] => roundAllTo(fraction > 0 ? smoothFractionalOctave({ frequencyHz: grid, magnitudeDb: db, fraction }).magnitudeDb : db, 3);
 
   let alignment: PredictAnswer['alignment'] = null;
   let alignmentNote: string | null = null;
@@ -137,11 +169,10 @@ export function computeMeasuredPrediction(req: PredictRequest, curves: { mains: 
       temperatureC: req.temperatureC,
       maxDelayMs: req.maxDelayMs,
     });
-    // Processor bookkeeping as on Timing: delays are "sub minus mains" settings, one side stays at 0.
+    // Processor bookkeeping as on Timing: delays are "sub minus mains" settings, the common delay taken out (one side 0).
     const offsetMs = req.sub.delayMs - req.mains.delayMs;
     const next = offsetMs + a.relativeDelayMs;
-    const subDelayMs = Math.max(0, next);
-    const mainsDelayMs = Math.max(0, -next);
+    const [mainsDelayMs, subDelayMs] = withoutCommonDelayMs([0, next]) as [number, number];
     const recommended = predictMeasuredBlend({
       frequencyHz: grid,
       measured: [input(m, { ...mainsPath, delayMs: mainsDelayMs }), input(s, { ...subPathSpec, delayMs: subDelayMs, invert: a.invertSub })],
@@ -168,9 +199,9 @@ export function computeMeasuredPrediction(req: PredictRequest, curves: { mains: 
       flatnessDb: r3(a.flatnessDb),
       timingWindowMs: [r3(offsetMs + a.windowMs[0]), r3(offsetMs + a.windowMs[1])],
       levelVersusDelay: {
-        subMinusMainsDelayMs: list(a.levelVersusDelay.delayMs, (d) => r3(offsetMs + d)),
-        normalDb: list(a.levelVersusDelay.normalDb, r3),
-        invertedDb: list(a.levelVersusDelay.invertedDb, r3),
+        subMinusMainsDelayMs: Array.from(a.levelVersusDelay.delayMs, (d) => r3(offsetMs + d)),
+        normalDb: roundAllTo(a.levelVersusDelay.normalDb, 3),
+        invertedDb: roundAllTo(a.levelVersusDelay.invertedDb, 3),
       },
       recommendedSum: { magnitudeDb: smooth(recommended.sum.magnitudeDb) },
     };
@@ -181,51 +212,19 @@ export function computeMeasuredPrediction(req: PredictRequest, curves: { mains: 
   const asIs = (c: typeof m, i: number, name: string): PredictTrace => ({
     name,
     magnitudeDb: smooth(c.magnitudeDb),
-    phaseDeg: list(c.phaseDeg ?? asMeasured.paths[i]!.phaseDeg, r2),
+    phaseDeg: roundAllTo(c.phaseDeg ?? asMeasured.paths[i]!.phaseDeg, 2),
     phaseEstimated: !c.phaseDeg,
   });
   return {
-    frequencyHz: list(grid, (f) => Number(f.toPrecision(6))),
+    frequencyHz: roundAllToSignificant(grid, 6),
     smoothingFraction: fraction,
     phaseEstimated: predicted.phaseEstimated,
     measured: [asIs(m, 0, req.mains.name), asIs(s, 1, req.sub.name)],
-    paths: predicted.paths.map((p) => ({ name: p.name, magnitudeDb: smooth(p.magnitudeDb), phaseDeg: list(p.phaseDeg, r2), phaseEstimated: p.phaseEstimated })),
-    predictedSum: { magnitudeDb: smooth(predicted.sum.magnitudeDb), phaseDeg: list(predicted.sum.phaseDeg, r2) },
-    measuredSum: { magnitudeDb: smooth(asMeasured.sum.magnitudeDb), phaseDeg: list(asMeasured.sum.phaseDeg, r2) },
+    paths: predicted.paths.map((p) => ({ name: p.name, magnitudeDb: smooth(p.magnitudeDb), phaseDeg: roundAllTo(p.phaseDeg, 2), phaseEstimated: p.phaseEstimated })),
+    predictedSum: { magnitudeDb: smooth(predicted.sum.magnitudeDb), phaseDeg: roundAllTo(predicted.sum.phaseDeg, 2) },
+    measuredSum: { magnitudeDb: smooth(asMeasured.sum.magnitudeDb), phaseDeg: roundAllTo(asMeasured.sum.phaseDeg, 2) },
     alignment,
     alignmentNote,
-  };
-}
-
-/** Which System sub a sub measurement stands for, and which main channel the mains measurement. */
-export interface PredictTarget {
-  channel?: string;
-  /** The System sub whose settings apply; "all" takes the first sub's (every sub playing together). */
-  subIndex: number | 'all';
-}
-
-/** The predict body for two curves with the System's current settings (the mains channel's trim, the chosen sub's gain, delay and polarity). */
-export function predictRequestFromDocument(
-  doc: SystemDocument,
-  curves: { mains: PredictRequestInput['mains']['curve']; sub: PredictRequestInput['sub']['curve'] },
-  target: PredictTarget,
-  options: { smoothingFraction?: number } = {},
-): PredictRequestInput | null {
-  // The processor's delays come from the whole-system model (the one channel-settings function), so the
-  // measured curves get what the processor runs: distance alignment plus the mains and sub delays.
-  const model = systemModelFromDocument(doc, target.channel);
-  const k = target.subIndex === 'all' ? 0 : target.subIndex;
-  const sub = doc.subs[k];
-  const subSource = model?.subs[k];
-  if (!model || !sub || !subSource) return null;
-  return {
-    temperatureC: model.temperatureC,
-    crossoverHz: model.crossoverHz,
-    mainsHighpass: { ...model.mainsHighpass },
-    subLowpass: { ...model.subLowpass },
-    mains: { name: model.mains.name, curve: curves.mains, gainDb: model.mains.gainDb, delayMs: model.mains.delayMs, invert: false },
-    sub: { name: target.subIndex === 'all' ? 'All subs' : sub.name, curve: curves.sub, gainDb: sub.gainDb, delayMs: subSource.delayMs, invert: sub.invert },
-    smoothingFraction: options.smoothingFraction ?? 0,
   };
 }
 
@@ -233,9 +232,9 @@ export function predictRequestFromDocument(
  * Writes the measured-pair recommendation into the document: the processor delays it states (the mains', the chosen
  * sub's) and the sub's polarity. Other subs keep their timing against the mains (they move with the mains delay);
  * with "all" every sub moves and flips together. Delays are written back through the one channel-settings bookkeeping
- * (applyTimingToDocument), so the processor runs exactly the advised settings.
+ * (retimeDocument), so the processor runs exactly the advised settings.
  */
-export function applyMeasuredRecommendation(
+export function applyMeasuredToDocument(
   doc: SystemDocument,
   subIndex: number | 'all',
   rec: { subDelayMs: number; mainsDelayMs: number; invert: boolean; flipPolarity: boolean },
@@ -254,5 +253,5 @@ export function applyMeasuredRecommendation(
         ? { delayMs: rec.subDelayMs, invert: rec.invert }
         : { delayMs: s.delayMs + mainsShift, invert: s.invert },
   );
-  return applyTimingToDocument(doc, before, { mainsDelayMs: rec.mainsDelayMs, subs });
+  return retimeDocument(doc, before, { mainsDelayMs: rec.mainsDelayMs, subs });
 }

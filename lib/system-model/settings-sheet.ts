@@ -1,13 +1,14 @@
 /**
- * The Settings sheet of a System (SPEC §5): the figures a processor needs, per channel and per sub,
- * and a short room-mode summary. Distances, delays, trims and sub gains are `systemChannelSettings` —
- * the one definition Layout, the exports and the API share, already rounded (0.01 m, 0.01 ms, 0.1 dB);
- * the room summary calls dsp/ (roomModes, schroederFrequencyHz). No mathematics of its own.
+ * Settings sheet: the figures a processor needs, per channel and per sub, and a short room-mode summary
+ * (`computeSettingsSheet`, computed from the document: no request and nothing written back), and its CSV export.
+ * Distances, delays, trims and sub gains are `systemChannelSettings` — the one definition Layout, the exports and the
+ * API share, already rounded (0.01 m, 0.01 ms, 0.1 dB); the room summary calls dsp/ (roomModes,
+ * schroederFrequencyHz). No mathematics of its own.
  */
 import { roomModes, schroederFrequencyHz, SETTING_RESOLUTION, type ModeKind } from '@/dsp';
 import type { Slope, SystemDocument } from '@/lib/validations/system';
 import { systemChannelSettings } from './channel-settings';
-import { mlpSeat, profileById } from './index';
+import { mlpSeat, profileById } from './geometry';
 
 /** Decimals each setting is rounded to (and shown and exported with): delay 2, trim and gain 1, distance 2. */
 export const SETTING_DECIMALS = { delayMs: 2, trimDb: 1, distanceM: 2 } as const satisfies Record<keyof typeof SETTING_RESOLUTION, number>;
@@ -81,7 +82,8 @@ export function slopeLabel(slope: Slope): string {
   return `${family} ${slope.order}${suffix} order (${6 * slope.order} dB/oct)`;
 }
 
-export function settingsSheet(doc: SystemDocument): SettingsSheet {
+/** The System's Settings sheet. */
+export function computeSettingsSheet(doc: SystemDocument): SettingsSheet {
   const bm = doc.bassManagement;
   const settings = systemChannelSettings(doc);
   const channels: SheetChannel[] = doc.speakers.map((s, i) => ({
@@ -143,7 +145,7 @@ const setting = (x: number, decimals: number) => new Setting(x.toFixed(decimals)
  * gains are the sheet's (systemChannelSettings), written with the decimals they were rounded to.
  */
 export function settingsSheetCsv(name: string, revision: number, doc: SystemDocument): string {
-  const sheet = settingsSheet(doc);
+  const sheet = computeSettingsSheet(doc);
   const d = SETTING_DECIMALS;
   const header = ['system', 'revision', 'kind', 'id', 'label', 'profile', 'distanceM', 'distanceSource', 'delayMs', 'trimDb', 'gainDb', 'polarity', 'crossoverHz', 'filter', 'slope', 'count'];
   const rows: (string | number | Setting)[][] = [

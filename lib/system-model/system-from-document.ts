@@ -1,12 +1,14 @@
 /**
- * The System document as dsp's whole-system model, and a changed model written back into the document. Every plot,
- * read-out, ranking and recommendation evaluates the model this file builds, so they all hear the same system: the
- * shown main channel and every sub, with the processor delays and levels of the one channel-settings function.
+ * The System document as dsp's whole-system model, and a change of timing written back into the document (shared by
+ * Timing, the Crossover sweep and Measured). Every plot, read-out, ranking and recommendation evaluates the model this
+ * file builds, so they all hear the same system: the shown main channel and every sub, with the processor delays and
+ * levels of the one channel-settings function.
  */
-import type { RolloffSpec, SystemModel, SystemSource } from '@/dsp';
+import { withoutCommonDelayMs, type RolloffSpec, type SystemModel, type SystemSource } from '@/dsp';
 import type { SpeakerProfile, Speaker, Sub, SystemDocument } from '@/lib/validations/system';
 import { systemChannelSettings } from './channel-settings';
 import { geometricDistanceM, mlpSeat, profileById } from './geometry';
+import { roundTo } from './rounding';
 
 /** The main channel a blend is shown for: the requested one, else L, else the first speaker. */
 export function blendMainSpeaker(doc: SystemDocument, channel?: string): Speaker | undefined {
@@ -85,11 +87,6 @@ export function systemModelFromDocument(doc: SystemDocument, channel?: string): 
   };
 }
 
-const hundredths = (v: number): number => {
-  const r = Math.round(v * 100) / 100;
-  return r === 0 ? 0 : r;
-};
-
 /** The processor delays of a change, as the model states them: the main channel's and each sub's, ms. */
 export interface TimingSettings {
   readonly mainsDelayMs: number;
@@ -97,20 +94,21 @@ export interface TimingSettings {
 }
 
 /**
- * Writes a change of timing into the document: each source's processor delay moves by (after − before) — the mains
- * delay for the main channels, each sub's own delay for the subs — and each sub takes its new polarity; then the delay
- * all share is taken out (the smallest is 0; a common delay changes no level). Delays move in whole hundredths of a
- * millisecond, as the channel settings round them, so the applied document runs exactly the settings advised.
+ * Writes a change of timing into the document, the one bookkeeping every Apply button uses: each source's processor
+ * delay moves by (after − before) — the mains delay for the main channels, each sub's own delay for the subs — and
+ * each sub takes its new polarity; then the delay all share is taken out (the smallest is 0; a common delay changes no
+ * level). Delays move in whole hundredths of a millisecond, as the channel settings round them, so the applied
+ * document runs exactly the settings advised. Nothing else in the document changes.
  */
-export function applyTimingToDocument(doc: SystemDocument, before: TimingSettings, after: TimingSettings): SystemDocument {
-  const mains = doc.bassManagement.mainsDelayMs + hundredths(after.mainsDelayMs - before.mainsDelayMs);
-  const subs = doc.subs.map((s, k) => s.delayMs + hundredths((after.subs[k]?.delayMs ?? 0) - (before.subs[k]?.delayMs ?? 0)));
-  const common = Math.min(mains, ...subs);
-  const clamp = (v: number) => Math.min(100, Math.max(0, hundredths(v - common)));
+export function retimeDocument(doc: SystemDocument, before: TimingSettings, after: TimingSettings): SystemDocument {
+  const hundredths = (v: number) => roundTo(v, 2);
+  const mainsMs = doc.bassManagement.mainsDelayMs + hundredths(after.mainsDelayMs - before.mainsDelayMs);
+  const subsMs = doc.subs.map((s, k) => s.delayMs + hundredths((after.subs[k]?.delayMs ?? 0) - (before.subs[k]?.delayMs ?? 0)));
+  const [mainsDelayMs, ...subDelaysMs] = withoutCommonDelayMs([mainsMs, ...subsMs]).map((v) => Math.min(100, Math.max(0, hundredths(v))));
   return {
     ...doc,
-    bassManagement: { ...doc.bassManagement, mainsDelayMs: clamp(mains) },
-    subs: doc.subs.map((s, k) => ({ ...s, delayMs: clamp(subs[k] as number), invert: after.subs[k]?.invert ?? s.invert })),
+    bassManagement: { ...doc.bassManagement, mainsDelayMs: mainsDelayMs as number },
+    subs: doc.subs.map((s, k) => ({ ...s, delayMs: subDelaysMs[k] as number, invert: after.subs[k]?.invert ?? s.invert })),
   };
 }
 

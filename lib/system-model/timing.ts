@@ -1,27 +1,17 @@
 /**
- * Timing: the compute behind POST /api/v1/timing, the document → request glue, and applying advice back to the
- * document. The request is the whole system (the shown main channel and every sub, with the processor delays of the
- * channel settings); the mathematics — arrival times, the one flatness measure, the search, the advice rules — is
- * dsp's. Every piece of advice states the settings it runs, and is made only when, run on the whole system, it is
- * at least 0.5 dB flatter and keeps the bass (dsp ADVICE_RULES).
+ * Timing: the System's request (`timingRequestFromDocument`), the compute behind POST /api/v1/timing (`computeTiming`)
+ * and a piece of advice written back (`applyTimingToDocument`). The request is the whole system (the shown main
+ * channel and every sub, with the processor delays of the channel settings); the mathematics — arrival times, the one
+ * flatness measure, the search, the advice rules — is dsp's. Every piece of advice states the settings it runs, and is
+ * made only when, run on the whole system, it is at least 0.5 dB flatter and keeps the bass (dsp ADVICE_RULES).
  */
-import {
-  arrivalTimeMs,
-  blendResponse,
-  groupTimingAdvice,
-  speedOfSoundMps,
-  subTimingAdvice,
-  systemPaths,
-  wrapDeg,
-  type RolloffChain,
-  type RolloffSpec,
-  type SystemModel,
-} from '@/dsp';
+import { arrivalTimeMs, blendResponse, groupTimingAdvice, speedOfSoundMps, subTimingAdvice, systemPaths, wrapDeg } from '@/dsp';
 import type { TimingRequest } from '@/lib/validations/compute-blend';
 import type { SystemDocument } from '@/lib/validations/system';
 import { adviceAnswer, assessmentAnswer, FLATNESS_TEXT, type AdviceAnswer, type AssessmentAnswer } from './advice-answer';
 import { roundTo } from './rounding';
-import { applyTimingToDocument, systemModelFromDocument, timingSettingsOf } from './system-from-document';
+import { retimeDocument, systemModelFromDocument, timingSettingsOf } from './system-from-document';
+import { systemModelFromRequest, systemRequestFromModel } from './system-request';
 
 export interface TimingArrival {
   name: string;
@@ -65,26 +55,19 @@ export interface TimingAnswer {
   group: AdviceAnswer | null;
 }
 
-const r3 = (v: number) => roundTo(v, 3);
-
-/** A roll-off chain as the request schema takes it (a plain array). */
-const asChain = (r: RolloffChain): RolloffSpec | RolloffSpec[] => (Array.isArray(r) ? [...r] : (r as RolloffSpec));
-
-/** The whole-system model a Timing (or Crossover sweep) request describes. */
-export function modelFromRequest(req: Pick<TimingRequest, 'temperatureC' | 'crossoverHz' | 'mainsHighpass' | 'subLowpass' | 'mains' | 'subs'>): SystemModel {
-  return {
-    temperatureC: req.temperatureC,
-    crossoverHz: req.crossoverHz,
-    mainsHighpass: req.mainsHighpass,
-    subLowpass: req.subLowpass,
-    mains: { name: req.mains.name, distanceM: req.mains.distanceM, delayMs: req.mains.delayMs, gainDb: req.mains.gainDb, invert: false, rolloff: req.mains.rolloff },
-    subs: req.subs.map((s) => ({ name: s.name, distanceM: s.distanceM, delayMs: s.delayMs, gainDb: s.gainDb, invert: s.invert, rolloff: s.rolloff })),
-  };
+/** The body of POST /api/v1/timing for the System's main channel (L by default) and every sub: the whole-system model. */
+export function timingRequestFromDocument(doc: SystemDocument, channel?: string): TimingRequest | null {
+  const model = systemModelFromDocument(doc, channel);
+  if (!model || model.subs.length === 0) return null;
+  return { ...systemRequestFromModel(model), maxDelayMs: 20, stepMs: 0.05 };
 }
 
+const r3 = (v: number) => roundTo(v, 3);
+
+/** The answer of POST /api/v1/timing: arrivals, the present flatness, each sub's advice and Timing window, the all-subs advice. */
 export function computeTiming(req: TimingRequest): TimingAnswer {
   const { temperatureC, crossoverHz } = req;
-  const model = modelFromRequest(req);
+  const model = systemModelFromRequest(req);
   const options = { maxShiftMs: req.maxDelayMs, stepMs: req.stepMs };
   const arrival = (name: string, distanceM: number, delayMs: number): TimingArrival => {
     const arrivalMs = arrivalTimeMs({ distanceM, temperatureC });
@@ -140,32 +123,9 @@ export function computeTiming(req: TimingRequest): TimingAnswer {
   };
 }
 
-/** The body of POST /api/v1/timing for the System's main channel (L by default) and every sub: the whole-system model. */
-export function timingRequestFromDocument(doc: SystemDocument, channel?: string): TimingRequest | null {
-  const model = systemModelFromDocument(doc, channel);
-  if (!model || model.subs.length === 0) return null;
-  return {
-    temperatureC: model.temperatureC,
-    crossoverHz: model.crossoverHz,
-    mainsHighpass: { ...model.mainsHighpass },
-    subLowpass: { ...model.subLowpass },
-    mains: { name: model.mains.name, distanceM: roundTo(model.mains.distanceM, 4), delayMs: model.mains.delayMs, gainDb: model.mains.gainDb, rolloff: asChain(model.mains.rolloff ?? { kind: 'none' }) as TimingRequest['mains']['rolloff'] },
-    subs: model.subs.map((s) => ({
-      name: s.name,
-      distanceM: roundTo(s.distanceM, 4),
-      delayMs: s.delayMs,
-      gainDb: Math.max(-60, Math.min(60, s.gainDb)),
-      invert: s.invert,
-      rolloff: asChain(s.rolloff ?? { kind: 'none' }),
-    })),
-    maxDelayMs: 20,
-    stepMs: 0.05,
-  };
-}
-
 /** Writes a piece of Timing advice (a sub's or the group's) into the document: exactly the settings it states. */
-export function applyTimingAdvice(doc: SystemDocument, advice: Pick<AdviceAnswer, 'set'>, channel?: string): SystemDocument {
+export function applyTimingToDocument(doc: SystemDocument, advice: Pick<AdviceAnswer, 'set'>, channel?: string): SystemDocument {
   const model = systemModelFromDocument(doc, channel);
   if (!model) return doc;
-  return applyTimingToDocument(doc, timingSettingsOf(model), { mainsDelayMs: advice.set.mainsDelayMs, subs: advice.set.subs });
+  return retimeDocument(doc, timingSettingsOf(model), { mainsDelayMs: advice.set.mainsDelayMs, subs: advice.set.subs });
 }

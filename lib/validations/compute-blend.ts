@@ -1,8 +1,10 @@
 import { z } from 'zod';
-import { COMPUTE_LIMITS, gridSchema, num, temperatureCSchema } from './compute-common';
+import { num } from './common';
+import { COMPUTE_LIMITS, gridSchema, temperatureCSchema } from './compute-common';
+import { filterFamilySchema, refineSlopeOrder } from './slope';
 
 /**
- * Request bodies of POST /api/v1/blend (SPEC §6), /api/v1/crossover-sweep and /api/v1/timing.
+ * Request bodies of POST /api/v1/blend, /api/v1/crossover-sweep and /api/v1/timing (fields on the API page /docs/api).
  * Every number finite and in range; a bad field is answered 400 with its path
  * (e.g. `paths.1.filter.order`). Unknown keys are refused so a misspelt field never passes
  * silently.
@@ -11,16 +13,8 @@ import { COMPUTE_LIMITS, gridSchema, num, temperatureCSchema } from './compute-c
 const hz = (min: number = COMPUTE_LIMITS.minHz, max: number = COMPUTE_LIMITS.maxHz) => num(min, max, 'Hz');
 const wholeOrder = num(1, 8).int('must be a whole number');
 
-export const filterFamilySchema = z.enum(['butterworth', 'linkwitz-riley'], { error: "must be 'butterworth' or 'linkwitz-riley'" });
-
-function checkOrder(s: { family: string; order: number }, ctx: z.RefinementCtx) {
-  if (s.family === 'linkwitz-riley' && ![2, 4, 8].includes(s.order)) {
-    ctx.addIssue({ code: 'custom', path: ['order'], message: 'Linkwitz–Riley order must be 2, 4 or 8' });
-  }
-}
-
 /** A crossover slope without its corner: Butterworth 1–8, Linkwitz–Riley 2, 4, 8. */
-export const filterShapeSchema = z.strictObject({ family: filterFamilySchema, order: wholeOrder }).superRefine(checkOrder);
+export const filterShapeSchema = z.strictObject({ family: filterFamilySchema, order: wholeOrder }).superRefine((s, ctx) => refineSlopeOrder(s, ctx));
 
 /** A crossover filter of one path. With response 'none' the path is a straight wire (family, order, cornerHz ignored but still checked). */
 export const filterSpecSchema = z
@@ -30,7 +24,7 @@ export const filterSpecSchema = z
     response: z.enum(['lowpass', 'highpass', 'none'], { error: "must be 'lowpass', 'highpass' or 'none'" }),
     cornerHz: hz(),
   })
-  .superRefine(checkOrder);
+  .superRefine((s, ctx) => refineSlopeOrder(s, ctx));
 
 const q = num(0.2, 10);
 
@@ -89,7 +83,7 @@ export const blendPathSchema = z.strictObject({
   distanceM: distanceMSchema.optional(),
 });
 
-/** POST /api/v1/blend (SPEC §6), plus an optional crossoverHz for the metrics. */
+/** POST /api/v1/blend, plus an optional crossoverHz for the metrics. */
 export const blendRequestSchema = z
   .strictObject({
     temperatureC: temperatureCSchema,
@@ -105,7 +99,7 @@ export const blendRequestSchema = z
 
 export type BlendRequest = z.infer<typeof blendRequestSchema>;
 
-/** The product's default candidates: 40–150 Hz in 5 Hz steps (SPEC §4). */
+/** The product's default Crossover sweep candidates: 40–150 Hz in 5 Hz steps. */
 export const DEFAULT_SWEEP_CANDIDATES_HZ: readonly number[] = Array.from({ length: 23 }, (_, i) => 40 + 5 * i);
 
 const pairingSchema = z.strictObject({ mainsFilter: filterShapeSchema, subFilter: filterShapeSchema });
@@ -173,4 +167,3 @@ export type TimingRequest = z.infer<typeof timingRequestSchema>;
 /** What a client may send (before defaults and roll-off chains are filled in). */
 export type BlendRequestInput = z.input<typeof blendRequestSchema>;
 export type TimingRequestInput = z.input<typeof timingRequestSchema>;
-export type CrossoverSweepRequestInput = z.input<typeof crossoverSweepRequestSchema>;

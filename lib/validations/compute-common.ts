@@ -1,20 +1,30 @@
 import { z } from 'zod';
+import { refineInsideRoom, type Position, type RoomBox } from '@/lib/system-model/room-bounds';
+import { num } from './common';
 
-/** Limits that keep the compute routes safe (issue 4): answered 400 or 413 with the field named. */
+/** Limits that keep the compute routes safe: answered 400 with the field named. */
 export const COMPUTE_LIMITS = {
   maxPaths: 16,
   maxGridPoints: 4000,
   minHz: 10,
   maxHz: 24000,
-  bodyBytes: 256 * 1024,
 } as const;
 
-/** A finite number within [min, max], with a message that names the field's range and unit. */
-export const num = (min: number, max: number, unit = '') =>
-  z
-    .number({ error: (i) => (i.input === undefined ? 'is required' : 'must be a finite number') })
-    .min(min, `must be at least ${min}${unit ? ` ${unit}` : ''}`)
-    .max(max, `must be at most ${max}${unit ? ` ${unit}` : ''}`);
+/** Limits of the room compute routes (room modes, room response, layout, headroom), answered 400 with the field named. */
+export const ROOM_LIMITS = {
+  /** Highest mode frequency POST /room-modes enumerates, Hz. */
+  maxModeHz: 500,
+  /** Most modes one answer (or one modal sum) may hold. */
+  maxModes: 5000,
+  maxSeats: 16,
+  maxSubs: 8,
+  maxResponseHz: 500,
+  maxResponsePoints: 1000,
+  maxMapCells: 100,
+  maxQuarterWave: 32,
+  maxSpeakers: 32,
+  maxHeadroomRows: 32,
+} as const;
 
 export const temperatureCSchema = num(-20, 50, '°C');
 
@@ -32,6 +42,33 @@ export const gridSchema = z
     }
   });
 
-export const pointMSchema = z.object({ xM: num(0, 100, 'm'), yM: num(0, 100, 'm'), zM: num(0, 30, 'm') });
+/** A room's inside dimensions in a compute request (m), as fields to spread into its object. */
+export const roomDimensionsShape = { lengthM: num(1, 100, 'm'), widthM: num(1, 100, 'm'), heightM: num(1, 30, 'm') };
 
-export const roomDimensionsSchema = z.object({ lengthM: num(1, 100, 'm'), widthM: num(1, 100, 'm'), heightM: num(1, 30, 'm') });
+/** A position in a compute request (m; origin at the front-left floor corner), as fields to spread into its object. */
+export const positionShape = { xM: num(0, 100, 'm'), yM: num(0, 100, 'm'), zM: num(0, 30, 'm') };
+
+/** The name of a seat, speaker, sub or headroom row in a room compute request. */
+export const roomItemNameSchema = z.string({ error: 'must be text' }).trim().min(1, 'is required').max(60, 'must be at most 60 characters');
+
+/** What a room compute request places in the room: a listener, seats and subs by name, speakers by channel. */
+interface PlacedItems {
+  listener?: Position;
+  seats?: readonly (Position & { name: string })[];
+  speakers?: readonly (Position & { channel: string })[];
+  subs?: readonly (Position & { name: string })[];
+}
+
+/**
+ * The "inside the room" rule of the room compute requests: an issue at `seats.0.xM` (and so on) for every coordinate of
+ * the listener, a seat, a speaker or a sub beyond a wall of `room`, in that order. The System document applies the same
+ * rule to its own positions (`systemDocumentSchema`).
+ */
+export function refineRequestInsideRoom(ctx: z.RefinementCtx, room: RoomBox, items: PlacedItems): void {
+  refineInsideRoom(ctx, room, [
+    ...(items.listener ? [{ label: 'The listening position', position: items.listener, path: ['listener'] }] : []),
+    ...(items.seats ?? []).map((s, i) => ({ label: s.name, position: s, path: ['seats', i] })),
+    ...(items.speakers ?? []).map((s, i) => ({ label: s.channel, position: s, path: ['speakers', i] })),
+    ...(items.subs ?? []).map((s, i) => ({ label: s.name, position: s, path: ['subs', i] })),
+  ]);
+}

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { num, uuidField } from './common';
 import { systemDocumentSchema } from './system';
 
 /** Panels a Step can open on (the System editor's panels that a class is shown). */
@@ -41,19 +42,16 @@ export function filterChoiceLabel(choice: FilterChoice): string {
   return `${family === 'linkwitz-riley' ? 'LR' : 'BW'}${order}`;
 }
 
-const num = (label: string, min: number, max: number, unit: string) =>
-  z.number({ error: `${label} must be a number (${unit})` }).min(min, `${label} must be at least ${min} ${unit}`).max(max, `${label} must be at most ${max} ${unit}`);
-
-const durationS = num('durationS', 1, 60, 's').default(6);
+const durationS = num(1, 60, 's', 'durationS').default(6);
 
 /** One parameter animated between two values over `durationS` seconds. */
 export const sweepSchema = z.discriminatedUnion('parameter', [
-  z.object({ parameter: z.literal('subDelayMs'), from: num('from', 0, 100, 'ms'), to: num('to', 0, 100, 'ms'), durationS }),
+  z.object({ parameter: z.literal('subDelayMs'), from: num(0, 100, 'ms', 'from'), to: num(0, 100, 'ms', 'to'), durationS }),
   z.object({ parameter: z.literal('subPolarity'), from: z.enum(['normal', 'inverted']), to: z.enum(['normal', 'inverted']), durationS }),
-  z.object({ parameter: z.literal('crossoverHz'), from: num('from', 20, 300, 'Hz'), to: num('to', 20, 300, 'Hz'), durationS }),
+  z.object({ parameter: z.literal('crossoverHz'), from: num(20, 300, 'Hz', 'from'), to: num(20, 300, 'Hz', 'to'), durationS }),
   z.object({ parameter: z.literal('filter'), from: z.enum(FILTER_CHOICES), to: z.enum(FILTER_CHOICES), durationS }),
-  z.object({ parameter: z.literal('subDistanceM'), from: num('from', 0.1, 100, 'm'), to: num('to', 0.1, 100, 'm'), durationS }),
-  z.object({ parameter: z.literal('mainsGainDb'), from: num('from', -30, 30, 'dB'), to: num('to', -30, 30, 'dB'), durationS }),
+  z.object({ parameter: z.literal('subDistanceM'), from: num(0.1, 100, 'm', 'from'), to: num(0.1, 100, 'm', 'to'), durationS }),
+  z.object({ parameter: z.literal('mainsGainDb'), from: num(-30, 30, 'dB', 'from'), to: num(-30, 30, 'dB', 'to'), durationS }),
 ]);
 export type Sweep = z.infer<typeof sweepSchema>;
 export type SweepParameter = Sweep['parameter'];
@@ -75,7 +73,7 @@ export const stepFieldsSchema = z.object({
 /** A new Step: the snapshot as a document, or copied from a saved System (`fromSystemId`). */
 export const stepCreateSchema = z
   .object({
-    step: stepFieldsSchema.extend({ document: systemDocumentSchema.optional(), fromSystemId: z.string().uuid('fromSystemId must be a System id').optional() }),
+    step: stepFieldsSchema.extend({ document: systemDocumentSchema.optional(), fromSystemId: uuidField('fromSystemId must be a System id').optional() }),
     /** Optional: when given, a stale revision is a 409. Appending without it is always safe. */
     revision: revisionSchema.optional(),
     /** 1-based place to insert at (default: the end). */
@@ -94,21 +92,19 @@ export const stepUpdateSchema = z.object({
 
 export const stepReorderSchema = z.object({
   revision: revisionSchema,
-  stepIds: z.array(z.string().uuid('stepIds must be Step ids')).min(1, 'stepIds must list every Step').max(200),
+  stepIds: z.array(uuidField('stepIds must be Step ids')).min(1, 'stepIds must list every Step').max(200),
 });
 
 export const lessonCreateSchema = z.object({
   title: lessonTitleSchema,
   description: descriptionSchema.default(''),
-  workspaceId: z.string().uuid('workspaceId must be a workspace id').optional(),
+  workspaceId: uuidField('workspaceId must be a workspace id').optional(),
 });
 
 export const lessonUpdateSchema = z.object({ title: lessonTitleSchema, description: descriptionSchema.default(''), revision: revisionSchema });
 
-export const lessonListQuerySchema = z.object({ workspaceId: z.string().uuid('workspaceId must be a workspace id').optional() });
+export const lessonListQuerySchema = z.object({ workspaceId: uuidField('workspaceId must be a workspace id').optional() });
 export const revisionQuerySchema = z.object({ revision: z.coerce.number({ error: 'revision must be a whole number' }).int().min(1, 'revision must be the revision you last read') });
-export const shareTokenQuerySchema = z.object({ token: z.string({ error: 'token is required' }).regex(/^[A-Za-z0-9_-]{16,64}$/, 'token is not a share link token') });
 
-export type StepFields = z.infer<typeof stepFieldsSchema>;
 export type StepCreateInput = z.infer<typeof stepCreateSchema>;
 export type StepUpdateInput = z.infer<typeof stepUpdateSchema>;

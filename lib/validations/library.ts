@@ -1,7 +1,8 @@
 import { z } from 'zod';
+import { uuidField } from './common';
 import { systemDocumentSchema, systemNameSchema } from './system';
 
-export const systemCreateSchema = z.object({ name: systemNameSchema, document: systemDocumentSchema, workspaceId: z.string().uuid('workspaceId must be a workspace id').optional() });
+export const systemCreateSchema = z.object({ name: systemNameSchema, document: systemDocumentSchema, workspaceId: uuidField('workspaceId must be a workspace id').optional() });
 export const systemUpdateSchema = z.object({
   name: systemNameSchema,
   document: systemDocumentSchema,
@@ -14,12 +15,12 @@ export const systemListQuerySchema = z.object({
   sort: z.enum(['name', '-name', 'updated', '-updated']).default('-updated'),
   page: z.coerce.number().int().min(1).max(10000).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(20),
-  workspaceId: z.string().uuid().optional(),
+  workspaceId: uuidField().optional(),
   deleted: z.enum(['0', '1']).default('0'),
 });
-export const copySchema = z.object({ workspaceId: z.string().uuid('workspaceId must be a workspace id'), name: systemNameSchema.optional() });
+export const copySchema = z.object({ workspaceId: uuidField('workspaceId must be a workspace id'), name: systemNameSchema.optional() });
 export type SystemListQuery = z.infer<typeof systemListQuerySchema>;
-export const systemDuplicateSchema = z.object({ name: systemNameSchema.optional(), workspaceId: z.string().uuid('workspaceId must be a workspace id').optional() });
+export const systemDuplicateSchema = z.object({ name: systemNameSchema.optional(), workspaceId: uuidField('workspaceId must be a workspace id').optional() });
 /** Restoring an old revision saves it as a new one; `revision` is the current revision the caller last read. */
 export const revisionRestoreSchema = z.object({ revision: z.number({ error: 'revision must be the revision you last read' }).int().min(1) });
 export const revisionParamSchema = z.coerce.number({ error: 'revision must be a whole number' }).int().min(1).max(1_000_000);

@@ -1,14 +1,13 @@
 import { z } from 'zod';
-import { filterFamilySchema } from './compute-blend';
-import { num, temperatureCSchema } from './compute-common';
+import { num, uuidField } from './common';
+import { temperatureCSchema } from './compute-common';
+import { filterFamilySchema, refineSlopeOrder } from './slope';
 import { MAX_ABS_MAGNITUDE_DB, MAX_ABS_PHASE_DEG, MIN_MEASUREMENT_POINTS } from '@/lib/measurements/parse-measurement';
 
 /**
- * Measurements (issue 6): the text fields of an upload, the list query, and the body of
+ * Measurements: the text fields of an upload, the list query, and the body of
  * POST /api/v1/measured/predict. The file itself is checked by lib/measurements/parse-measurement.
  */
-
-const uuid = (what: string) => z.string().uuid(`${what} must be an id`);
 
 /** `mains`, `sub`, `sum` or another channel label (L, C, SL…). */
 export const measurementRoleSchema = z
@@ -18,16 +17,16 @@ export const measurementRoleSchema = z
 
 export const measurementUploadFieldsSchema = z.strictObject({
   name: z.string().trim().min(1, 'name must not be empty').max(120, 'name must be at most 120 characters').optional(),
-  systemId: uuid('systemId').optional(),
-  workspaceId: uuid('workspaceId').optional(),
+  systemId: uuidField('systemId must be an id').optional(),
+  workspaceId: uuidField('workspaceId must be an id').optional(),
   seat: z.string().trim().min(1, 'seat must not be empty').max(60, 'seat must be at most 60 characters').optional(),
   role: measurementRoleSchema.optional(),
 });
 export type MeasurementUploadFields = z.infer<typeof measurementUploadFieldsSchema>;
 
 export const measurementListQuerySchema = z.object({
-  workspaceId: uuid('workspaceId').optional(),
-  systemId: uuid('systemId').optional(),
+  workspaceId: uuidField('workspaceId must be an id').optional(),
+  systemId: uuidField('systemId must be an id').optional(),
 });
 export type MeasurementListQuery = z.infer<typeof measurementListQuerySchema>;
 
@@ -53,7 +52,7 @@ export const inlineCurveSchema = z
   });
 
 /** A measured curve: a stored measurement the caller may read, or the points themselves. */
-export const measuredCurveSchema = z.union([z.strictObject({ measurementId: uuid('measurementId') }), inlineCurveSchema], {
+export const measuredCurveSchema = z.union([z.strictObject({ measurementId: uuidField('measurementId must be an id') }), inlineCurveSchema], {
   error: 'must be { measurementId } or { frequencyHz, magnitudeDb, phaseDeg? }',
 });
 
@@ -76,9 +75,8 @@ export const predictRequestSchema = z.strictObject({
   pointsPerOctave: num(6, 96).int('must be a whole number').default(48),
   maxDelayMs: num(1, 50, 'ms').default(20),
 }).superRefine((r, ctx) => {
-  for (const [key, slope] of [['mainsHighpass', r.mainsHighpass], ['subLowpass', r.subLowpass]] as const) {
-    if (slope.family === 'linkwitz-riley' && ![2, 4, 8].includes(slope.order)) ctx.addIssue({ code: 'custom', path: [key, 'order'], message: 'Linkwitz–Riley order must be 2, 4 or 8' });
-  }
+  refineSlopeOrder(r.mainsHighpass, ctx, ['mainsHighpass', 'order']);
+  refineSlopeOrder(r.subLowpass, ctx, ['subLowpass', 'order']);
 });
 export type PredictRequest = z.infer<typeof predictRequestSchema>;
 export type PredictRequestInput = z.input<typeof predictRequestSchema>;

@@ -1,62 +1,55 @@
 import { z } from 'zod';
 import { documentPositions, refineInsideRoom } from '@/lib/system-model/room-bounds';
+import { num, uuidField } from './common';
+import { filterFamilySchema, refineSlopeOrder } from './slope';
 
 /**
- * The System document (SPEC §3): one room, its seats, speakers, subs, bass management and the
+ * The System document (see DEVELOPERS.md, "The System document"): one room, its seats, speakers, subs, bass management and the
  * speaker profiles they use. SI units inside, unit in every field name. Coordinates in metres with
  * the origin at the front-left floor corner: x across the room (0…widthM), y into the room from the
  * front wall (0…lengthM), z up from the floor (0…heightM).
  */
 export const SYSTEM_SCHEMA_VERSION = 1;
 
-const finite = (label: string, min: number, max: number) =>
-  z.number({ error: `${label} must be a number` }).min(min, `${label} must be at least ${min}`).max(max, `${label} must be at most ${max}`);
-
 export const idSchema = z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, 'id must be 1–40 letters, digits, - or _');
-
-export const filterFamilySchema = z.enum(['butterworth', 'linkwitz-riley']);
 
 /** A crossover slope: Butterworth orders 1–8, Linkwitz–Riley 2, 4 or 8. */
 export const slopeSchema = z
   .object({ family: filterFamilySchema, order: z.number().int('order must be a whole number').min(1).max(8) })
-  .superRefine((s, ctx) => {
-    if (s.family === 'linkwitz-riley' && ![2, 4, 8].includes(s.order)) {
-      ctx.addIssue({ code: 'custom', path: ['order'], message: 'Linkwitz–Riley order must be 2, 4 or 8' });
-    }
-  });
+  .superRefine((s, ctx) => refineSlopeOrder(s, ctx));
 
 /** A speaker's natural low-frequency roll-off (Small 1972; Thiele 1971). */
 export const lowRolloffSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('none') }),
-  z.object({ kind: z.literal('sealed'), cornerHz: finite('cornerHz', 5, 500), q: finite('q', 0.3, 3) }),
-  z.object({ kind: z.literal('vented'), cornerHz: finite('cornerHz', 5, 500) }),
+  z.object({ kind: z.literal('sealed'), cornerHz: num(5, 500, '', 'cornerHz'), q: num(0.3, 3, '', 'q') }),
+  z.object({ kind: z.literal('vented'), cornerHz: num(5, 500, '', 'cornerHz') }),
 ]);
 
 /** A subwoofer's natural upper roll-off (second order), or none. */
 export const highRolloffSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('none') }),
-  z.object({ kind: z.literal('lowpass'), cornerHz: finite('cornerHz', 30, 2000), q: finite('q', 0.3, 3) }),
+  z.object({ kind: z.literal('lowpass'), cornerHz: num(30, 2000, '', 'cornerHz'), q: num(0.3, 3, '', 'q') }),
 ]);
 
 export const speakerProfileSchema = z.object({
   id: idSchema,
   /** Set when the profile was copied from a Library profile. */
-  libraryId: z.string().uuid().optional(),
+  libraryId: uuidField().optional(),
   name: z.string().trim().min(1, 'name is required').max(120),
   kind: z.enum(['main', 'sub']),
   lowRolloff: lowRolloffSchema,
   highRolloff: highRolloffSchema,
-  sensitivityDb: finite('sensitivityDb', 60, 130),
+  sensitivityDb: num(60, 130, '', 'sensitivityDb'),
   sensitivityReference: z.enum(['1W', '2.83V']),
-  ratedPowerW: finite('ratedPowerW', 1, 20000),
-  impedanceOhm: finite('impedanceOhm', 1, 64),
+  ratedPowerW: num(1, 20000, '', 'ratedPowerW'),
+  impedanceOhm: num(1, 64, '', 'impedanceOhm'),
   notes: z.string().max(2000).default(''),
 });
 
 const point = {
-  xM: finite('xM', 0, 100),
-  yM: finite('yM', 0, 100),
-  zM: finite('zM', 0, 30),
+  xM: num(0, 100, '', 'xM'),
+  yM: num(0, 100, '', 'yM'),
+  zM: num(0, 30, '', 'zM'),
 };
 
 export const seatSchema = z.object({ id: idSchema, name: z.string().trim().min(1).max(60), ...point });
@@ -64,7 +57,7 @@ export const seatSchema = z.object({ id: idSchema, name: z.string().trim().min(1
 export const aimSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('mlp') }),
   z.object({ kind: z.literal('seat'), seatId: idSchema }),
-  z.object({ kind: z.literal('point'), xM: finite('xM', -100, 200), yM: finite('yM', -100, 200) }),
+  z.object({ kind: z.literal('point'), xM: num(-100, 200, '', 'xM'), yM: num(-100, 200, '', 'yM') }),
 ]);
 
 export const CHANNEL_LABELS = [
@@ -79,9 +72,9 @@ export const speakerSchema = z.object({
   aim: aimSchema,
   profileId: idSchema,
   /** When set, used instead of the geometric distance to the MLP (a measured distance). */
-  distanceOverrideM: finite('distanceOverrideM', 0.1, 100).nullable(),
-  trimDb: finite('trimDb', -30, 30),
-  amplifierPowerW: finite('amplifierPowerW', 1, 20000),
+  distanceOverrideM: num(0.1, 100, '', 'distanceOverrideM').nullable(),
+  trimDb: num(-30, 30, '', 'trimDb'),
+  amplifierPowerW: num(1, 20000, '', 'amplifierPowerW'),
 });
 
 export const subSchema = z.object({
@@ -89,31 +82,31 @@ export const subSchema = z.object({
   name: z.string().trim().min(1).max(60),
   ...point,
   profileId: idSchema,
-  delayMs: finite('delayMs', 0, 100),
-  gainDb: finite('gainDb', -30, 30),
+  delayMs: num(0, 100, '', 'delayMs'),
+  gainDb: num(-30, 30, '', 'gainDb'),
   invert: z.boolean(),
-  distanceOverrideM: finite('distanceOverrideM', 0.1, 100).nullable(),
-  amplifierPowerW: finite('amplifierPowerW', 1, 20000),
+  distanceOverrideM: num(0.1, 100, '', 'distanceOverrideM').nullable(),
+  amplifierPowerW: num(1, 20000, '', 'amplifierPowerW'),
   count: z.number().int().min(1).max(8).default(1),
 });
 
 export const bassManagementSchema = z.object({
-  crossoverHz: finite('crossoverHz', 20, 300),
+  crossoverHz: num(20, 300, '', 'crossoverHz'),
   mainsHighpass: slopeSchema,
   subLowpass: slopeSchema,
-  lfeLowpassHz: finite('lfeLowpassHz', 40, 250),
+  lfeLowpassHz: num(40, 250, '', 'lfeLowpassHz'),
   /** +10 dB in-band is the cinema convention for LFE. */
-  lfeGainDb: finite('lfeGainDb', 0, 15),
+  lfeGainDb: num(0, 15, '', 'lfeGainDb'),
   /** Delay added to the mains (only positive delays: either the sub or the mains is delayed). */
-  mainsDelayMs: finite('mainsDelayMs', 0, 100),
+  mainsDelayMs: num(0, 100, '', 'mainsDelayMs'),
 });
 
 export const roomSchema = z.object({
-  lengthM: finite('lengthM', 1.5, 60),
-  widthM: finite('widthM', 1.5, 60),
-  heightM: finite('heightM', 1.8, 20),
-  rt60S: finite('rt60S', 0.1, 5),
-  temperatureC: finite('temperatureC', -20, 50),
+  lengthM: num(1.5, 60, '', 'lengthM'),
+  widthM: num(1.5, 60, '', 'widthM'),
+  heightM: num(1.8, 20, '', 'heightM'),
+  rt60S: num(0.1, 5, '', 'rt60S'),
+  temperatureC: num(-20, 50, '', 'temperatureC'),
 });
 
 export const LAYOUT_NAMES = ['2.0', '2.1', '3.1', '5.1', '7.1', '5.1.2', '5.1.4', '7.1.2', '7.1.4', '9.1.6'] as const;
@@ -165,7 +158,7 @@ export const systemDocumentDraftSchema = z
     });
   });
 
-/** The System document (SPEC §3): the draft's rules, and every seat, speaker and sub inside the room. */
+/** The System document: the draft's rules, and every seat, speaker and sub inside the room. */
 export const systemDocumentSchema = systemDocumentDraftSchema.superRefine((doc, ctx) => refineInsideRoom(ctx, doc.room, documentPositions(doc)));
 
 export type SystemDocument = z.infer<typeof systemDocumentSchema>;
@@ -174,8 +167,6 @@ export type Seat = z.infer<typeof seatSchema>;
 export type Speaker = z.infer<typeof speakerSchema>;
 export type Sub = z.infer<typeof subSchema>;
 export type Slope = z.infer<typeof slopeSchema>;
-export type LowRolloff = z.infer<typeof lowRolloffSchema>;
-export type HighRolloff = z.infer<typeof highRolloffSchema>;
 export type LayoutName = (typeof LAYOUT_NAMES)[number];
 
 export const systemNameSchema = z.string().trim().min(1, 'name is required').max(200, 'name must be at most 200 characters');

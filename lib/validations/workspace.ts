@@ -6,4 +6,3 @@ export const workspaceNameSchema = z.string().trim().min(1, 'name is required').
 export const workspaceCreateSchema = z.object({ name: workspaceNameSchema });
 export const invitationCreateSchema = z.object({ email: emailSchema, role: workspaceRoleSchema });
 export const memberUpdateSchema = z.object({ role: workspaceRoleSchema });
-export const uuidSchema = z.string().uuid('not a valid id');

@@ -22,7 +22,7 @@ const path = (response: 'highpass' | 'lowpass' | 'none', family: 'butterworth' |
 
 const body = (paths: Json[], extra: Json = {}) => ({ temperatureC: 20, grid: { startHz: 10, stopHz: 1000, pointsPerOctave: 48 }, paths, ...extra });
 
-/** SPEC §6's own example request. */
+/** The API page's own example request (lib/api-docs/compute-blend.ts). */
 const specExample = body([
   path('highpass', 'linkwitz-riley', 4),
   { name: 'sub', filter: { family: 'butterworth', order: 2, response: 'lowpass', cornerHz: 80 }, gainDb: 0, delayMs: 2.5, invert: true, distanceM: 3.4 },
@@ -36,7 +36,7 @@ function issuePaths(b: Json): string[] {
 }
 
 describe('POST /api/v1/blend', () => {
-  it('answers SPEC §6 example with the contract fields', async () => {
+  it('answers the API page example with the contract fields', async () => {
     const { status, body: b } = await post(specExample);
     expect(status).toBe(200);
     expect(b.frequencyHz).toHaveLength(319); // 10 Hz up to (not reaching) 1 kHz at 48 per octave, startHz included
@@ -59,7 +59,7 @@ describe('POST /api/v1/blend', () => {
     assertInDelta(b.metrics.pathLevelsDb, [-6.021, -3.01], 0.002, 'pathLevelsDb');
   });
 
-  it('metrics carry the one flatness measure (largest deviation from the sum at 4·fc over fc/2 … 2·fc), checked from the formulas on SPEC §6', async () => {
+  it('metrics carry the one flatness measure (largest deviation from the sum at 4·fc over fc/2 … 2·fc), checked from the formulas on the API page', async () => {
     const { body: b } = await post(specExample);
     const m = b.metrics;
     expect(m.referenceHz).toBe(320);
@@ -88,7 +88,7 @@ describe('POST /api/v1/blend', () => {
     expect(m.minus3DbHz).toBeNull();
   });
 
-  it('LR4 high-pass + low-pass, same polarity, sums flat (an all-pass) at every frequency (Linkwitz 1976; REFERENCES.md)', async () => {
+  it('LR4 high-pass + low-pass, same polarity, sums flat (an all-pass) at every frequency (published: Linkwitz 1976)', async () => {
     const { status, body: b } = await post(body([path('highpass', 'linkwitz-riley', 4), path('lowpass', 'linkwitz-riley', 4)], { grid: { startHz: 10, stopHz: 20000, pointsPerOctave: 48 } }));
     expect(status).toBe(200);
     // The answer is rounded to 0.001 dB (so this reads exactly 0); the dsp's own tests hold it to 1e-9 dB.
@@ -99,7 +99,7 @@ describe('POST /api/v1/blend', () => {
     expect(b.metrics.phaseDifferenceDeg).toBeCloseTo(0, 1);
   });
 
-  it('LR4 sum group delay follows the all-pass 2√2/(2π·fc)·(1+x²)/(1+x⁴): 5.627 ms limit at fc = 80 Hz (Linkwitz 1976; REFERENCES.md)', async () => {
+  it('LR4 sum group delay follows the all-pass 2√2/(2π·fc)·(1+x²)/(1+x⁴): 5.627 ms limit at fc = 80 Hz (published: Linkwitz 1976)', async () => {
     const { body: b } = await post(body([path('highpass', 'linkwitz-riley', 4), path('lowpass', 'linkwitz-riley', 4)]));
     const f0 = b.frequencyHz[0] as number;
     const x = f0 / 80;
@@ -108,7 +108,7 @@ describe('POST /api/v1/blend', () => {
     assertInDelta(b.sum.groupDelayMs[0], (limitMs * (1 + x * x)) / (1 + x ** 4), 0.0015, 'group delay at 10 Hz (answer rounded to 1 µs)');
   });
 
-  it('BW2 with one path inverted reads +3.01 dB at the corner; same polarity a deep null (REFERENCES.md, Linkwitz 1976)', async () => {
+  it('BW2 with one path inverted reads +3.01 dB at the corner; same polarity a deep null (published: Linkwitz 1976)', async () => {
     const inverted = await post(body([path('highpass', 'butterworth', 2), path('lowpass', 'butterworth', 2, { invert: true })], { crossoverHz: 80 }));
     expect(inverted.status).toBe(200);
     assertInDelta(inverted.body.metrics.sumLevelDb, 3.01, 0.005, 'BW2 inverted at fc');
@@ -125,7 +125,7 @@ describe('POST /api/v1/blend', () => {
     assertInDelta(same.body.metrics.deepestDipHz, 80, 0.01, 'null at the corner');
   });
 
-  it('BW3 sums flat with either polarity; LR2 flat only inverted (REFERENCES.md)', async () => {
+  it('BW3 sums flat with either polarity; LR2 flat only inverted (published: Linkwitz 1976)', async () => {
     for (const invert of [false, true]) {
       const { body: b } = await post(body([path('highpass', 'butterworth', 3), path('lowpass', 'butterworth', 3, { invert })]));
       for (const v of b.sum.magnitudeDb) expect(Math.abs(v)).toBeLessThanOrEqual(1e-3);
@@ -136,7 +136,7 @@ describe('POST /api/v1/blend', () => {
     expect(lr2Same.body.metrics.sumLevelDb).toBeLessThan(-60);
   });
 
-  it('distanceM adds the air path: 1 m at 20 °C is 2.914 ms, 83.9° at 80 Hz, with no change of level (Kinsler et al. 2000; REFERENCES.md)', async () => {
+  it('distanceM adds the air path: 1 m at 20 °C is 2.914 ms, 83.9° at 80 Hz, with no change of level (published: Kinsler et al. 2000)', async () => {
     const wire = { name: 'wire', filter: { family: 'butterworth', order: 2, response: 'none', cornerHz: 80 }, gainDb: 0, delayMs: 0, invert: false, distanceM: 1 };
     const { body: b } = await post({ temperatureC: 20, grid: { startHz: 80, stopHz: 160, pointsPerOctave: 12 }, paths: [wire] });
     assertInDelta(b.paths[0].phaseDeg[0], -83.9, 0.05, 'phase at 80 Hz');

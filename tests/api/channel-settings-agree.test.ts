@@ -6,7 +6,7 @@
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { systemChannelSettings } from '@/lib/system-model/channel-settings';
-import { layoutRequestFromDocument } from '@/lib/system-model/layout-request';
+import { layoutRequestFromDocument } from '@/lib/system-model/layout';
 import { cellText, channelSettingsCases, csvRecords, signedText } from '../helpers/channel-settings';
 import { Client } from '../helpers/http';
 import { makeTeam, type Team, createTeamSystem as createSystem } from '../helpers/team';

@@ -147,7 +147,7 @@ describe('POST /api/v1/crossover-sweep', () => {
     expect(at(150).mainsLowBassDb).toBeGreaterThan(at(40).mainsLowBassDb);
   });
 
-  it('LR4 + LR4 without roll-offs at equal distances is flat at every candidate: nothing is worth a change, the present row is first (Linkwitz 1976; REFERENCES.md)', async () => {
+  it('LR4 + LR4 without roll-offs at equal distances is flat at every candidate: nothing is worth a change, the present row is first (published: Linkwitz 1976)', async () => {
     const { body: b } = await post(base({ candidatesHz: [50, 80, 120] }));
     expect(b.rows).toHaveLength(4);
     expectRanked(b);
@@ -201,7 +201,7 @@ describe('POST /api/v1/crossover-sweep', () => {
     expect(b.rows[0].present).toBe(true);
     expect(b.rows.slice(0, 4).every((r: Json) => r.mainsFilter.family === 'linkwitz-riley')).toBe(true);
     const bw2Rows = b.rows.filter((r: Json) => r.mainsFilter.family === 'butterworth');
-    // BW2 needs one side inverted or a delay (REFERENCES.md: same polarity → null at the corner); the flip alone gives
+    // BW2 needs one side inverted or a delay (published: Linkwitz 1976: same polarity → null at the corner); the flip alone gives
     // (1 + x²)²/(1 + x⁴) → 3.01 dB at fc against 10·log10(289/257) at 4·fc: 2.50 dB, so no row is worse than that.
     const flipOnlyDb = 10 * Math.log10(2) - 10 * Math.log10(289 / 257);
     for (const r of bw2Rows) {

@@ -20,7 +20,7 @@ function expectShape(actual: unknown, excerpt: unknown, path = ''): void {
 describe('the API page cannot drift from the code: every compute example runs', () => {
   const computeRoutes = API_DOCS.filter((r) => r.auth === 'none');
 
-  it('documents the two fixed compute contracts of SPEC §6', () => {
+  it('documents the two fixed compute contracts (blend and room modes)', () => {
     const paths = computeRoutes.map((r) => `${r.method} ${r.path}`);
     expect(paths).toContain('POST /api/v1/blend');
     expect(paths).toContain('POST /api/v1/room-modes');

@@ -6,7 +6,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createUserWithWorkspace } from '@/lib/data/users';
 import { addMember, createWorkspace } from '@/lib/data/workspaces';
-import { getLessonByShareToken } from '@/lib/data/lessons';
+import { getLessonByShareToken } from '@/lib/data/share-links';
 import { juniperLaneDocument, lindenStreetDocument } from '@/lib/demo/systems';
 import { Client, signedInClient, uniqueEmail } from '../helpers/http';
 import { testDb } from '../helpers/db';

@@ -1,13 +1,13 @@
 /**
  * Positions outside the room are refused where a room and positions arrive together — POST /api/v1/layout,
  * POST /api/v1/room-response and a saved System — with 400, the field's path and a message that names the item, the
- * coordinate and the wall (SPEC §6 error shape). And signing in only ever returns to this site.
+ * coordinate and the wall (the API's one error shape, README). And signing in only ever returns to this site.
  */
 import { describe, expect, it } from 'vitest';
 import { POST as layoutPost } from '@/app/api/v1/layout/route';
 import { POST as roomResponsePost } from '@/app/api/v1/room-response/route';
 import { newSystemDocument } from '@/lib/demo/systems';
-import { withRoom } from '@/lib/system-model/room-edit';
+import { applyRoomToDocument } from '@/lib/system-model/room-modes';
 import { baseUrl } from '../helpers/env';
 import { Client, signedInClient } from '../helpers/http';
 
@@ -24,7 +24,7 @@ const listener = { xM: 2.45, yM: 3.7, zM: 1.1 };
 const L = { channel: 'L', xM: 1.2, yM: 1.5349, zM: 1.1 };
 const R = { channel: 'R', xM: 3.7, yM: 1.5349, zM: 1.1 };
 
-/** The SPEC §6 error shape with exactly these issues. */
+/** The API's one error shape with exactly these issues. */
 function expectRefused(res: { status: number; body: Json }, issues: { path: string; message: string }[]) {
   expect(res.status).toBe(400);
   expect(res.body.error.code).toBe('invalid');
@@ -80,7 +80,7 @@ describe('POST /api/v1/room-response — seats and subs outside the room', () =>
 describe('a System with a position outside its room cannot be saved (HTTP, running app)', () => {
   it('POST /api/v1/systems: 400 with document.… paths and the messages; nothing is created', async () => {
     const c = await signedInClient('demo@seamline.test');
-    const doc = withRoom(newSystemDocument(), { lengthM: 1.5 }).doc;
+    const doc = applyRoomToDocument(newSystemDocument(), { lengthM: 1.5 }).doc;
     const res = await c.post('/api/v1/systems', { name: 'Outside the room (invented, never saved)', document: doc });
     expect(res.status).toBe(400);
     const issues = res.body.error.issues as { path: string; message: string }[];

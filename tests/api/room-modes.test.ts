@@ -13,7 +13,7 @@ async function call(body: unknown, headers: Record<string, string> = { 'content-
 const JUNIPER = { lengthM: 6.4, widthM: 4.9, heightM: 2.7, maxHz: 200, temperatureC: 20, rt60S: 0.4 };
 const pathsOf = (body: Json): string[] => body.error.issues.map((i: { path: string }) => i.path);
 
-describe('POST /api/v1/room-modes — SPEC §6 contract', () => {
+describe('POST /api/v1/room-modes — the documented contract', () => {
   it('6.4 × 4.9 × 2.7 m at 20 °C: first modes 26.81, 35.02, 44.11, 53.63, 63.56, 64.05, 68.98, 70.04 Hz with their indices (published: Rayleigh 1896; Everest & Pohlmann, Master Handbook of Acoustics)', async () => {
     const { status, body } = await call(JUNIPER);
     expect(status).toBe(200);
@@ -35,7 +35,7 @@ describe('POST /api/v1/room-modes — SPEC §6 contract', () => {
     });
   });
 
-  it('holds 106 modes at or below 200 Hz, sorted by frequency, (0,0,0) excluded; kinds add up (REFERENCES.md, Rayleigh formula)', async () => {
+  it('holds 106 modes at or below 200 Hz, sorted by frequency, (0,0,0) excluded; kinds add up (published: Rayleigh 1896, the mode formula)', async () => {
     const { body } = await call(JUNIPER);
     expect(body.modes).toHaveLength(106);
     for (let i = 1; i < body.modes.length; i++) expect(body.modes[i].frequencyHz).toBeGreaterThanOrEqual(body.modes[i - 1].frequencyHz);

@@ -106,7 +106,7 @@ describe('POST /api/v1/room-response — bad input answered with the field named
     expect(pathsOf((await call({ ...BODY, map: { indices: [1.5, 0, 0], zM: 1.1 } })).body)).toEqual(['map.indices.0']);
     expect(pathsOf((await call({ ...BODY, map: { indices: [1, 0, 0], zM: 3.5 } })).body)).toEqual(['map.zM']);
   });
-  it('a wrong type (invert as a string) and 9 subs are refused by path; 415 and 413 as SPEC §6', async () => {
+  it('a wrong type (invert as a string) and 9 subs are refused by path; 415 and 413 as the API page documents', async () => {
     expect(pathsOf((await call({ ...BODY, subs: [{ ...subs[0], invert: 'yes' }] })).body)).toEqual(['subs.0.invert']);
     expect(pathsOf((await call({ ...BODY, subs: Array.from({ length: 9 }, () => subs[0]) })).body)).toEqual(['subs']);
     expect((await call(JSON.stringify(BODY), { 'content-type': 'text/plain' })).status).toBe(415);

@@ -44,7 +44,7 @@ const pairSum =
   (fHz: number): C =>
     add(filter(fHz / 80, 'highpass'), scale(mul(filter(fHz / 80, 'lowpass'), late(fHz, subLateMs)), invertSub ? -subGain : subGain));
 
-/** 1 m of air at 20 °C, ms: 2.914 (REFERENCES.md; Kinsler et al.). */
+/** 1 m of air at 20 °C, ms: 2.914 (published: Kinsler et al. 2000). */
 const ONE_METRE_MS = 1000 / speedMps(20);
 
 describe('POST /api/v1/timing', () => {
@@ -71,7 +71,7 @@ describe('POST /api/v1/timing', () => {
     const { body: b } = await post(base());
     const s = b.subs[0];
     assertInDelta(s.phaseDifferenceDeg, 0, 0.1, 'phase difference');
-    // LR4 low-pass + high-pass in phase is an all-pass: flat at every frequency (published: Linkwitz 1976; REFERENCES.md).
+    // LR4 low-pass + high-pass in phase is an all-pass: flat at every frequency (published: Linkwitz 1976).
     expect(b.present.flatnessDb).toBeLessThan(0.01);
     expect(b.present.minus3DbHz).toBeNull(); // flat down to DC: no −3 dB point above 5 Hz
     const a = s.advice;
@@ -95,7 +95,7 @@ describe('POST /api/v1/timing', () => {
     assertInDelta(c.subMinusMainsDelayMs[0], -20, 1e-6, 'scan start');
     assertInDelta(c.subMinusMainsDelayMs.at(-1), 20, 1e-6, 'scan end');
     assertInDelta(c.subMinusMainsDelayMs[1] - c.subMinusMainsDelayMs[0], 0.1, 1e-6, 'step');
-    // At zero delay: in phase, flat; inverted, a null at the corner (LR4, Linkwitz 1976; REFERENCES.md).
+    // At zero delay: in phase, flat; inverted, a null at the corner (LR4, published: Linkwitz 1976).
     const zero = c.subMinusMainsDelayMs.findIndex((d: number) => Math.abs(d) < 1e-6);
     assertInDelta(c.normalDb[zero], 0, 0.01, 'normal at 0 ms');
     expect(c.invertedDb[zero]).toBeGreaterThan(40);
@@ -107,7 +107,7 @@ describe('POST /api/v1/timing', () => {
     }
   });
 
-  it('a sub 1 m farther arrives 2.914 ms late, 83.9° behind at 80 Hz (REFERENCES.md, Kinsler et al.)', async () => {
+  it('a sub 1 m farther arrives 2.914 ms late, 83.9° behind at 80 Hz (published: Kinsler et al. 2000)', async () => {
     const { body: b } = await post(base({ subs: [{ name: 'Sub', distanceM: 4.4 }] }));
     const s = b.subs[0];
     assertInDelta(s.leadMs, -2.914, 0.002, 'lead');
@@ -166,12 +166,12 @@ describe('POST /api/v1/timing', () => {
     assertInDelta(b.subs[0].flatnessVersusDelay.subMinusMainsDelayMs[0], -20 - first.set.mainsDelayMs, 1e-6, 'axis start');
   });
 
-  it("counts the filters' own phase: BW2 low-pass and high-pass are 180° apart at the corner, so the advice flips the sub (REFERENCES.md)", async () => {
+  it("counts the filters' own phase: BW2 low-pass and high-pass are 180° apart at the corner, so the advice flips the sub (published: Linkwitz 1976)", async () => {
     const { body: b } = await post(base({ mainsHighpass: BW2, subLowpass: BW2 }));
     const s = b.subs[0];
     assertInDelta(Math.abs(s.phaseDifferenceDeg), 180, 0.2, 'phase difference');
     assertInDelta(Math.abs(s.filterPhaseDeg), 180, 0.2, "filters' phase");
-    // BW2, same polarity: a null at the corner (REFERENCES.md).
+    // BW2, same polarity: a null at the corner (published: Linkwitz 1976).
     expect(b.present.flatnessDb).toBeGreaterThan(60);
     // BW2 with one path inverted: |H|² = (1 + x²)² / (1 + x⁴), +3.01 dB at the corner against 289/257 at 4·fc, so the
     // flip alone reads 3.010 − 0.510 = 2.50 dB (Butterworth 1930; Linkwitz 1976).
@@ -196,7 +196,7 @@ describe('POST /api/v1/timing', () => {
     const s = b.subs[0];
     expect(s.invert).toBe(true);
     assertInDelta(Math.abs(s.phaseDifferenceDeg), 180, 0.1, 'phase difference');
-    expect(b.present.flatnessDb).toBeGreaterThan(40); // LR4 inverted: a null at the corner (REFERENCES.md)
+    expect(b.present.flatnessDb).toBeGreaterThan(40); // LR4 inverted: a null at the corner (published: Linkwitz 1976)
     const c = s.flatnessVersusDelay;
     const zero = c.subMinusMainsDelayMs.findIndex((d: number) => Math.abs(d) < 1e-6);
     assertInDelta(c.normalDb[zero], 0, 0.01, 'not inverted at 0 ms');

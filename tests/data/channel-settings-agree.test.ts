@@ -10,10 +10,9 @@ import { describe, expect, it } from 'vitest';
 import { POST } from '@/app/api/v1/layout/route';
 import { SettingsSheet } from '@/components/sheet/settings-sheet';
 import { systemChannelSettings } from '@/lib/system-model/channel-settings';
-import { computeLayout } from '@/lib/system-model/layout-compute';
-import { layoutRequestFromDocument } from '@/lib/system-model/layout-request';
-import { settingsSheet, settingsSheetCsv } from '@/lib/system-model/settings-sheet';
-import { layoutRequestSchema } from '@/lib/validations/compute-room';
+import { computeLayout, layoutRequestFromDocument } from '@/lib/system-model/layout';
+import { computeSettingsSheet, settingsSheetCsv } from '@/lib/system-model/settings-sheet';
+import { layoutRequestSchema } from '@/lib/validations/compute-layout';
 import { cellText, channelSettingsCases, csvRecords, signedText } from '../helpers/channel-settings';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any -- answers are checked field by field
@@ -45,8 +44,8 @@ describe('channel settings: Layout, the Settings sheet, its CSV and the API agre
     describe(label, () => {
       const cs = systemChannelSettings(doc);
 
-      it('settingsSheet carries systemChannelSettings', () => {
-        const sheet = settingsSheet(doc);
+      it('computeSettingsSheet carries systemChannelSettings', () => {
+        const sheet = computeSettingsSheet(doc);
         expect(sheet.channels.map((c) => ({ distanceM: c.distanceM, delayMs: c.delayMs, trimDb: c.trimDb }))).toEqual(cs.mains);
         expect(sheet.subs.map((s) => ({ distanceM: s.distanceM, delayMs: s.delayMs, gainDb: s.gainDb }))).toEqual(cs.subs);
         expect(sheet.channels.map((c) => c.offsetDb)).toEqual(doc.speakers.map((s) => s.trimDb));
@@ -102,7 +101,7 @@ describe('channel settings: Layout, the Settings sheet, its CSV and the API agre
       });
 
       it('the sub-to-mains timing the client receives is the one Layout shows', () => {
-        const sheet = settingsSheet(doc);
+        const sheet = computeSettingsSheet(doc);
         const layout = computeLayout(layoutRequestSchema.parse(layoutRequestFromDocument(doc)));
         for (let i = 0; i < sheet.channels.length; i++) {
           for (let j = 0; j < sheet.subs.length; j++) {

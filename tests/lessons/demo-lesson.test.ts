@@ -1,18 +1,18 @@
 /**
  * The demo Lesson teaches what it says, computed by dsp/ through the same glue the Presenter view
- * uses (REFERENCES.md: LR4 sums flat, inverted → null; BW2 inverted → +3.01 dB, same polarity →
+ * uses (published, Linkwitz 1976: LR4 sums flat, inverted → null; BW2 inverted → +3.01 dB, same polarity →
  * null; 1 m at 20 °C = 2.914 ms = 83.9° at 80 Hz).
  */
 import { describe, expect, it } from 'vitest';
 import { demoLesson } from '@/lib/demo/lessons';
-import { lessonFrame } from '@/lib/system-model/lesson-frame';
-import { applySweepValue, sweepValueAt } from '@/lib/system-model/lesson-sweep';
+import { computeLessonFrame } from '@/lib/system-model/lesson-frame';
+import { applyLessonSweepToDocument, sweepValueAt } from '@/lib/system-model/lesson-sweep';
 import { systemDocumentSchema } from '@/lib/validations/system';
 import { sweepSchema } from '@/lib/validations/lesson';
 
 const steps = demoLesson().steps;
-const metrics = (i: number) => lessonFrame(steps[i]!.document)!.metrics!;
-const flatness = (i: number) => lessonFrame(steps[i]!.document)!.assessment!.flatnessDb;
+const metrics = (i: number) => computeLessonFrame(steps[i]!.document)!.metrics!;
+const flatness = (i: number) => computeLessonFrame(steps[i]!.document)!.assessment!.flatnessDb;
 
 describe('demo Lesson "Why the sub and mains cancel"', () => {
   it('has at least five valid Steps', () => {
@@ -41,7 +41,7 @@ describe('demo Lesson "Why the sub and mains cancel"', () => {
   it('the crossover sweep runs 60 → 120 Hz and changes the sum', () => {
     const s = steps[6]!;
     expect(s.sweep).toMatchObject({ parameter: 'crossoverHz', from: 60, to: 120 });
-    const at = (p: number) => lessonFrame(applySweepValue(s.document, s.sweep!, sweepValueAt(s.sweep!, p)))!;
+    const at = (p: number) => computeLessonFrame(applyLessonSweepToDocument(s.document, s.sweep!, sweepValueAt(s.sweep!, p)))!;
     expect(at(0).crossoverHz).toBeCloseTo(60, 6);
     expect(at(1).crossoverHz).toBeCloseTo(120, 6);
     expect(at(0.5).crossoverHz).toBeCloseTo(Math.sqrt(60 * 120), 6);

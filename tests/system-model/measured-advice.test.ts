@@ -1,14 +1,14 @@
 /**
  * Measured's advice keeps the same rules as Timing's: a change is made only when it is at least 0.5 dB flatter
- * (common practice, REFERENCES.md), and applied to the document it gives exactly the flatness it promised on the
+ * (common practice; dsp/system/advice-rules.ts), and applied to the document it gives exactly the flatness it promised on the
  * measured pair. The "measurements" are invented: each speaker's own response at the seat (its natural roll-off and
  * its air path, no processor filter), computed by blendResponse with the filter switched off.
  */
 import { describe, expect, it } from 'vitest';
 import { blendResponse, logFrequencyGridHz, type PathSpec } from '@/dsp';
 import { juniperLaneDocument } from '@/lib/demo/systems';
-import { systemModelFromDocument } from '@/lib/system-model';
-import { applyMeasuredRecommendation, computeMeasuredPrediction, predictRequestFromDocument } from '@/lib/system-model/measured';
+import { applyMeasuredToDocument, computeMeasured, measuredRequestFromDocument } from '@/lib/system-model/measured';
+import { systemModelFromDocument } from '@/lib/system-model/system-from-document';
 import { predictRequestSchema } from '@/lib/validations/measurement';
 import type { SystemDocument } from '@/lib/validations/system';
 
@@ -25,8 +25,8 @@ function measuredCurves(doc: SystemDocument): { mains: Curve; sub: Curve } {
 }
 
 function predict(doc: SystemDocument, curves: { mains: Curve; sub: Curve }) {
-  const body = predictRequestFromDocument(doc, { mains: curves.mains, sub: curves.sub }, { subIndex: 0 })!;
-  return computeMeasuredPrediction(predictRequestSchema.parse(body), curves);
+  const body = measuredRequestFromDocument(doc, { mains: curves.mains, sub: curves.sub }, { subIndex: 0 })!;
+  return computeMeasured(predictRequestSchema.parse(body), curves);
 }
 
 describe('Measured: advice on the measured pair', () => {
@@ -37,7 +37,7 @@ describe('Measured: advice on the measured pair', () => {
     const before = predict(doc, curves).alignment!;
     expect(before.keep).toBe(false);
     expect(before.flatnessBeforeDb - before.flatnessDb).toBeGreaterThanOrEqual(0.5);
-    const applied = applyMeasuredRecommendation(doc, 0, before);
+    const applied = applyMeasuredToDocument(doc, 0, before);
     const after = predict(applied, curves).alignment!;
     // The applied System's present setting is the advised one: its flatness is the promised flatness.
     expect(after.flatnessBeforeDb).toBeCloseTo(before.flatnessDb, 1);
@@ -56,7 +56,7 @@ describe('Measured: advice on the measured pair', () => {
 
   it('the processor delays sent are the channel settings (the Settings sheet’s), not the document’s own fields', () => {
     const doc = juniperLaneDocument();
-    const body = predictRequestFromDocument(doc, measuredCurves(doc), { subIndex: 0 })!;
+    const body = measuredRequestFromDocument(doc, measuredCurves(doc), { subIndex: 0 })!;
     const model = systemModelFromDocument(doc)!;
     expect(body.mains.delayMs).toBe(model.mains.delayMs);
     expect(body.mains.delayMs).toBeGreaterThan(0); // L is nearer than the subs: it waits for them

@@ -6,8 +6,8 @@ import { describe, expect, it } from 'vitest';
 import { decodeDocument, editorPath, encodeDocument, keepPendingSystem, MAX_RETURN_URL_CHARS, signInToSaveHref, takePendingSystem } from '@/lib/client/url-state';
 import { newSystemDocument } from '@/lib/demo/systems';
 import { outsideForMlpGeometry, positionsOutsideRoom, refineInsideRoom } from '@/lib/system-model/room-bounds';
-import { withRoom } from '@/lib/system-model/room-edit';
-import { roomResponseRequestFromDocument } from '@/lib/system-model/room-request';
+import { applyRoomToDocument } from '@/lib/system-model/room-modes';
+import { roomResponseRequestFromDocument } from '@/lib/system-model/room-response';
 import { safeReturnPath } from '@/lib/return-path';
 import { systemDocumentDraftSchema, systemDocumentSchema, type SystemDocument } from '@/lib/validations/system';
 
@@ -64,16 +64,16 @@ describe('positionsOutsideRoom', () => {
   });
 });
 
-describe('withRoom: changing the room never moves anything', () => {
+describe('applyRoomToDocument: changing the room never moves anything', () => {
   it('6.4 → 1.5 → 6.4 m leaves every seat, speaker and sub where it was (the MLP stays at y = 3.7 m)', () => {
     const start = newSystemDocument();
-    const shrunk = withRoom(start, { lengthM: 1.5 });
+    const shrunk = applyRoomToDocument(start, { lengthM: 1.5 });
     expect(shrunk.doc.room.lengthM).toBe(1.5);
     expect(shrunk.doc.seats).toEqual(start.seats);
     expect(shrunk.doc.speakers).toEqual(start.speakers);
     expect(shrunk.doc.subs).toEqual(start.subs);
     expect(shrunk.outside.map((o) => o.path)).toContain('seats.1.yM');
-    const back = withRoom(shrunk.doc, { lengthM: 6.4 });
+    const back = applyRoomToDocument(shrunk.doc, { lengthM: 6.4 });
     expect(back.doc).toEqual(start);
     expect(back.outside).toEqual([]);
   });
@@ -94,14 +94,14 @@ describe('the System schema and the editor’s draft reading', () => {
   });
 
   it('a link whose room was made smaller than its seats opens that same System, not a fresh one', () => {
-    const doc = withRoom(newSystemDocument(), { lengthM: 1.5 }).doc;
+    const doc = applyRoomToDocument(newSystemDocument(), { lengthM: 1.5 }).doc;
     const { doc: opened, problem } = decodeDocument(encodeDocument(doc));
     expect(problem).toBeNull();
     expect(opened).toEqual(doc);
   });
 
   it('the seat-response request is not built from seats or subs outside the room; an outside L gets no front-wall notch', () => {
-    const shrunk = withRoom(newSystemDocument(), { lengthM: 1.5 }).doc;
+    const shrunk = applyRoomToDocument(newSystemDocument(), { lengthM: 1.5 }).doc;
     expect(positionsOutsideRoom(shrunk).some((o) => o.path.startsWith('seats.'))).toBe(true);
     const lOut = withL(newSystemDocument(), { yM: 7 });
     const body = roomResponseRequestFromDocument(lOut);
@@ -111,7 +111,7 @@ describe('the System schema and the editor’s draft reading', () => {
 });
 
 describe('Sign in to save: the anonymous System comes back whole', () => {
-  const state = { doc: withRoom({ ...newSystemDocument(), bassManagement: { ...newSystemDocument().bassManagement, crossoverHz: 110 } }, { lengthM: 7.2 }).doc, name: 'Attic cinema (invented)', panel: 'modes' };
+  const state = { doc: applyRoomToDocument({ ...newSystemDocument(), bassManagement: { ...newSystemDocument().bassManagement, crossoverHz: 110 } }, { lengthM: 7.2 }).doc, name: 'Attic cinema (invented)', panel: 'modes' };
 
   it('a short document travels in the callbackUrl, whole, name and panel included, and passes the same-origin check', () => {
     const { href, inLink } = signInToSaveHref(state);

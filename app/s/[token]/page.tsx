@@ -7,8 +7,7 @@ import { SheetToolbar } from '@/components/sheet/sheet-toolbar';
 import { Wordmark } from '@/components/ui/mark';
 import { getCaller } from '@/lib/auth';
 import { SharedLesson } from '@/components/lessons/shared-lesson';
-import { getLessonByShareToken } from '@/lib/data/lessons';
-import { getSharedSystem } from '@/lib/data/share-links';
+import { getLessonByShareToken, getSharedSystem } from '@/lib/data/share-links';
 import { listWorkspaces } from '@/lib/data/workspaces';
 
 export const dynamic = 'force-dynamic';

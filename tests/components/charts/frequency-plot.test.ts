@@ -45,7 +45,25 @@ describe('FrequencyPlot', () => {
   it('places ticks on a log scale: 10→100 spans the same width as 100→1k', () => {
     const ticks = xTickPositions(render());
     const px = new Map(ticks.map((t) => [t.value, t.px]));
+    expect([...px.keys()]).toEqual(expect.arrayContaining([10, 100, 1000]));
     expect(px.get(100)! - px.get(10)!).toBeCloseTo(px.get(1000)! - px.get(100)!, 6);
+  });
+
+  it('labels a 20 Hz–2 kHz axis at 20, 50, 100 … 2k, the decades equally apart', () => {
+    const ticks = xTickPositions(render({ minHz: 20, maxHz: 2000 }));
+    expect(ticks.map((t) => t.value)).toEqual([20, 50, 100, 200, 500, 1000, 2000]);
+    expect(render({ minHz: 20, maxHz: 2000 })).toMatch(/data-x-tick="1000"[^>]*>1k<\/text>/);
+    const px = new Map(ticks.map((t) => [t.value, t.px]));
+    expect(px.get(20)).toBeCloseTo(0, 6);
+    // 20 Hz → 200 Hz is one decade of two: half the width.
+    expect(px.get(200)! * 2).toBeCloseTo(px.get(2000)!, 6);
+    expect(px.get(1000)! - px.get(100)!).toBeCloseTo(px.get(200)! - px.get(20)!, 6);
+  });
+
+  it('keeps only the decade labels 100 and 1k on a narrow 20 Hz–2 kHz plot', () => {
+    const ticks = xTickPositions(render({ minHz: 20, maxHz: 2000, widthPx: 160 }));
+    expect(ticks.map((t) => t.value)).toEqual([100, 1000]);
+    expect(attrNumbers(render({ minHz: 20, maxHz: 2000, widthPx: 160 }), 'data-minor-tick')).toEqual(expect.arrayContaining([20, 50, 200, 500, 2000]));
   });
 
   it('extends to 20k and clamps maxHz above 20 kHz', () => {
@@ -73,6 +91,8 @@ describe('FrequencyPlot', () => {
     const html = render();
     const values = attrNumbers(html, 'data-y-tick');
     expect(values.length).toBeGreaterThanOrEqual(3);
+    // The traces span −20…19.6 dB; padded by 5 % and rounded out to ±25, one tick per 36 px of 400 px is a step of 5.
+    expect(values).toEqual([-25, -20, -15, -10, -5, 0, 5, 10, 15, 20, 25]);
     expectStrictlyIncreasing(values);
     const ys = [...html.matchAll(/data-y-tick="[^"]*" x="[^"]*" y="([^"]*)"/g)].map((m) => Number(m[1]));
     expectStrictlyIncreasing(ys.map((y) => -y));

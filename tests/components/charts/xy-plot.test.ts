@@ -31,6 +31,8 @@ function render(props: Partial<XYPlotProps> = {}): string {
 describe('XYPlot', () => {
   it('has linear x ticks from 0 to 10 ms, evenly spaced', () => {
     const ticks = xTickPositions(render());
+    // 600 px leave room for one tick about every 60 px: d3's 1-2-5 steps give one per millisecond.
+    expect(ticks.map((t) => t.value)).toEqual([0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10]);
     expect(ticks[0]!.value).toBe(0);
     expect(ticks.at(-1)!.value).toBe(10);
     const gaps = ticks.slice(1).map((t, i) => t.px - ticks[i]!.px);
@@ -73,6 +75,9 @@ describe('XYPlot', () => {
   });
 
   it('y ticks increase', () => {
-    expectStrictlyIncreasing(attrNumbers(render(), 'data-y-tick'));
+    // The traces span −12…0 dB; padded by 5 % and rounded out to −13…1, about one tick per 36 px of 300 px is a step of 2.
+    const ticks = attrNumbers(render(), 'data-y-tick');
+    expect(ticks).toEqual([-12, -10, -8, -6, -4, -2, 0]);
+    expectStrictlyIncreasing(ticks);
   });
 });

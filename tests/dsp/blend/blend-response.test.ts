@@ -12,7 +12,7 @@ const pair = (family: FilterFamily, order: number, invertSub: boolean, cornerHz 
 const at = (paths: PathSpec[], fHz: number) => blendResponse({ temperatureC: 20, frequencyHz: [fHz], paths });
 const maxAbs = (a: Float64Array) => a.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
 
-describe('blendResponse — crossover sums (REFERENCES.md; published: Linkwitz 1976, Self 2011)', () => {
+describe('blendResponse — crossover sums (published: Linkwitz 1976, Self 2011)', () => {
   it('LR4 same polarity sums flat within 1e-9 dB; inverted is a deep null at the corner', () => {
     expect(maxAbs(blendResponse({ temperatureC: 20, frequencyHz: grid, paths: pair('linkwitz-riley', 4, false) }).sum.magnitudeDb)).toBeLessThan(1e-9);
     expect(at(pair('linkwitz-riley', 4, true), 80).sum.magnitudeDb[0]).toBeLessThan(-100);

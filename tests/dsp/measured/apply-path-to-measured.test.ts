@@ -17,5 +17,17 @@ describe('applyPathToMeasured', () => {
     const m = filterResponse({ filter: { family: 'butterworth', order: 2, response: 'highpass', cornerHz: 30 }, frequencyHz: grid });
     const r = applyPathToMeasured({ frequencyHz: grid, magnitudeDb: m.magnitudeDb, path: { ...sub, filter: { ...sub.filter, response: 'none' } }, temperatureC: 20 });
     expect(r.phaseEstimated).toBe(true);
+    // The estimate is the minimum phase of a BW2 high-pass, its own analytic phase 180° − atan2(√2·x, 1 − x²), x = f/30
+    // (published: Butterworth 1930; minimum phase per Oppenheim & Schafer), plus the path's 180° and −360·f·3 ms:
+    // within 3° away from the grid's ends (as minimum-phase.test.ts allows).
+    let worst = 0;
+    grid.forEach((f, i) => {
+      if (f < 20 || f > 500) return;
+      const x = f / 30;
+      const expected = 180 - (180 / Math.PI) * Math.atan2(Math.SQRT2 * x, 1 - x * x) + 180 - 360 * f * 0.003;
+      worst = Math.max(worst, Math.abs(angleDiffDeg(r.phaseDeg[i] as number, expected)));
+    });
+    expect(worst).toBeLessThan(3);
+    assertInDelta(r.magnitudeDb, Float64Array.from(m.magnitudeDb, (v) => v - 2), 1e-9);
   });
 });

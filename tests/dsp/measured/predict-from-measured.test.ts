@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { blendResponse, bestMeasuredAlignment, alignSubToMains, logFrequencyGridHz, predictMeasuredBlend, smoothFractionalOctave, type PathSpec } from '@/dsp';
-import { computeMeasuredPrediction } from '@/lib/system-model/measured';
+import { computeMeasured } from '@/lib/system-model/measured';
 import { predictRequestSchema } from '@/lib/validations/measurement';
 import { assertInDelta } from '../../helpers/assert-in-delta';
 
@@ -68,7 +68,7 @@ describe('predicting the blend from measured curves (model consistency)', () => 
       mains: { curve: curve(mainsModel), gainDb: mainsModel.gainDb, delayMs: mainsModel.delayMs, invert: false },
       sub: { curve: curve(subModel), gainDb: subModel.gainDb, delayMs: subModel.delayMs, invert: true },
     });
-    const answer = computeMeasuredPrediction(req, { mains: req.mains.curve as never, sub: req.sub.curve as never });
+    const answer = computeMeasured(req, { mains: req.mains.curve as never, sub: req.sub.curve as never });
     const f = Float64Array.from(answer.frequencyHz);
     const reference = blendResponse({ temperatureC, frequencyHz: f, paths: [mainsModel, subModel] });
     assertInDelta(answer.predictedSum.magnitudeDb, reference.sum.magnitudeDb, 0.05, 'predicted sum');

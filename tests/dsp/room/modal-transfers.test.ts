@@ -3,7 +3,7 @@ import { logFrequencyGridHz, modalTransfer, modalTransfers } from '@/dsp';
 import { assertInDelta } from '../../helpers/assert-in-delta';
 
 // modalTransfers evaluates Kuttruff's modal sum ("Room Acoustics", ch. 3) for many pairs at once; its reference here is
-// modalTransfer (checked against the room-mode figures of REFERENCES.md in modal-transfer.test.ts).
+// modalTransfer (checked against the published room-mode figures, Rayleigh 1896, in modal-transfer.test.ts).
 const room = { lengthM: 6.4, widthM: 4.9, heightM: 2.7 };
 const grid = logFrequencyGridHz({ startHz: 15, stopHz: 300, pointsPerOctave: 24 });
 const subs = [{ x: 0.3, y: 0.3, z: 0.3 }, { x: 4.6, y: 0.3, z: 0.3 }, { x: 2.45, y: 6.4, z: 0 }];

@@ -6,7 +6,7 @@ import { assertInDelta } from '../../helpers/assert-in-delta';
 const room = { lengthM: 6.4, widthM: 4.9, heightM: 2.7 };
 
 describe('roomModes', () => {
-  it('6.4 × 4.9 × 2.7 m at 20 °C: first modes 26.81, 35.02, 44.11, 53.63, 63.56, 64.05, 68.98, 70.04 Hz and 106 modes ≤ 200 Hz (published: Rayleigh 1896; figures REFERENCES.md)', () => {
+  it('6.4 × 4.9 × 2.7 m at 20 °C: first modes 26.81, 35.02, 44.11, 53.63, 63.56, 64.05, 68.98, 70.04 Hz and 106 modes ≤ 200 Hz (published: Rayleigh 1896)', () => {
     const { modes, speedOfSoundMps } = roomModes({ ...room, maxHz: 200, temperatureC: 20 });
     assertInDelta(speedOfSoundMps, 343.21, 0.005);
     const expected: [number, [number, number, number]][] = [

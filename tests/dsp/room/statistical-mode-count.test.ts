@@ -3,7 +3,7 @@ import { statisticalModeCount } from '@/dsp';
 import { assertInDelta } from '../../helpers/assert-in-delta';
 
 describe('statisticalModeCount', () => {
-  it('6.4 × 4.9 × 2.7 m at 200 Hz → 107.3 (published: Kuttruff, Room Acoustics, ch. 3; REFERENCES.md)', () => {
+  it('6.4 × 4.9 × 2.7 m at 200 Hz → 107.3 (published: Kuttruff, Room Acoustics, ch. 3)', () => {
     assertInDelta(statisticalModeCount({ lengthM: 6.4, widthM: 4.9, heightM: 2.7, frequencyHz: 200, temperatureC: 20 }), 107.3, 0.05);
   });
   it('throws RangeError naming frequencyHz for 0', () => {

@@ -3,7 +3,7 @@
  * order, roll-offs, distances, temperatures, measured distances), the Crossover sweep's top row (and every row ranked
  * above the present setting), Timing's per-sub advice and the all-subs advice are written into the document exactly
  * as the editor's Apply buttons do, and the blend is recomputed from the applied document. The flatness measure is
- * never worse and the −3 dB point never rises by more than a third of an octave (common practice, REFERENCES.md).
+ * never worse and the −3 dB point never rises by more than a third of an octave (common practice; the rules are dsp/system/advice-rules.ts).
  *
  * The oracle is independent of the advice code: the blend of the applied document is evaluated through the editor's
  * own route (blendRequestFromDocument → blendResponse) and the measure is computed here from its definition.
@@ -12,10 +12,9 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { blendResponse, FLATNESS_DEFINITION } from '@/dsp';
 import { juniperLaneDocument, lindenStreetDocument } from '@/lib/demo/systems';
-import { blendRequestFromDocument } from '@/lib/system-model';
-import { computeCrossoverSweep } from '@/lib/system-model/blend-compute';
-import { applySweepRow, sweepRequestFromDocument } from '@/lib/system-model/blend-sweep';
-import { applyTimingAdvice, computeTiming, timingRequestFromDocument } from '@/lib/system-model/timing';
+import { blendRequestFromDocument } from '@/lib/system-model/blend';
+import { applyCrossoverSweepToDocument, computeCrossoverSweep, crossoverSweepRequestFromDocument } from '@/lib/system-model/crossover-sweep';
+import { applyTimingToDocument, computeTiming, timingRequestFromDocument } from '@/lib/system-model/timing';
 import { crossoverSweepRequestSchema, timingRequestSchema } from '@/lib/validations/compute-blend';
 import { systemDocumentSchema, type Slope, type SpeakerProfile, type SystemDocument } from '@/lib/validations/system';
 
@@ -125,11 +124,11 @@ describe('advice proven by applying it to the document (property, random Systems
             return;
           }
           expect(s.advice.gainDb).toBeGreaterThanOrEqual(0.5 - 0.01);
-          expectNotWorse(doc, applyTimingAdvice(doc, s.advice), `sub ${k + 1} advice`);
+          expectNotWorse(doc, applyTimingToDocument(doc, s.advice), `sub ${k + 1} advice`);
           applied++;
         });
         if (answer.group && !answer.group.keep) {
-          expectNotWorse(doc, applyTimingAdvice(doc, answer.group), 'all-subs advice');
+          expectNotWorse(doc, applyTimingToDocument(doc, answer.group), 'all-subs advice');
           applied++;
         }
       }),
@@ -144,12 +143,12 @@ describe('advice proven by applying it to the document (property, random Systems
     fc.assert(
       fc.property(systemArb, fc.uniqueArray(fc.integer({ min: 40, max: 150 }), { minLength: 2, maxLength: 6 }), (doc, candidatesHz) => {
         const pairings = [{ mainsFilter: doc.bassManagement.mainsHighpass, subFilter: doc.bassManagement.subLowpass }, { mainsFilter: LR4, subFilter: LR4 }];
-        const request = crossoverSweepRequestSchema.parse(sweepRequestFromDocument(doc, { pairings, candidatesHz }));
+        const request = crossoverSweepRequestSchema.parse(crossoverSweepRequestFromDocument(doc, { pairings, candidatesHz }));
         const { rows } = computeCrossoverSweep(request);
         const presentRank = rows.findIndex((r) => r.present);
         expect(presentRank).toBeGreaterThanOrEqual(0);
         for (const row of rows.slice(0, presentRank)) {
-          expectNotWorse(doc, applySweepRow(doc, row), `sweep row ${row.rank} (${row.crossoverHz} Hz)`);
+          expectNotWorse(doc, applyCrossoverSweepToDocument(doc, row), `sweep row ${row.rank} (${row.crossoverHz} Hz)`);
           applied++;
         }
       }),
@@ -163,15 +162,15 @@ describe('advice proven by applying it to the document (property, random Systems
       const answer = computeTiming(timingRequestSchema.parse(timingRequestFromDocument(doc)));
       for (const advice of [...answer.subs.map((s) => s.advice), ...(answer.group ? [answer.group] : [])]) {
         if (advice.keep) continue;
-        const applied = applyTimingAdvice(doc, advice);
+        const applied = applyTimingToDocument(doc, advice);
         expectNotWorse(doc, applied, 'demo advice');
         // Followed once, the same advice is not given again (no "add 8.44 ms" after "apply to all subs").
         const again = computeTiming(timingRequestSchema.parse(timingRequestFromDocument(applied)));
         for (const s of again.subs) expect(s.advice.keep, s.advice.reason).toBe(true);
       }
-      const sweep = computeCrossoverSweep(crossoverSweepRequestSchema.parse(sweepRequestFromDocument(doc, { pairings: [{ mainsFilter: LR4, subFilter: LR4 }], candidatesHz: [40, 60, 80, 100, 120, 150] })));
+      const sweep = computeCrossoverSweep(crossoverSweepRequestSchema.parse(crossoverSweepRequestFromDocument(doc, { pairings: [{ mainsFilter: LR4, subFilter: LR4 }], candidatesHz: [40, 60, 80, 100, 120, 150] })));
       const top = sweep.rows[0]!;
-      if (!top.present) expectNotWorse(doc, applySweepRow(doc, top), 'demo sweep top row');
+      if (!top.present) expectNotWorse(doc, applyCrossoverSweepToDocument(doc, top), 'demo sweep top row');
     }
   });
 });

@@ -42,6 +42,23 @@ describe('alignSubToMains', () => {
     const zero = delayMs.findIndex((d) => Math.abs(d) < 1e-9);
     expect(normalDb[zero]).toBeGreaterThan(-0.01);
     expect(invertedDb[zero]).toBeLessThan(-40);
+    // At the crossover f, −1 = e^(−jπ) = a delay of half a period T/2 = 1/(2f): A − B·e^(−jωd) = A + B·e^(−jω(d + T/2)),
+    // so inverted(d) = normal(d + 6.25 ms) at 80 Hz for every delay d (geometry). Compared as powers, so the nulls of
+    // either curve (levels far below 0 dB) count by how much power they hold, not by their size in dB.
+    for (const s of [{ ...sub, distanceM: 3 }, sub, { ...sub, distanceM: 5.5, gainDb: -4, invert: true }]) {
+      const curve = alignSubToMains({ temperatureC: 20, crossoverHz: 80, mains, sub: s }).levelVersusDelay;
+      const halfPeriodMs = 1000 / (2 * 80);
+      let compared = 0;
+      curve.delayMs.forEach((d, k) => {
+        const j = curve.delayMs.findIndex((e) => Math.abs(e - (d + halfPeriodMs)) < 1e-6);
+        if (j < 0) return;
+        compared++;
+        const power = (db: number) => Math.pow(10, db / 10);
+        assertInDelta(power(curve.invertedDb[k] as number), power(curve.normalDb[j] as number), 1e-9, `inverted at ${d} ms vs normal at ${d + halfPeriodMs} ms`);
+      });
+      // ±20 ms in 0.05 ms steps: every delay up to 20 − 6.25 ms has a partner.
+      expect(compared).toBe(Math.round((40 - halfPeriodMs) / 0.05) + 1);
+    }
   });
   const arbPath = (response: 'highpass' | 'lowpass') =>
     fc.record({

@@ -1,6 +1,6 @@
 import { json, parseJson, route } from '@/lib/http';
-import { computeHeadroom } from '@/lib/system-model/headroom-compute';
-import { headroomRequestSchema } from '@/lib/validations/compute-room';
+import { computeHeadroom } from '@/lib/system-model/headroom';
+import { headroomRequestSchema } from '@/lib/validations/compute-headroom';
 
 /** POST /api/v1/headroom — documented in lib/api-docs/compute-room.ts. No sign-in needed. */
 export const POST = route(async (request) => {

@@ -1,6 +1,6 @@
 import { json, parseJson, route } from '@/lib/http';
-import { computeLayout } from '@/lib/system-model/layout-compute';
-import { layoutRequestSchema } from '@/lib/validations/compute-room';
+import { computeLayout } from '@/lib/system-model/layout';
+import { layoutRequestSchema } from '@/lib/validations/compute-layout';
 
 /** POST /api/v1/layout — documented in lib/api-docs/compute-room.ts. No sign-in needed. */
 export const POST = route(async (request) => {

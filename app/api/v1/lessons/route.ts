@@ -1,6 +1,6 @@
 import { requireCaller } from '@/lib/auth';
 import { createLesson, listLessons } from '@/lib/data/lessons';
-import { json, parseJson, parseQuery, route } from '@/lib/http';
+import { BODY_LIMIT_BYTES, json, parseJson, parseQuery, route } from '@/lib/http';
 import { lessonCreateSchema, lessonListQuerySchema } from '@/lib/validations/lesson';
 
 /** The caller's Lessons across their workspaces (`?workspaceId=` for one): `{ items }`, newest change first. */
@@ -13,6 +13,6 @@ export const GET = route(async (request) => {
 /** Creates `{ title, description?, workspaceId? }` (default: the caller's own workspace): 201 with the Lesson. */
 export const POST = route(async (request) => {
   const caller = await requireCaller();
-  const input = await parseJson(request, lessonCreateSchema, 16 * 1024);
+  const input = await parseJson(request, lessonCreateSchema, BODY_LIMIT_BYTES.form);
   return json(await createLesson(caller, input), 201);
 });

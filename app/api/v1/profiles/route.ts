@@ -1,6 +1,6 @@
 import { requireCaller } from '@/lib/auth';
 import { createProfile, listProfiles } from '@/lib/data/profiles';
-import { json, parseJson, parseQuery, route } from '@/lib/http';
+import { BODY_LIMIT_BYTES, json, parseJson, parseQuery, route } from '@/lib/http';
 import { profileCreateSchema, profileListQuerySchema } from '@/lib/validations/profile';
 
 /** Speaker profiles of the caller's workspaces: `?kind=main|sub&q=&workspaceId=` → `{ items, total }`. */
@@ -11,6 +11,6 @@ export const GET = route(async (request) => {
 
 export const POST = route(async (request) => {
   const caller = await requireCaller();
-  const input = await parseJson(request, profileCreateSchema, 32 * 1024);
+  const input = await parseJson(request, profileCreateSchema, BODY_LIMIT_BYTES.profile);
   return json(await createProfile(caller, input), 201);
 });

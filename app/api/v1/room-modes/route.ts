@@ -1,5 +1,5 @@
 import { json, parseJson, route } from '@/lib/http';
-import { computeRoomModes } from '@/lib/system-model/room-compute';
+import { computeRoomModes } from '@/lib/system-model/room-modes';
 import { roomModesRequestSchema } from '@/lib/validations/compute-room';
 
 /** POST /api/v1/room-modes — documented in lib/api-docs/compute-room.ts. No sign-in needed. */

@@ -1,5 +1,5 @@
 import { json, parseJson, route } from '@/lib/http';
-import { computeRoomResponse } from '@/lib/system-model/room-compute';
+import { computeRoomResponse } from '@/lib/system-model/room-response';
 import { roomResponseRequestSchema } from '@/lib/validations/compute-room';
 
 /** POST /api/v1/room-response — documented in lib/api-docs/compute-room.ts. No sign-in needed. */

@@ -1,6 +1,6 @@
 import { requireCaller } from '@/lib/auth';
 import { createWorkspace, listWorkspaces } from '@/lib/data/workspaces';
-import { json, parseJson, route } from '@/lib/http';
+import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
 import { workspaceCreateSchema } from '@/lib/validations/workspace';
 
 export const GET = route(async () => {
@@ -10,6 +10,6 @@ export const GET = route(async () => {
 
 export const POST = route(async (request) => {
   const caller = await requireCaller();
-  const { name } = await parseJson(request, workspaceCreateSchema, 16 * 1024);
+  const { name } = await parseJson(request, workspaceCreateSchema, BODY_LIMIT_BYTES.form);
   return json(await createWorkspace(caller, name), 201);
 });

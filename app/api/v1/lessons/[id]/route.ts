@@ -1,6 +1,6 @@
 import { requireCaller } from '@/lib/auth';
 import { deleteLesson, getLesson, updateLesson } from '@/lib/data/lessons';
-import { json, parseJson, route } from '@/lib/http';
+import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
 import { lessonUpdateSchema } from '@/lib/validations/lesson';
 
 type Ctx = { params: Promise<{ id: string }> };
@@ -16,7 +16,7 @@ export const GET = route<Ctx>(async (_request, { params }) => {
 export const PUT = route<Ctx>(async (request, { params }) => {
   const caller = await requireCaller();
   const { id } = await params;
-  const input = await parseJson(request, lessonUpdateSchema, 16 * 1024);
+  const input = await parseJson(request, lessonUpdateSchema, BODY_LIMIT_BYTES.form);
   return json(await updateLesson(caller, id, input));
 });
 

@@ -1,12 +1,9 @@
 import { getCaller } from '@/lib/auth';
 import { getMeasurement } from '@/lib/data/measurements';
 import { unauthorized } from '@/lib/errors';
-import { json, parseJson, route } from '@/lib/http';
-import { computeMeasuredPrediction, type CurvePoints } from '@/lib/system-model/measured';
+import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
+import { computeMeasured, type CurvePoints } from '@/lib/system-model/measured';
 import { predictRequestSchema, type MeasuredCurveInput } from '@/lib/validations/measurement';
-
-/** Inline curves can be long: up to 20 000 points each. */
-const PREDICT_BODY_LIMIT_BYTES = 2 * 1024 * 1024;
 
 /** Inline points need no session; a `measurementId` is read with the caller's workspace rights. */
 async function curvePoints(curve: MeasuredCurveInput): Promise<CurvePoints> {
@@ -20,7 +17,7 @@ async function curvePoints(curve: MeasuredCurveInput): Promise<CurvePoints> {
 }
 
 export const POST = route(async (request) => {
-  const input = await parseJson(request, predictRequestSchema, PREDICT_BODY_LIMIT_BYTES);
+  const input = await parseJson(request, predictRequestSchema, BODY_LIMIT_BYTES.measuredCurves);
   const [mains, sub] = await Promise.all([curvePoints(input.mains.curve), curvePoints(input.sub.curve)]);
-  return json(computeMeasuredPrediction(input, { mains, sub }));
+  return json(computeMeasured(input, { mains, sub }));
 });

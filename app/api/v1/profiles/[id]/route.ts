@@ -1,6 +1,6 @@
 import { requireCaller } from '@/lib/auth';
 import { deleteProfile, getProfile, updateProfile } from '@/lib/data/profiles';
-import { json, parseJson, route } from '@/lib/http';
+import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
 import { profileUpdateSchema } from '@/lib/validations/profile';
 
 type Ctx = { params: Promise<{ id: string }> };
@@ -15,7 +15,7 @@ export const GET = route<Ctx>(async (_request, { params }) => {
 export const PUT = route<Ctx>(async (request, { params }) => {
   const caller = await requireCaller();
   const { id } = await params;
-  const fields = await parseJson(request, profileUpdateSchema, 32 * 1024);
+  const fields = await parseJson(request, profileUpdateSchema, BODY_LIMIT_BYTES.profile);
   return json(await updateProfile(caller, id, fields));
 });
 

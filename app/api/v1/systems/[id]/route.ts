@@ -1,6 +1,6 @@
 import { requireCaller } from '@/lib/auth';
 import { deleteSystem, getSystem, renameSystem, updateSystem } from '@/lib/data/systems';
-import { json, parseJson, route } from '@/lib/http';
+import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
 import { systemRenameSchema, systemUpdateSchema } from '@/lib/validations/library';
 
 type Ctx = { params: Promise<{ id: string }> };
@@ -23,7 +23,7 @@ export const PUT = route<Ctx>(async (request, { params }) => {
 export const PATCH = route<Ctx>(async (request, { params }) => {
   const caller = await requireCaller();
   const { id } = await params;
-  const { name, revision } = await parseJson(request, systemRenameSchema, 16 * 1024);
+  const { name, revision } = await parseJson(request, systemRenameSchema, BODY_LIMIT_BYTES.form);
   return json(await renameSystem(caller, id, name, revision));
 });
 

@@ -1,6 +1,7 @@
 import { requireCaller } from '@/lib/auth';
-import { assertUuid, getWorkspace, renameWorkspace } from '@/lib/data/workspaces';
-import { json, parseJson, route } from '@/lib/http';
+import { assertUuid } from '@/lib/data/ids';
+import { getWorkspace, renameWorkspace } from '@/lib/data/workspaces';
+import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
 import { workspaceCreateSchema } from '@/lib/validations/workspace';
 
 type Ctx = { params: Promise<{ id: string }> };
@@ -16,6 +17,6 @@ export const PATCH = route<Ctx>(async (request, { params }) => {
   const caller = await requireCaller();
   const { id } = await params;
   assertUuid(id, 'That workspace');
-  const { name } = await parseJson(request, workspaceCreateSchema, 16 * 1024);
+  const { name } = await parseJson(request, workspaceCreateSchema, BODY_LIMIT_BYTES.form);
   return json(await renameWorkspace(caller, id, name));
 });

@@ -1,7 +1,7 @@
 import { requireCaller } from '@/lib/auth';
-import { createLessonShareLink, listLessonShareLinks, revokeLessonShareLink } from '@/lib/data/lessons';
+import { createLessonShareLink, listLessonShareLinks, revokeLessonShareLink } from '@/lib/data/share-links';
 import { json, parseQuery, route } from '@/lib/http';
-import { shareTokenQuerySchema } from '@/lib/validations/lesson';
+import { shareTokenQuerySchema } from '@/lib/validations/share-link';
 
 type Ctx = { params: Promise<{ id: string }> };
 

@@ -1,5 +1,5 @@
 import { requireCaller } from '@/lib/auth';
-import { addStep } from '@/lib/data/lessons';
+import { addStep } from '@/lib/data/lesson-steps';
 import { json, parseJson, route } from '@/lib/http';
 import { stepCreateSchema } from '@/lib/validations/lesson';
 

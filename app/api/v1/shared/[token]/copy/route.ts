@@ -1,6 +1,6 @@
 import { requireCaller } from '@/lib/auth';
 import { copySharedSystem } from '@/lib/data/share-links';
-import { json, parseJson, route } from '@/lib/http';
+import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
 import { copySchema } from '@/lib/validations/library';
 
 type Ctx = { params: Promise<{ token: string }> };
@@ -9,6 +9,6 @@ type Ctx = { params: Promise<{ token: string }> };
 export const POST = route<Ctx>(async (request, { params }) => {
   const caller = await requireCaller();
   const { token } = await params;
-  const input = await parseJson(request, copySchema, 16 * 1024);
+  const input = await parseJson(request, copySchema, BODY_LIMIT_BYTES.form);
   return json(await copySharedSystem(caller, token, input), 201);
 });

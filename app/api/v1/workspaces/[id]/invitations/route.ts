@@ -1,7 +1,7 @@
 import { requireCaller } from '@/lib/auth';
 import { createInvitation, listPendingInvitations } from '@/lib/data/invitations';
-import { assertUuid } from '@/lib/data/workspaces';
-import { json, parseJson, route } from '@/lib/http';
+import { assertUuid } from '@/lib/data/ids';
+import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
 import { invitationCreateSchema } from '@/lib/validations/workspace';
 
 type Ctx = { params: Promise<{ id: string }> };
@@ -17,6 +17,6 @@ export const POST = route<Ctx>(async (request, { params }) => {
   const caller = await requireCaller();
   const { id } = await params;
   assertUuid(id, 'That workspace');
-  const { email, role } = await parseJson(request, invitationCreateSchema, 16 * 1024);
+  const { email, role } = await parseJson(request, invitationCreateSchema, BODY_LIMIT_BYTES.form);
   return json(await createInvitation(caller, id, email, role), 201);
 });

@@ -1,5 +1,6 @@
 import { requireCaller } from '@/lib/auth';
-import { assertUuid, listMembers } from '@/lib/data/workspaces';
+import { assertUuid } from '@/lib/data/ids';
+import { listMembers } from '@/lib/data/workspaces';
 import { json, route } from '@/lib/http';
 
 type Ctx = { params: Promise<{ id: string }> };

@@ -1,5 +1,5 @@
 import { requireCaller } from '@/lib/auth';
-import { deleteStep, updateStep } from '@/lib/data/lessons';
+import { deleteStep, updateStep } from '@/lib/data/lesson-steps';
 import { json, parseJson, parseQuery, route } from '@/lib/http';
 import { revisionQuerySchema, stepUpdateSchema } from '@/lib/validations/lesson';
 

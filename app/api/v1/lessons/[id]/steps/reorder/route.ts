@@ -1,6 +1,6 @@
 import { requireCaller } from '@/lib/auth';
-import { reorderSteps } from '@/lib/data/lessons';
-import { json, parseJson, route } from '@/lib/http';
+import { reorderSteps } from '@/lib/data/lesson-steps';
+import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
 import { stepReorderSchema } from '@/lib/validations/lesson';
 
 type Ctx = { params: Promise<{ id: string }> };
@@ -9,6 +9,6 @@ type Ctx = { params: Promise<{ id: string }> };
 export const POST = route<Ctx>(async (request, { params }) => {
   const caller = await requireCaller();
   const { id } = await params;
-  const input = await parseJson(request, stepReorderSchema, 32 * 1024);
+  const input = await parseJson(request, stepReorderSchema, BODY_LIMIT_BYTES.stepOrder);
   return json(await reorderSteps(caller, id, input));
 });

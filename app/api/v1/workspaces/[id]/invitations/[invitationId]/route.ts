@@ -1,6 +1,6 @@
 import { requireCaller } from '@/lib/auth';
 import { revokeInvitation } from '@/lib/data/invitations';
-import { assertUuid } from '@/lib/data/workspaces';
+import { assertUuid } from '@/lib/data/ids';
 import { json, route } from '@/lib/http';
 
 type Ctx = { params: Promise<{ id: string; invitationId: string }> };

@@ -1,6 +1,7 @@
 import { requireCaller } from '@/lib/auth';
-import { assertUuid, changeMember } from '@/lib/data/workspaces';
-import { json, parseJson, route } from '@/lib/http';
+import { assertUuid } from '@/lib/data/ids';
+import { changeMember } from '@/lib/data/workspaces';
+import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
 import { memberUpdateSchema } from '@/lib/validations/workspace';
 
 type Ctx = { params: Promise<{ id: string; userId: string }> };
@@ -10,7 +11,7 @@ export const PATCH = route<Ctx>(async (request, { params }) => {
   const { id, userId } = await params;
   assertUuid(id, 'That workspace');
   assertUuid(userId, 'That member');
-  const { role } = await parseJson(request, memberUpdateSchema, 16 * 1024);
+  const { role } = await parseJson(request, memberUpdateSchema, BODY_LIMIT_BYTES.form);
   await changeMember(caller, id, userId, { role });
   return json({ ok: true });
 });

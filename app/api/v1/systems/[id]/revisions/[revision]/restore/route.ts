@@ -1,7 +1,7 @@
 import { requireCaller } from '@/lib/auth';
 import { restoreRevision } from '@/lib/data/systems';
 import { notFound } from '@/lib/errors';
-import { json, parseJson, route } from '@/lib/http';
+import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
 import { revisionParamSchema, revisionRestoreSchema } from '@/lib/validations/library';
 
 type Ctx = { params: Promise<{ id: string; revision: string }> };
@@ -12,6 +12,6 @@ export const POST = route<Ctx>(async (request, { params }) => {
   const { id, revision } = await params;
   const n = revisionParamSchema.safeParse(revision);
   if (!n.success) throw notFound('That revision');
-  const body = await parseJson(request, revisionRestoreSchema, 16 * 1024);
+  const body = await parseJson(request, revisionRestoreSchema, BODY_LIMIT_BYTES.form);
   return json(await restoreRevision(caller, id, n.data, body.revision));
 });
