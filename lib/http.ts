@@ -28,11 +28,14 @@ export function errorResponse(error: unknown) {
   return NextResponse.json(errorBody(e), { status: e.status, headers });
 }
 
-/** Reads at most `limitBytes` of the body as text, answering 413 beyond (without buffering it all). */
-export async function readBodyText(request: Request, limitBytes: number = BODY_LIMIT_BYTES.standard): Promise<string> {
+/**
+ * Reads at most `limitBytes` of the body, throwing `tooLargeError()` (by default the API's 413) as soon as the declared
+ * or the received size passes the limit, without buffering the rest.
+ */
+export async function readBodyBytes(request: Request, limitBytes: number, tooLargeError: () => Error = () => tooLarge(limitBytes)): Promise<Uint8Array> {
   const declared = Number(request.headers.get('content-length') ?? NaN);
-  if (Number.isFinite(declared) && declared > limitBytes) throw tooLarge(limitBytes);
-  if (!request.body) return '';
+  if (Number.isFinite(declared) && declared > limitBytes) throw tooLargeError();
+  if (!request.body) return new Uint8Array();
   const reader = request.body.getReader();
   const chunks: Uint8Array[] = [];
   let size = 0;
@@ -42,11 +45,22 @@ export async function readBodyText(request: Request, limitBytes: number = BODY_L
     size += value.byteLength;
     if (size > limitBytes) {
       await reader.cancel().catch(() => {});
-      throw tooLarge(limitBytes);
+      throw tooLargeError();
     }
     chunks.push(value);
   }
-  return new TextDecoder('utf-8', { fatal: false }).decode(Buffer.concat(chunks));
+  const out = new Uint8Array(size);
+  let at = 0;
+  for (const c of chunks) {
+    out.set(c, at);
+    at += c.byteLength;
+  }
+  return out;
+}
+
+/** Reads at most `limitBytes` of the body as text, answering 413 beyond (without buffering it all). */
+export async function readBodyText(request: Request, limitBytes: number = BODY_LIMIT_BYTES.standard): Promise<string> {
+  return new TextDecoder('utf-8', { fatal: false }).decode(await readBodyBytes(request, limitBytes));
 }
 
 /** Parses a JSON body against a zod schema: 415 for other media types, 413 when too large, 400 otherwise. */

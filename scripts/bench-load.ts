@@ -8,6 +8,7 @@ import './lib/load-env';
 import { readFileSync } from 'node:fs';
 import { spawnSync } from 'node:child_process';
 import autocannon from 'autocannon';
+import { demoSessionCookie } from './lib/demo-session';
 
 const base = (process.env.BENCH_URL ?? 'http://127.0.0.1:3000').replace(/\/$/, '');
 const seconds = Math.min(300, Number(process.env.LOAD_SECONDS ?? 60));
@@ -28,21 +29,6 @@ function rssMb(pid: number | null): number {
   } catch {
     return NaN;
   }
-}
-
-async function sessionCookie(): Promise<string> {
-  const csrfRes = await fetch(`${base}/api/auth/csrf`);
-  const cookie = csrfRes.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
-  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
-  const res = await fetch(`${base}/api/auth/callback/credentials`, {
-    method: 'POST',
-    redirect: 'manual',
-    headers: { 'Content-Type': 'application/x-www-form-urlencoded', Cookie: cookie },
-    body: new URLSearchParams({ csrfToken, email: 'demo@seamline.test', password: 'seamline-demo', json: 'true' }),
-  });
-  const session = res.headers.getSetCookie().map((c) => c.split(';')[0]).find((c) => c?.includes('session-token'));
-  if (!session) throw new Error('could not sign in as the demo owner');
-  return `${cookie}; ${session}`;
 }
 
 const blendBody = JSON.stringify({
@@ -69,7 +55,7 @@ export interface LoadRun {
 export async function benchLoad(): Promise<LoadRun[]> {
   const port = Number(new URL(base).port || 80);
   const pid = serverPid(port);
-  const cookie = await sessionCookie();
+  const cookie = await demoSessionCookie(base);
   const results: LoadRun[] = [];
   for (let run = 1; run <= runs; run++) {
     const before = rssMb(pid);

@@ -10,6 +10,7 @@ import './lib/load-env';
 import path from 'node:path';
 import { spawnSync } from 'node:child_process';
 import { Sequelize } from 'sequelize';
+import { demoSessionCookie } from './lib/demo-session';
 import { dataDirFor, findPgBin, parseDatabaseUrl, serverOptions } from './lib/postgres';
 import { isRoot } from './lib/run';
 import { juniperLaneDocument } from '../lib/demo/systems';
@@ -28,21 +29,6 @@ function pgCtl(args: string[]) {
   if (r.status !== 0) throw new Error(`pg_ctl ${args.join(' ')} failed`);
 }
 
-async function signIn(): Promise<string> {
-  const csrfRes = await fetch(`${base}/api/auth/csrf`);
-  const cookie = csrfRes.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
-  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
-  const res = await fetch(`${base}/api/auth/callback/credentials`, {
-    method: 'POST',
-    redirect: 'manual',
-    headers: { 'Content-Type': 'application/x-www-form-urlencoded', Cookie: cookie },
-    body: new URLSearchParams({ csrfToken, email: 'demo@seamline.test', password: 'seamline-demo', json: 'true' }),
-  });
-  const session = res.headers.getSetCookie().map((c) => c.split(';')[0]).find((c) => c?.includes('session-token'));
-  if (!session) throw new Error('could not sign in as the demo owner');
-  return `${cookie}; ${session}`;
-}
-
 interface Answer {
   at: number;
   status: number;
@@ -53,7 +39,7 @@ interface Answer {
 }
 
 export async function runFaultTest(): Promise<boolean> {
-  const cookie = await signIn();
+  const cookie = await demoSessionCookie(base);
   const headers = { 'Content-Type': 'application/json', Cookie: cookie };
   const created = await fetch(`${base}/api/v1/systems`, { method: 'POST', headers, body: JSON.stringify({ name: `Outage drill ${Date.now()}`, document: juniperLaneDocument() }) });
   if (created.status !== 201) throw new Error(`could not create the drill System (${created.status})`);

@@ -7,20 +7,19 @@ import { SILENCE_DB } from './blend-types';
 import type { CompiledPath } from './path-plan';
 
 // The hot loops of a blend: the analog sections of every path are evaluated by the one section evaluator
-// (internal/section-plan, product rule for H′), the relative delay is one polynomial sin/cos pair per point, and the
-// sum's magnitude, phase and group delay come from S and S′ with one log and one atan2 per point. Nothing is
-// allocated per point; with a BlendGrid nothing is allocated per call beyond the result object.
+// (internal/section-plan, product rule for H′), the relative delay is one polynomial sin/cos pair per point
+// (internal/fast-math), and the curves of a path and of the sum come from one finishing loop with one log and one atan2
+// per point. Nothing is allocated per point; with a BlendGrid nothing is allocated per call beyond the result object.
 
 // Local binding: some loaders turn imports into getter calls, which hot loops should not pay for.
-const { fastAtan2 } = fastMath;
+const { fastAtan2, sinCos } = fastMath;
 
 const SILENT_POWER = Math.pow(10, SILENCE_DB / 10);
 const TWO_PI = 2 * Math.PI;
 const INV_TWO_PI = 1 / TWO_PI;
 const INV_360 = 1 / 360;
-const PIO2_HI = 1.5707963267341256;
-const PIO2_LO = 6.077100506506192e-11;
-const TWO_OVER_PI = 2 / Math.PI;
+/** sin and cos of ωΔ for the point in hand (calls are synchronous, so one pair serves every call). */
+const SIN_COS = new Float64Array(2);
 
 /**
  * A validated frequency grid prepared for repeated blends: ω = 2πf computed once and scratch buffers reused by
@@ -85,45 +84,9 @@ export function accumulatePath(path: CompiledPath, delta: number, grid: BlendGri
     let gi = hi;
     let gdi = di;
     if (rotate) {
-      // sin/cos of ωΔ: Cody–Waite reduction by π/2, Taylor series on |r| ≤ π/4 (as fast-math's sinCos).
-      const x = w * delta;
-      let sn: number;
-      let cs: number;
-      if (Math.abs(x) < 1e6) {
-        const q = Math.round(x * TWO_OVER_PI);
-        const r = x - q * PIO2_HI - q * PIO2_LO;
-        const r2 = r * r;
-        const ps =
-          r *
-          (1 +
-            r2 *
-              (-1 / 6 +
-                r2 * (1 / 120 + r2 * (-1 / 5040 + r2 * (1 / 362880 + r2 * (-1 / 39916800 + r2 * (1 / 6227020800 + r2 * (-1 / 1307674368000))))))));
-        const pc =
-          1 +
-          r2 *
-            (-0.5 +
-              r2 *
-                (1 / 24 +
-                  r2 * (-1 / 720 + r2 * (1 / 40320 + r2 * (-1 / 3628800 + r2 * (1 / 479001600 + r2 * (-1 / 87178291200 + r2 / 20922789888000)))))));
-        const quadrant = q & 3;
-        if (quadrant === 0) {
-          sn = ps;
-          cs = pc;
-        } else if (quadrant === 1) {
-          sn = pc;
-          cs = -ps;
-        } else if (quadrant === 2) {
-          sn = -ps;
-          cs = -pc;
-        } else {
-          sn = -pc;
-          cs = ps;
-        }
-      } else {
-        sn = Math.sin(x);
-        cs = Math.cos(x);
-      }
+      sinCos(w * delta, SIN_COS, 0);
+      const sn = SIN_COS[0] as number;
+      const cs = SIN_COS[1] as number;
       gr = hr * cs + hi * sn;
       gi = hi * cs - hr * sn;
       gdi = di - delta;
@@ -144,26 +107,46 @@ export function accumulatePath(path: CompiledPath, delta: number, grid: BlendGri
 
 /** Writes one path's curves from scratch rows 4..6 (its H and Im H′/H) and its total delay tau, seconds. */
 export function finishPath(grid: BlendGrid, tau: number, mag: Float64Array, ph: Float64Array, un: Float64Array, gd: Float64Array): void {
+  writeCurves(grid, tau, mag, ph, un, gd, false);
+}
+
+/** Writes the sum's curves from scratch rows 0..3 (S and S′ relative to the earliest path, whose delay is tau0). */
+export function finishSum(grid: BlendGrid, tau0: number, out: ResponseCurves): void {
+  writeCurves(grid, tau0, out.magnitudeDb, out.phaseDeg, out.unwrappedPhaseDeg, out.groupDelayMs, true);
+}
+
+/**
+ * The one finishing loop of finishPath (ofSum false: H in rows 4, 5, Im H′/H in row 6, tau the path's delay) and
+ * finishSum (ofSum true: S and S′ in rows 0..3, group delay −Im(S′/S), tau the earliest path's delay; a silent point's
+ * group delay reads 0). The phase is unwrapped by following the group delay: each step's expected change is the
+ * trapezoid −½(τg₁ + τg₂)·Δω, and only the remainder is taken to the nearest turn (common practice). The delay tau is
+ * then added arithmetically (−ωτ), so the unwrapped phase holds exactly −360·f·τ for it.
+ */
+function writeCurves(grid: BlendGrid, tau: number, mag: Float64Array, ph: Float64Array, un: Float64Array, gd: Float64Array, ofSum: boolean): void {
   const omega = grid.omega;
   const n = omega.length;
   const s = grid.scratch;
+  const row = ofSum ? 0 : 4 * n;
   let prevWrapped = 0;
   let prevUnwrapped = 0;
   let prevGroup = 0;
   let prevOmega = 0;
   for (let i = 0; i < n; i++) {
     const w = omega[i] as number;
-    const hr = s[4 * n + i] as number;
-    const hi = s[5 * n + i] as number;
-    const p = hr * hr + hi * hi;
+    const r = s[row + i] as number;
+    const m = s[row + n + i] as number;
+    const p = r * r + m * m;
+    const audible = p > SILENT_POWER;
     let phase = 0;
-    if (p > SILENT_POWER) {
+    let group = ofSum ? 0 : -(s[6 * n + i] as number);
+    if (audible) {
       mag[i] = LN_POWER_TO_DB * Math.log(p);
-      phase = fastAtan2(hi, hr);
+      phase = fastAtan2(m, r);
+      // −Im(S′/S) = −(S′_im·S_re − S′_re·S_im)/|S|²
+      if (ofSum) group = -((s[3 * n + i] as number) * r - (s[2 * n + i] as number) * m) / p;
     } else {
       mag[i] = SILENCE_DB;
     }
-    const group = -(s[6 * n + i] as number);
     let unwrapped = phase;
     if (i > 0) {
       const predicted = -0.5 * (prevGroup + group) * (w - prevOmega);
@@ -180,55 +163,7 @@ export function finishPath(grid: BlendGrid, tau: number, mag: Float64Array, ph: 
     if (wrapped <= -180) wrapped += 360;
     ph[i] = wrapped;
     un[i] = RAD_TO_DEG * (unwrapped - delayRad);
-    gd[i] = 1000 * (group + tau);
-  }
-}
-
-/** Writes the sum's curves from scratch rows 0..3 (S and S′ relative to the earliest path, whose delay is tau0). */
-export function finishSum(grid: BlendGrid, tau0: number, out: ResponseCurves): void {
-  const omega = grid.omega;
-  const n = omega.length;
-  const s = grid.scratch;
-  const mag = out.magnitudeDb;
-  const ph = out.phaseDeg;
-  const un = out.unwrappedPhaseDeg;
-  const gd = out.groupDelayMs;
-  let prevWrapped = 0;
-  let prevUnwrapped = 0;
-  let prevGroup = 0;
-  let prevOmega = 0;
-  for (let i = 0; i < n; i++) {
-    const w = omega[i] as number;
-    const r = s[i] as number;
-    const m = s[n + i] as number;
-    const p = r * r + m * m;
-    let phase = 0;
-    let relGroup = 0;
-    if (p > SILENT_POWER) {
-      mag[i] = LN_POWER_TO_DB * Math.log(p);
-      phase = fastAtan2(m, r);
-      // −Im(S′/S) = −(S′_im·S_re − S′_re·S_im)/|S|²
-      relGroup = -((s[3 * n + i] as number) * r - (s[2 * n + i] as number) * m) / p;
-    } else {
-      mag[i] = SILENCE_DB;
-    }
-    let unwrapped = phase;
-    if (i > 0) {
-      const predicted = -0.5 * (prevGroup + relGroup) * (w - prevOmega);
-      const step = phase - prevWrapped - predicted;
-      unwrapped = prevUnwrapped + predicted + step - TWO_PI * Math.round(step * INV_TWO_PI);
-    }
-    prevWrapped = phase;
-    prevUnwrapped = unwrapped;
-    prevGroup = relGroup;
-    prevOmega = w;
-    const delayRad = w * tau0;
-    const deg = RAD_TO_DEG * (phase - delayRad);
-    let wrapped = deg - 360 * Math.round(deg * INV_360);
-    if (wrapped <= -180) wrapped += 360;
-    ph[i] = wrapped;
-    un[i] = RAD_TO_DEG * (unwrapped - delayRad);
-    gd[i] = p > SILENT_POWER ? 1000 * (relGroup + tau0) : 0;
+    gd[i] = audible || !ofSum ? 1000 * (group + tau) : 0;
   }
 }
 

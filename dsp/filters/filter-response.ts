@@ -1,4 +1,5 @@
-import { LN_POWER_TO_DB, RAD_TO_DEG } from '../internal/angles';
+import { RAD_TO_DEG } from '../internal/angles';
+import { complexLevelDb } from '../internal/complex';
 import { assertPositive, positiveFrequencies } from '../internal/guards';
 import { compileSections, evaluatePlanOnGrid, planValues } from '../internal/section-plan';
 import { filterSections, MAX_SECTION_Q, rolloffSections } from './analog-sections';
@@ -21,7 +22,7 @@ export function sectionsResponse(sections: readonly AnalogSection[], frequencyHz
     const m = h.im[i] as number;
     re[i] = r;
     im[i] = m;
-    magnitudeDb[i] = LN_POWER_TO_DB * Math.log(r * r + m * m + 1e-300);
+    magnitudeDb[i] = complexLevelDb(r, m);
     const p = Math.atan2(m, r) * RAD_TO_DEG;
     phaseDeg[i] = p === -180 ? 180 : p;
     groupDelayMs[i] = -1000 * (h.dIm[i] as number);

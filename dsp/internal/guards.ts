@@ -76,3 +76,15 @@ export function assertSameLength(name: string, values: ArrayLike<number>, expect
     throw new RangeError(`${name} must have ${expected} entries like frequencyHz (got ${values.length})`);
   }
 }
+
+/**
+ * Validates a curve given point by point: frequencyHz finite, > 0 and strictly ascending, magnitudeDb one finite value
+ * per frequency. Returns the frequencies as a Float64Array (copied when needed).
+ */
+export function curveFrequencies(frequencyHz: ArrayLike<number>, magnitudeDb: ArrayLike<number>): Float64Array {
+  const f = positiveFrequencies('frequencyHz', frequencyHz);
+  assertAscending('frequencyHz', f);
+  assertSameLength('magnitudeDb', magnitudeDb, f.length);
+  assertFiniteArray('magnitudeDb', magnitudeDb);
+  return f;
+}

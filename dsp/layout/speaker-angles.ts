@@ -26,17 +26,20 @@ export function assertPoint(name: string, p: PointM): void {
   assertFinite(`${name}.z`, p.z);
 }
 
+/** The vector from one point to another, m, after checking both (each named in any error, `fromName` first). */
+export function pointOffsetM(fromName: string, from: PointM, toName: string, to: PointM): PointM {
+  assertPoint(fromName, from);
+  assertPoint(toName, to);
+  return { x: to.x - from.x, y: to.y - from.y, z: to.z - from.z };
+}
+
 /**
  * Azimuth, elevation and distance of a speaker from the listening position (geometry; azimuth sign as in
  * ITU-R BS.2051: positive to the left).
  * @example speakerAngles({ listenerM: { x: 2, y: 3, z: 1.2 }, speakerM: { x: 1, y: 3 - Math.sqrt(3), z: 1.2 } }).azimuthDeg // 30
  */
 export function speakerAngles({ listenerM, speakerM }: SpeakerAnglesOptions): SpeakerAngles {
-  assertPoint('listenerM', listenerM);
-  assertPoint('speakerM', speakerM);
-  const dx = speakerM.x - listenerM.x;
-  const dy = speakerM.y - listenerM.y;
-  const dz = speakerM.z - listenerM.z;
+  const { x: dx, y: dy, z: dz } = pointOffsetM('listenerM', listenerM, 'speakerM', speakerM);
   const horizontalDistanceM = Math.hypot(dx, dy);
   const distanceM = Math.hypot(dx, dy, dz);
   if (distanceM === 0) throw new RangeError('speakerM must differ from listenerM');

@@ -1,7 +1,7 @@
-import { RAD_TO_DEG } from '../internal/angles';
+import { RAD_TO_DEG, wrapDeg } from '../internal/angles';
 import { assertFinite } from '../internal/guards';
 import type { PointM } from '../room/room-types';
-import { assertPoint } from './speaker-angles';
+import { pointOffsetM } from './speaker-angles';
 
 /** Options of {@link toeInDeg}. */
 export interface ToeInOptions {
@@ -29,17 +29,11 @@ export interface ToeInResult {
  * @example toeInDeg({ speakerM: { x: 1, y: 0.5, z: 1 }, aimM: { x: 2.5, y: 3.1, z: 1 } }).toeInDeg // 30.0
  */
 export function toeInDeg({ speakerM, aimM, facingDeg = 0 }: ToeInOptions): ToeInResult {
-  assertPoint('speakerM', speakerM);
-  assertPoint('aimM', aimM);
+  const { x: dx, y: dy, z: dz } = pointOffsetM('speakerM', speakerM, 'aimM', aimM);
   assertFinite('facingDeg', facingDeg);
-  const dx = aimM.x - speakerM.x;
-  const dy = aimM.y - speakerM.y;
-  const dz = aimM.z - speakerM.z;
   const horizontal = Math.hypot(dx, dy);
   if (horizontal === 0) throw new RangeError('aimM must differ from speakerM in the floor plan');
   const aimHeadingDeg = Math.atan2(dx, dy) * RAD_TO_DEG;
-  let rotationDeg = aimHeadingDeg - facingDeg;
-  rotationDeg -= 360 * Math.round(rotationDeg / 360);
-  if (rotationDeg <= -180) rotationDeg += 360;
+  const rotationDeg = wrapDeg(aimHeadingDeg - facingDeg);
   return { toeInDeg: Math.abs(rotationDeg), rotationDeg, aimHeadingDeg, tiltDeg: Math.atan2(dz, horizontal) * RAD_TO_DEG };
 }

@@ -1,8 +1,9 @@
 import { speedOfSoundMps } from '../air/speed-of-sound';
 import type { PathSpec } from '../blend/blend-types';
 import { compilePath } from '../blend/path-plan';
-import { DEG_TO_RAD, LN_POWER_TO_DB, RAD_TO_DEG, wrapDeg } from '../internal/angles';
-import { assertAscending, assertFiniteArray, assertSameLength, positiveFrequencies } from '../internal/guards';
+import { DEG_TO_RAD, RAD_TO_DEG, wrapDeg } from '../internal/angles';
+import { writeTimesPolar } from '../internal/complex';
+import { assertFiniteArray, assertSameLength, curveFrequencies } from '../internal/guards';
 import { evaluatePlanOnGrid, planValues } from '../internal/section-plan';
 import { minimumPhaseDeg } from './minimum-phase';
 
@@ -36,10 +37,7 @@ export interface ProcessedMeasurement {
  * @example applyPathToMeasured({ frequencyHz, magnitudeDb, path: sub, temperatureC: 20 }).phaseEstimated // true
  */
 export function applyPathToMeasured(options: ApplyPathOptions): ProcessedMeasurement {
-  const f = positiveFrequencies('frequencyHz', options.frequencyHz);
-  assertAscending('frequencyHz', f);
-  assertSameLength('magnitudeDb', options.magnitudeDb, f.length);
-  assertFiniteArray('magnitudeDb', options.magnitudeDb);
+  const f = curveFrequencies(options.frequencyHz, options.magnitudeDb);
   let phase: ArrayLike<number>;
   let phaseEstimated = false;
   if (options.phaseDeg !== undefined) {
@@ -61,20 +59,12 @@ export function applyPathToMeasured(options: ApplyPathOptions): ProcessedMeasure
   const omega = Float64Array.from(f, (x) => 2 * Math.PI * x);
   const h = planValues(n);
   evaluatePlanOnGrid(compiled.plan, omega, h);
+  const out = { re, im, magnitudeDb };
   for (let i = 0; i < n; i++) {
-    const w = omega[i] as number;
+    // The filter's H times the measurement (its level and phase, less the delay's ωτ).
     const mag = Math.pow(10, (options.magnitudeDb[i] as number) / 20);
-    const ph = (phase[i] as number) * DEG_TO_RAD - w * compiled.delayS;
-    const mr = mag * Math.cos(ph);
-    const mi = mag * Math.sin(ph);
-    const hr = h.re[i] as number;
-    const hi = h.im[i] as number;
-    const r = mr * hr - mi * hi;
-    const m = mr * hi + mi * hr;
-    re[i] = r;
-    im[i] = m;
-    magnitudeDb[i] = LN_POWER_TO_DB * Math.log(r * r + m * m + 1e-300);
-    phaseDeg[i] = wrapDeg(Math.atan2(m, r) * RAD_TO_DEG);
+    writeTimesPolar(out, i, h.re[i] as number, h.im[i] as number, mag, (phase[i] as number) * DEG_TO_RAD - (omega[i] as number) * compiled.delayS);
+    phaseDeg[i] = wrapDeg(Math.atan2(im[i] as number, re[i] as number) * RAD_TO_DEG);
   }
   return { frequencyHz: Float64Array.from(f), re, im, magnitudeDb, phaseDeg, phaseEstimated };
 }

@@ -1,5 +1,5 @@
 import { LN_POWER_TO_DB } from '../internal/angles';
-import { assertAscending, assertFiniteArray, assertPositive, assertSameLength, positiveFrequencies } from '../internal/guards';
+import { assertPositive, curveFrequencies } from '../internal/guards';
 
 /** Options of {@link bandPowerAverageDb}. */
 export interface BandPowerAverageOptions {
@@ -24,10 +24,7 @@ export interface BandPowerAverage {
  * @example bandPowerAverageDb({ frequencyHz: [100, 200, 400], magnitudeDb: [0, 0, 0], startHz: 100, stopHz: 400 }).levelDb // 0
  */
 export function bandPowerAverageDb({ frequencyHz, magnitudeDb, startHz, stopHz }: BandPowerAverageOptions): BandPowerAverage {
-  const f = positiveFrequencies('frequencyHz', frequencyHz);
-  assertAscending('frequencyHz', f);
-  assertSameLength('magnitudeDb', magnitudeDb, f.length);
-  assertFiniteArray('magnitudeDb', magnitudeDb);
+  const f = curveFrequencies(frequencyHz, magnitudeDb);
   assertPositive('startHz', startHz);
   assertPositive('stopHz', stopHz);
   if (stopHz <= startHz) throw new RangeError(`stopHz must be above startHz (got ${stopHz} ≤ ${startHz})`);

@@ -1,5 +1,5 @@
 import { RAD_TO_DEG, wrapDeg } from '../internal/angles';
-import { assertAscending, assertFiniteArray, assertSameLength, positiveFrequencies } from '../internal/guards';
+import { curveFrequencies } from '../internal/guards';
 import { interpolateLogHz } from '../internal/interpolate';
 import { logFrequencyGridHz } from '../grid/log-frequency-grid';
 
@@ -62,10 +62,7 @@ const INTERNAL_POINTS_PER_OCTAVE = 48;
  * @example minimumPhaseDeg({ frequencyHz: grid, magnitudeDb: butterworthMagnitudeDb }).phaseDeg
  */
 export function minimumPhaseDeg({ frequencyHz, magnitudeDb }: MinimumPhaseOptions): MinimumPhaseResult {
-  const f = positiveFrequencies('frequencyHz', frequencyHz);
-  assertAscending('frequencyHz', f);
-  assertSameLength('magnitudeDb', magnitudeDb, f.length);
-  assertFiniteArray('magnitudeDb', magnitudeDb);
+  const f = curveFrequencies(frequencyHz, magnitudeDb);
   if (f.length < 2) throw new RangeError('frequencyHz must hold at least two frequencies');
   const fLo = f[0] as number;
   const fHi = f[f.length - 1] as number;

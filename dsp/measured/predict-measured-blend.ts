@@ -1,4 +1,5 @@
-import { LN_POWER_TO_DB, RAD_TO_DEG, wrapDeg } from '../internal/angles';
+import { RAD_TO_DEG, wrapDeg } from '../internal/angles';
+import { complexLevelDb } from '../internal/complex';
 import { MAX_PATHS } from '../blend/blend-types';
 import { applyPathToMeasured } from './apply-path-to-measured';
 import type { MeasuredPathInput } from './measured-types';
@@ -51,7 +52,7 @@ export function predictMeasuredBlend({ frequencyHz, measured, temperatureC }: Pr
       r += p.re[i] as number;
       m += p.im[i] as number;
     }
-    magnitudeDb[i] = LN_POWER_TO_DB * Math.log(r * r + m * m + 1e-300);
+    magnitudeDb[i] = complexLevelDb(r, m);
     phaseDeg[i] = wrapDeg(Math.atan2(m, r) * RAD_TO_DEG);
   }
   return {

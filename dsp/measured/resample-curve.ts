@@ -1,4 +1,4 @@
-import { assertAscending, assertFiniteArray, assertSameLength, positiveFrequencies } from '../internal/guards';
+import { assertFiniteArray, assertSameLength, curveFrequencies, positiveFrequencies } from '../internal/guards';
 import { interpolateLogHz } from '../internal/interpolate';
 import { unwrapDeg } from './unwrap-phase';
 import { wrapDeg } from '../internal/angles';
@@ -27,10 +27,7 @@ export interface ResampledCurve {
  * @example resampleCurve({ frequencyHz: [10, 100], magnitudeDb: [0, 20], targetHz: [31.62] }).magnitudeDb[0] // ≈ 10
  */
 export function resampleCurve({ frequencyHz, magnitudeDb, phaseDeg, targetHz }: ResampleCurveOptions): ResampledCurve {
-  const f = positiveFrequencies('frequencyHz', frequencyHz);
-  assertAscending('frequencyHz', f);
-  assertSameLength('magnitudeDb', magnitudeDb, f.length);
-  assertFiniteArray('magnitudeDb', magnitudeDb);
+  const f = curveFrequencies(frequencyHz, magnitudeDb);
   const target = positiveFrequencies('targetHz', targetHz);
   const magnitude = new Float64Array(target.length);
   let unwrapped: Float64Array | undefined;

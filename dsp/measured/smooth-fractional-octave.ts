@@ -1,5 +1,5 @@
 import { LN_POWER_TO_DB } from '../internal/angles';
-import { assertAscending, assertFiniteArray, assertIntegerInRange, assertSameLength, positiveFrequencies } from '../internal/guards';
+import { assertIntegerInRange, curveFrequencies } from '../internal/guards';
 
 /** Options of {@link smoothFractionalOctave}. */
 export interface SmoothOptions {
@@ -21,10 +21,7 @@ export interface SmoothedCurve {
  * @example smoothFractionalOctave({ frequencyHz: grid, magnitudeDb: curve, fraction: 3 }).magnitudeDb
  */
 export function smoothFractionalOctave({ frequencyHz, magnitudeDb, fraction }: SmoothOptions): SmoothedCurve {
-  const f = positiveFrequencies('frequencyHz', frequencyHz);
-  assertAscending('frequencyHz', f);
-  assertSameLength('magnitudeDb', magnitudeDb, f.length);
-  assertFiniteArray('magnitudeDb', magnitudeDb);
+  const f = curveFrequencies(frequencyHz, magnitudeDb);
   assertIntegerInRange('fraction', fraction, 1, 48);
   const n = f.length;
   // Prefix sums of linear power (normalized by the peak to stay in range).

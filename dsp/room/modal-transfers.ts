@@ -1,5 +1,5 @@
 import { speedOfSoundMps } from '../air/speed-of-sound';
-import { LN_POWER_TO_DB } from '../internal/angles';
+import { complexLevelDb } from '../internal/complex';
 import { assertFinite, assertPositive, positiveFrequencies } from '../internal/guards';
 import { roomModes } from './room-modes';
 import type { PointM, RoomDimensions } from './room-types';
@@ -160,7 +160,7 @@ export function modalTransfersValidated(
       const curve = curves[p] as ModalTransferCurve;
       curve.re[i] = pr;
       curve.im[i] = pi;
-      curve.magnitudeDb[i] = LN_POWER_TO_DB * Math.log(pr * pr + pi * pi + 1e-300);
+      curve.magnitudeDb[i] = complexLevelDb(pr, pi);
     }
   }
   const transfers: ModalTransferCurve[][] = [];

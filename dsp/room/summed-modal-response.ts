@@ -1,4 +1,4 @@
-import { LN_POWER_TO_DB } from '../internal/angles';
+import { complexLevelDb, writeTimesPolar } from '../internal/complex';
 import { assertFinite, assertNonNegative, positiveFrequencies } from '../internal/guards';
 import { assertInsideRoom, assertRoomAndDamping, modalTransfersValidated } from './modal-transfers';
 import type { PointM, RoomDimensions } from './room-types';
@@ -41,8 +41,6 @@ export interface SummedModalResponseResult {
   readonly modeCount: number;
 }
 
-const toDb = (re: number, im: number): number => LN_POWER_TO_DB * Math.log(re * re + im * im + 1e-300);
-
 /**
  * Pressure at one receiver from several sources in a rectangular room: each source's modal transfer (modes and
  * resonance terms computed once for all sources)
@@ -74,23 +72,15 @@ export function summedModalResponse(options: SummedModalResponseOptions): Summed
     const re = new Float64Array(n);
     const im = new Float64Array(n);
     const magnitudeDb = new Float64Array(n);
+    const curves: ComplexPressure = { re, im, magnitudeDb };
     for (let i = 0; i < n; i++) {
-      const phase = -2 * Math.PI * (t.frequencyHz[i] as number) * (delayMs / 1000);
-      const cr = amplitude * Math.cos(phase);
-      const ci = amplitude * Math.sin(phase);
-      const a = transfer.re[i] as number;
-      const b = transfer.im[i] as number;
-      const r = a * cr - b * ci;
-      const m = a * ci + b * cr;
-      re[i] = r;
-      im[i] = m;
-      magnitudeDb[i] = toDb(r, m);
-      sumRe[i] = (sumRe[i] as number) + r;
-      sumIm[i] = (sumIm[i] as number) + m;
+      writeTimesPolar(curves, i, transfer.re[i] as number, transfer.im[i] as number, amplitude, -2 * Math.PI * (t.frequencyHz[i] as number) * (delayMs / 1000));
+      sumRe[i] = (sumRe[i] as number) + (re[i] as number);
+      sumIm[i] = (sumIm[i] as number) + (im[i] as number);
     }
-    perSource.push({ re, im, magnitudeDb });
+    perSource.push(curves);
   });
   const magnitudeDb = new Float64Array(n);
-  for (let i = 0; i < n; i++) magnitudeDb[i] = toDb(sumRe[i] as number, sumIm[i] as number);
+  for (let i = 0; i < n; i++) magnitudeDb[i] = complexLevelDb(sumRe[i] as number, sumIm[i] as number);
   return { frequencyHz: t.frequencyHz, perSource, sum: { re: sumRe, im: sumIm, magnitudeDb }, modeCount: t.modeCount };
 }

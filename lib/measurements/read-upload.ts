@@ -4,38 +4,13 @@
  * is not multipart or a file whose declared type is clearly not text.
  */
 import { AppError, invalid, unsupportedMedia } from '@/lib/errors';
+import { readBodyBytes } from '@/lib/http';
 import { isTextMediaType, MAX_MEASUREMENT_BYTES } from './parse-measurement';
 
 /** Room for the multipart boundaries and the text fields around a file of the largest size. */
 const MULTIPART_OVERHEAD_BYTES = 64 * 1024;
 
 const tooLargeFile = () => new AppError(413, 'too_large', `The file is larger than ${MAX_MEASUREMENT_BYTES / 1024 / 1024} MB; split it or thin it out to at most 2 MB.`);
-
-async function readBytes(request: Request, limitBytes: number): Promise<Uint8Array> {
-  const declared = Number(request.headers.get('content-length') ?? NaN);
-  if (Number.isFinite(declared) && declared > limitBytes) throw tooLargeFile();
-  if (!request.body) return new Uint8Array();
-  const reader = request.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    size += value.byteLength;
-    if (size > limitBytes) {
-      await reader.cancel().catch(() => {});
-      throw tooLargeFile();
-    }
-    chunks.push(value);
-  }
-  const out = new Uint8Array(size);
-  let at = 0;
-  for (const c of chunks) {
-    out.set(c, at);
-    at += c.byteLength;
-  }
-  return out;
-}
 
 export interface MeasurementUpload {
   /** Every text field of the form (the file excluded). */
@@ -48,7 +23,7 @@ export interface MeasurementUpload {
 export async function readMeasurementUpload(request: Request): Promise<MeasurementUpload> {
   const type = request.headers.get('content-type') ?? '';
   if (!/^multipart\/form-data\b/i.test(type)) throw unsupportedMedia('multipart/form-data with the measurement in the field "file"');
-  const body = await readBytes(request, MAX_MEASUREMENT_BYTES + MULTIPART_OVERHEAD_BYTES);
+  const body = await readBodyBytes(request, MAX_MEASUREMENT_BYTES + MULTIPART_OVERHEAD_BYTES, tooLargeFile);
   let form: FormData;
   try {
     form = await new Response(body as BodyInit, { headers: { 'content-type': type } }).formData();

@@ -16,7 +16,6 @@ import sys
 
 import numpy as np
 import scipy
-from scipy import signal
 
 _spec = importlib.util.spec_from_file_location('two_way', os.path.join(os.path.dirname(__file__), 'two-way-fixtures.py'))
 two_way = importlib.util.module_from_spec(_spec)
@@ -24,21 +23,6 @@ _spec.loader.exec_module(two_way)
 
 SEED = 20241202
 COUNT = 24
-
-
-def path_response(path, w, speed):
-    f = path['filter']
-    b, a = two_way.filter_ba(f['family'], f['order'], f['response'], f['cornerHz'])
-    for rolloff in path['rolloff']:
-        rb, ra = two_way.rolloff_ba(rolloff)
-        b, a = np.polymul(b, rb), np.polymul(a, ra)
-    _, h = signal.freqs(b, a, worN=w)
-    tau = path['delayMs'] / 1000 + path.get('distanceM', 0.0) / speed
-    gain = 10 ** (path['gainDb'] / 20) * (-1 if path['invert'] else 1)
-    s = 1j * w
-    dlog = 1j * (np.polyval(np.polyder(b), s) / np.polyval(b, s) - np.polyval(np.polyder(a), s) / np.polyval(a, s)) - 1j * tau
-    hk = gain * h * np.exp(-1j * w * tau)
-    return hk, hk * dlog
 
 
 def low_rolloff(rng, low_hz, high_hz):
@@ -49,12 +33,10 @@ def low_rolloff(rng, low_hz, high_hz):
 
 def main():
     rng = np.random.default_rng(SEED)
-    freq = 10.0 * 2.0 ** (np.arange(0, int(np.floor(np.log2(20000 / 10) * 12)) + 1) / 12)
-    w = 2 * np.pi * freq
+    freq, w = two_way.fixture_grid()
     systems = []
     for k in range(COUNT):
-        temperature_c = float(np.round(rng.uniform(5, 35), 2))
-        speed = 331.3 * np.sqrt(1 + temperature_c / 273.15)
+        temperature_c, speed = two_way.random_air(rng)
         mains = {'name': 'mains', 'filter': two_way.random_filter(rng, 'highpass'), 'rolloff': [low_rolloff(rng, 35, 90)],
                  'gainDb': float(np.round(rng.uniform(-6, 6), 3)), 'delayMs': float(np.round(rng.uniform(0, 10), 4)),
                  'invert': False, 'distanceM': float(np.round(rng.uniform(0.5, 6), 3))}
@@ -66,23 +48,12 @@ def main():
                'gainDb': float(np.round(rng.uniform(-6, 6), 3)), 'delayMs': float(np.round(rng.uniform(0, 10), 4)),
                'invert': bool(rng.random() < 0.5), 'distanceM': float(np.round(rng.uniform(0.5, 6), 3))}
         paths = [mains, sub]
-        total = np.zeros_like(w, dtype=complex)
-        total_d = np.zeros_like(w, dtype=complex)
-        sub_only = None
-        for path in paths:
-            hk, dk = path_response(path, w, speed)
-            total += hk
-            total_d += dk
-            sub_only = hk
+        total, sub_only = two_way.sum_curves(paths, w, speed)
         systems.append({
             'temperatureC': temperature_c,
             'paths': paths,
             'subMagnitudeDb': [float(x) for x in 20 * np.log10(np.abs(sub_only))],
-            'sum': {
-                'magnitudeDb': [float(x) for x in 20 * np.log10(np.abs(total))],
-                'phaseDeg': [float(x) for x in np.angle(total, deg=True)],
-                'groupDelayMs': [float(x) for x in -np.imag(total_d / total) * 1000],
-            },
+            'sum': total,
         })
     json.dump({'source': 'scipy.signal.freqs ' + scipy.__version__ + ', numpy ' + np.__version__,
                'generator': 'scripts/reference/multi-rolloff-fixtures.py', 'seed': SEED,

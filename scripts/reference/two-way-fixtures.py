@@ -68,10 +68,14 @@ def random_rolloff(rng, for_sub):
 
 
 def path_response(path, w, speed):
-    b1, a1 = filter_ba(path['filter']['family'], path['filter']['order'], path['filter']['response'],
-                       path['filter']['cornerHz'])
-    b2, a2 = rolloff_ba(path.get('rolloff', {'kind': 'none'}))
-    b, a = np.polymul(b1, b2), np.polymul(a1, a2)
+    """A path's H(w) and dH/dw: its crossover filter times every roll-off of its 'rolloff' (one, or a list), then gain,
+    polarity and e^(-j w tau)."""
+    f = path['filter']
+    b, a = filter_ba(f['family'], f['order'], f['response'], f['cornerHz'])
+    rolloffs = path.get('rolloff', {'kind': 'none'})
+    for rolloff in rolloffs if isinstance(rolloffs, list) else [rolloffs]:
+        rb, ra = rolloff_ba(rolloff)
+        b, a = np.polymul(b, rb), np.polymul(a, ra)
     _, h = signal.freqs(b, a, worN=w)
     tau = path['delayMs'] / 1000 + path.get('distanceM', 0.0) / speed
     gain = 10 ** (path['gainDb'] / 20) * (-1 if path['invert'] else 1)
@@ -82,14 +86,42 @@ def path_response(path, w, speed):
     return hk, hk * dlog
 
 
+def sum_curves(paths, w, speed):
+    """The complex sum of the paths as the fixtures store it (magnitude dB, phase deg, group delay -Im(S'/S) in ms),
+    and the last path's own H."""
+    total = np.zeros_like(w, dtype=complex)
+    total_d = np.zeros_like(w, dtype=complex)
+    hk = None
+    for path in paths:
+        hk, dk = path_response(path, w, speed)
+        total += hk
+        total_d += dk
+    group_ms = -np.imag(total_d / total) * 1000
+    return {
+        'magnitudeDb': [float(x) for x in 20 * np.log10(np.abs(total))],
+        'phaseDeg': [float(x) for x in np.angle(total, deg=True)],
+        'groupDelayMs': [float(x) for x in group_ms],
+    }, hk
+
+
+def fixture_grid():
+    """The fixtures' frequencies, Hz (10 Hz to 20 kHz at 12 points per octave), and w = 2*pi*f."""
+    freq = 10.0 * 2.0 ** (np.arange(0, int(np.floor(np.log2(20000 / 10) * 12)) + 1) / 12)
+    return freq, 2 * np.pi * freq
+
+
+def random_air(rng):
+    """A random air temperature, deg C (5 to 35), and its speed of sound, m/s (Kinsler et al. 2000)."""
+    temperature_c = float(np.round(rng.uniform(5, 35), 2))
+    return temperature_c, 331.3 * np.sqrt(1 + temperature_c / 273.15)
+
+
 def main():
     rng = np.random.default_rng(SEED)
-    freq = 10.0 * 2.0 ** (np.arange(0, int(np.floor(np.log2(20000 / 10) * 12)) + 1) / 12)
-    w = 2 * np.pi * freq
+    freq, w = fixture_grid()
     systems = []
     for k in range(COUNT):
-        temperature_c = float(np.round(rng.uniform(5, 35), 2))
-        speed = 331.3 * np.sqrt(1 + temperature_c / 273.15)
+        temperature_c, speed = random_air(rng)
         paths = []
         for role, response in (('mains', 'highpass'), ('sub', 'lowpass')):
             path = {'name': role, 'filter': random_filter(rng, response),
@@ -104,22 +136,7 @@ def main():
             if rng.random() < 0.7:
                 path['distanceM'] = float(np.round(rng.uniform(0.5, 6), 3))
             paths.append(path)
-        total = np.zeros_like(w, dtype=complex)
-        total_d = np.zeros_like(w, dtype=complex)
-        for path in paths:
-            hk, dk = path_response(path, w, speed)
-            total += hk
-            total_d += dk
-        group_ms = -np.imag(total_d / total) * 1000
-        systems.append({
-            'temperatureC': temperature_c,
-            'paths': paths,
-            'sum': {
-                'magnitudeDb': [float(x) for x in 20 * np.log10(np.abs(total))],
-                'phaseDeg': [float(x) for x in np.angle(total, deg=True)],
-                'groupDelayMs': [float(x) for x in group_ms],
-            },
-        })
+        systems.append({'temperatureC': temperature_c, 'paths': paths, 'sum': sum_curves(paths, w, speed)[0]})
     json.dump({'source': 'scipy.signal.freqs ' + scipy.__version__ + ', numpy ' + np.__version__,
                'generator': 'scripts/reference/two-way-fixtures.py', 'seed': SEED,
                'frequencyHz': [float(x) for x in freq], 'systems': systems}, sys.stdout, separators=(',', ':'))

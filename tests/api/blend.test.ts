@@ -1,15 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { POST } from '@/app/api/v1/blend/route';
 import { assertInDelta } from '../helpers/assert-in-delta';
+import { issuePaths, postTo, type Json } from '../helpers/compute-route';
 import { speedMps, mul, div, add, scale, bw2, lr4, late, levelDb, type C } from '../helpers/complex-oracle';
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any -- answers are read loosely; the assertions check the shapes
-type Json = Record<string, any>;
-
-async function post(body: unknown, headers: Record<string, string> = { 'content-type': 'application/json' }): Promise<{ status: number; body: Json }> {
-  const res = await POST(new Request('http://x/api/v1/blend', { method: 'POST', headers, body: typeof body === 'string' ? body : JSON.stringify(body) }), undefined as never);
-  return { status: res.status, body: (await res.json()) as Json };
-}
+const post = postTo(POST, '/api/v1/blend');
 
 const path = (response: 'highpass' | 'lowpass' | 'none', family: 'butterworth' | 'linkwitz-riley', order: number, extra: Json = {}) => ({
   name: response === 'highpass' ? 'mains' : 'sub',
@@ -27,13 +22,6 @@ const specExample = body([
   path('highpass', 'linkwitz-riley', 4),
   { name: 'sub', filter: { family: 'butterworth', order: 2, response: 'lowpass', cornerHz: 80 }, gainDb: 0, delayMs: 2.5, invert: true, distanceM: 3.4 },
 ]);
-
-// ---------------------------------------------------------------- an independent oracle, from the formulas
-
-
-function issuePaths(b: Json): string[] {
-  return (b.error?.issues ?? []).map((i: { path: string }) => i.path);
-}
 
 describe('POST /api/v1/blend', () => {
   it('answers the API page example with the contract fields', async () => {

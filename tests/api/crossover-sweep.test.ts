@@ -1,29 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { POST } from '@/app/api/v1/crossover-sweep/route';
 import { assertInDelta } from '../helpers/assert-in-delta';
+import { BW2, LR4, postTo, refusedNaming, wholeSystem, type Json } from '../helpers/compute-route';
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any -- answers are read loosely; the assertions check the shapes
-type Json = Record<string, any>;
-
-async function post(body: unknown, headers: Record<string, string> = { 'content-type': 'application/json' }): Promise<{ status: number; body: Json }> {
-  const res = await POST(new Request('http://x/api/v1/crossover-sweep', { method: 'POST', headers, body: typeof body === 'string' ? body : JSON.stringify(body) }), undefined as never);
-  return { status: res.status, body: (await res.json()) as Json };
-}
-
-const LR4 = { family: 'linkwitz-riley', order: 4 };
-const BW2 = { family: 'butterworth', order: 2 };
+const post = postTo(POST, '/api/v1/crossover-sweep');
 
 /** The whole system as it is (the present row: LR4 / LR4 at 80 Hz, both 3 m away, no delays) and what to try. */
-const base = (extra: Json = {}) => ({
-  temperatureC: 20,
-  crossoverHz: 80,
-  mainsHighpass: LR4,
-  subLowpass: LR4,
-  mains: { name: 'L', distanceM: 3 },
-  subs: [{ name: 'Sub', distanceM: 3 }],
-  pairings: [{ mainsFilter: LR4, subFilter: LR4 }],
-  ...extra,
-});
+const base = (extra: Json = {}) => wholeSystem(3, { pairings: [{ mainsFilter: LR4, subFilter: LR4 }], ...extra });
 
 /** An invented sealed bookshelf (62 Hz, Q 0.71) crossed low, at 60 Hz BW2 / LR4, to an invented sealed sub 0.31 m farther. */
 const SEALED_MAINS = { kind: 'sealed', cornerHz: 62, q: 0.71 };
@@ -237,11 +220,7 @@ describe('POST /api/v1/crossover-sweep', () => {
       // The shape before the whole-system request: refused, not silently ignored.
       ['an old per-pairing field', '(body)', base({ mainsRolloff: { kind: 'none' } })],
     ];
-    it.each(cases)('%s → %s', async (_, where, request) => {
-      const { status, body: b } = await post(request);
-      expect(status).toBe(400);
-      expect(b.error.issues.map((i: { path: string }) => i.path)).toContain(where);
-    });
+    it.each(cases)('%s → %s', refusedNaming(post));
   });
 
   it('refuses bodies over 256 kB with 413 and non-JSON with 415', async () => {

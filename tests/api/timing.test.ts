@@ -1,28 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { POST } from '@/app/api/v1/timing/route';
 import { assertInDelta } from '../helpers/assert-in-delta';
+import { BW2, postTo, refusedNaming, wholeSystem, type Json } from '../helpers/compute-route';
 import { speedMps, mul, add, scale, bw2, lr4, late, levelDb, type C } from '../helpers/complex-oracle';
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any -- answers are read loosely; the assertions check the shapes
-type Json = Record<string, any>;
+const post = postTo(POST, '/api/v1/timing');
 
-async function post(body: unknown, headers: Record<string, string> = { 'content-type': 'application/json' }): Promise<{ status: number; body: Json }> {
-  const res = await POST(new Request('http://x/api/v1/timing', { method: 'POST', headers, body: typeof body === 'string' ? body : JSON.stringify(body) }), undefined as never);
-  return { status: res.status, body: (await res.json()) as Json };
-}
-
-const LR4 = { family: 'linkwitz-riley', order: 4 };
-const BW2 = { family: 'butterworth', order: 2 };
-
-const base = (extra: Json = {}) => ({
-  temperatureC: 20,
-  crossoverHz: 80,
-  mainsHighpass: LR4,
-  subLowpass: LR4,
-  mains: { name: 'L', distanceM: 3.4 },
-  subs: [{ name: 'Sub', distanceM: 3.4 }],
-  ...extra,
-});
+/** The whole system as it is: LR4 / LR4 at 80 Hz, both 3.4 m away, no delays. */
+const base = (extra: Json = {}) => wholeSystem(3.4, extra);
 
 // ---------------------------------------------------------------- an independent oracle, from the formulas
 
@@ -271,11 +256,7 @@ describe('POST /api/v1/timing', () => {
       ['temperature as text', 'temperatureC', base({ temperatureC: 'warm' })],
       ['misspelt field', 'mains', base({ mains: { name: 'L', distanceM: 3, distance: 3 } })],
     ];
-    it.each(cases)('%s → %s', async (_, where, request) => {
-      const { status, body: b } = await post(request);
-      expect(status).toBe(400);
-      expect(b.error.issues.map((i: { path: string }) => i.path)).toContain(where);
-    });
+    it.each(cases)('%s → %s', refusedNaming(post));
   });
 
   it('refuses bodies over 256 kB with 413 and non-JSON with 415', async () => {

@@ -9,6 +9,7 @@ import {
   assertPositive,
   assertSameLength,
   assertTemperature,
+  curveFrequencies,
   positiveFrequencies,
 } from '@/dsp/internal/guards';
 
@@ -63,5 +64,14 @@ describe('dsp guards', () => {
     expect(() => assertAscending('frequencyHz', [10, NaN])).toThrow(/index 1/);
     expect(() => assertSameLength('phaseDeg', [1, 2], 2)).not.toThrow();
     expect(() => assertSameLength('phaseDeg', [1, 2], 3)).toThrow('phaseDeg must have 3 entries like frequencyHz (got 2)');
+  });
+  it('curveFrequencies checks a curve in order (frequencies positive, ascending; one finite level each) and returns the frequencies', () => {
+    const f = curveFrequencies([20, 40, 80], [0, -3, -12]);
+    expect(f).toBeInstanceOf(Float64Array);
+    expect(Array.from(f)).toEqual([20, 40, 80]);
+    expect(() => curveFrequencies([20, 0], [0, NaN])).toThrow(/^frequencyHz\[1\] must be a finite frequency greater than 0/);
+    expect(() => curveFrequencies([40, 20], [0])).toThrow('frequencyHz must be strictly ascending (index 1)');
+    expect(() => curveFrequencies([20, 40], [0])).toThrow('magnitudeDb must have 2 entries like frequencyHz (got 1)');
+    expect(() => curveFrequencies([20, 40], [0, Infinity])).toThrow(/^magnitudeDb\[1\] must be a finite number/);
   });
 });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { speakerAngles } from '@/dsp';
+import { pointOffsetM } from '@/dsp/layout/speaker-angles';
 import { assertInDelta } from '../../helpers/assert-in-delta';
 
 const mlp = { x: 2.45, y: 4, z: 1.2 };
@@ -21,5 +22,13 @@ describe('speakerAngles', () => {
   });
   it('throws RangeError naming speakerM for NaN coordinates', () => {
     expect(() => speakerAngles({ listenerM: mlp, speakerM: { x: NaN, y: 0, z: 0 } })).toThrow(/speakerM\.x/);
+  });
+});
+
+describe('pointOffsetM', () => {
+  it('is to − from, coordinate by coordinate (geometry), and checks the first point first', () => {
+    expect(pointOffsetM('listenerM', mlp, 'speakerM', { x: 1.2, y: 1.5, z: 1.7 })).toEqual({ x: 1.2 - 2.45, y: 1.5 - 4, z: 1.7 - 1.2 });
+    expect(() => pointOffsetM('listenerM', { x: 0, y: Infinity, z: 0 }, 'speakerM', { x: NaN, y: 0, z: 0 })).toThrow(/^listenerM\.y must be a finite number/);
+    expect(() => pointOffsetM('listenerM', mlp, 'aimM', null as never)).toThrow('aimM must be a point {x, y, z}');
   });
 });
