@@ -5,6 +5,7 @@ export { arrivalTimeMs } from './air/arrival-time';
 
 export { logFrequencyGridHz } from './grid/log-frequency-grid';
 export { fractionalOctaveBands, OCTAVE_RATIO_BASE_TEN } from './grid/fractional-octave-bands';
+export { nominalMidbandHz } from './grid/nominal-midband-frequency';
 
 export type { FilterFamily, FilterSpec, FilterShape, RolloffSpec, RolloffChain, AnalogSection } from './filters/filter-types';
 export { butterworthQ } from './filters/butterworth-q';
@@ -39,7 +40,7 @@ export { roomProportionCheck } from './room/room-proportion-check';
 export { modalTransfer } from './room/modal-transfer';
 export { modalTransfers } from './room/modal-transfers';
 export { seatSpreadDb } from './room/seat-spread';
-export { modePressureMap } from './room/mode-pressure-map';
+export { modePressureAt, modePressureMap, nodeAlignedCellCount } from './room/mode-pressure-map';
 export { quarterWaveNotchHz } from './room/quarter-wave-notch';
 export { summedModalResponse } from './room/summed-modal-response';
 
@@ -50,9 +51,11 @@ export { includedAngleDeg } from './layout/included-angle';
 export { toeInDeg } from './layout/toe-in';
 export { channelSettings, SETTING_RESOLUTION, type ChannelSettings, type ChannelSettingsOptions } from './layout/channel-settings';
 export { nominalSpeakerPosition } from './layout/nominal-position';
+export { pairPlacement } from './layout/pair-placement';
 
 export { maxSplDb, REFERENCE_LEVEL_DB, REFERENCE_PEAK_DB, LFE_PEAK_DB } from './headroom/max-spl';
 export { headroomCheck } from './headroom/headroom-check';
+export { powerLimit } from './headroom/power-limit';
 export { exposureMinutes } from './headroom/exposure-time';
 export { combinedSplDb } from './headroom/combined-spl';
 

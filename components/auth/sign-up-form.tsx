@@ -24,7 +24,7 @@ export function SignUpForm() {
   const requested = params.get('callbackUrl');
   const safeNext = safeReturnPath(requested, '/library');
   const carry = requested && safeNext !== '/library' ? `?callbackUrl=${encodeURIComponent(safeNext)}` : '';
-  const { register, handleSubmit, formState, setError: setFieldError } = useForm<Values>({ resolver: zodResolver(signUpSchema) });
+  const { register, handleSubmit, formState, setError: setFieldError } = useForm<Values>({ resolver: zodResolver(signUpSchema), mode: 'onTouched' });
 
   const onSubmit = handleSubmit(async (values) => {
     setError(null);

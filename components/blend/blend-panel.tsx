@@ -7,6 +7,7 @@ import { useSystem } from '@/components/system/system-context';
 import { Notice } from '@/components/ui/notice';
 import { useBlend } from '@/lib/hooks/use-blend';
 import { blendRequestFromDocument } from '@/lib/system-model/blend';
+import { fromFirstArrival } from '@/lib/system-model/first-arrival';
 import { blendMainSpeaker } from '@/lib/system-model/system-from-document';
 import { BlendPlots } from './blend-plots';
 import { BlendReadouts } from './blend-readouts';
@@ -40,10 +41,8 @@ export function BlendPanel() {
   const request = useMemo(() => {
     const body = blendRequestFromDocument(doc, { channel: speaker?.channel, stopHz });
     if (!body) return null;
-    // Show phase and group delay relative to the first arrival: the same air path taken off every
-    // path changes neither the levels nor how the paths line up, and keeps the phase readable.
-    const nearestM = Math.min(...body.paths.map((p) => p.distanceM ?? 0));
-    const paths = body.paths.map((p) => ({ ...p, distanceM: Math.round(((p.distanceM ?? 0) - nearestM) * 1e4) / 1e4 }));
+    // Phase and group delay relative to the first arrival at the MLP (the reference every Lesson frame uses too).
+    const { paths, nearestM } = fromFirstArrival(body.paths);
     return { ...body, paths, crossoverHz: doc.bassManagement.crossoverHz, nearestM };
   }, [doc, speaker?.channel, stopHz]);
   const { data, error, pending } = useBlend(request ? { temperatureC: request.temperatureC, grid: request.grid, paths: request.paths, crossoverHz: request.crossoverHz } : null);
@@ -78,11 +77,15 @@ export function BlendPanel() {
 
   return (
     <div className="flex flex-col gap-6 py-4">
-      <div className="grid gap-6 lg:grid-cols-[minmax(16rem,20rem)_minmax(0,1fr)]">
-        <BlendSettings channel={speaker.channel} onChannel={setChannel} error={error} nearestM={request ? request.nearestM : null} />
+      {/* Wide: the settings beside the plots. Narrow (one column): the summary and the magnitude plot first, the settings
+          right under it, then the read-outs, phase and group delay (the plots' column dissolves into the grid; order-*). */}
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(16rem,20rem)_minmax(0,1fr)]">
+        <div className="max-lg:order-3">
+          <BlendSettings channel={speaker.channel} onChannel={setChannel} error={error} nearestM={request ? request.nearestM : null} />
+        </div>
 
-        <div className="flex min-w-0 flex-col gap-4" aria-busy={pending}>
-          <div className="flex flex-wrap items-center justify-between gap-2">
+        <div className="flex min-w-0 flex-col gap-4 max-lg:contents" aria-busy={pending}>
+          <div className="flex flex-wrap items-center justify-between gap-2 max-lg:order-1">
             <p className="text-sm text-ink-soft">
               <span className="font-medium text-ink">{speaker.channel}</span> with {doc.subs.length === 1 ? 'the sub' : `${doc.subs.length} subs`}: {slopeShortName(bm.mainsHighpass)} high-pass, {slopeShortName(bm.subLowpass)} low-pass at{' '}
               <span className="num">{Math.round(bm.crossoverHz)}</span> Hz, at the MLP
@@ -98,12 +101,16 @@ export function BlendPanel() {
           </div>
 
           {unplaced && error ? (
-            <Notice kind="error" title="The blend could not be computed">
-              {error.message}
-            </Notice>
+            <div className="max-lg:order-1">
+              <Notice kind="error" title="The blend could not be computed">
+                {error.message}
+              </Notice>
+            </div>
           ) : null}
 
-          <BlendReadouts metrics={data?.metrics ?? null} pathNames={data?.paths.map((p) => p.name) ?? []} />
+          <div className="max-lg:order-4">
+            <BlendReadouts metrics={data?.metrics ?? null} pathNames={data?.paths.map((p) => p.name) ?? []} />
+          </div>
 
           <BlendPlots data={data} stopHz={stopHz} crossoverHz={bm.crossoverHz} markers={markers} fileBase={fileBase} hidden={hidden} onToggle={toggle} cursorHz={cursorHz} onCursorHz={setCursorHz} />
         </div>

@@ -5,13 +5,13 @@ import { ChartExportButtons, FrequencyPlot, chartColors, type FrequencyCsvData, 
 import type { BlendAnswer } from '@/lib/system-model/blend';
 import { blendCsv, blendTraces, groupDelayDomain, magnitudeDomain } from './blend-series';
 
-type SectionProps = Omit<FrequencyPlotProps, 'ref'> & { label: string; filename: string; subject: string; csv: FrequencyCsvData | undefined };
+type SectionProps = Omit<FrequencyPlotProps, 'ref'> & { label: string; filename: string; subject: string; csv: FrequencyCsvData | undefined; className: string };
 
 /** One plot of Blend with its download buttons below it. */
-function BlendPlotSection({ label, filename, subject, csv, ...plot }: SectionProps) {
+function BlendPlotSection({ label, filename, subject, csv, className, ...plot }: SectionProps) {
   const ref = useRef<SVGSVGElement>(null);
   return (
-    <section aria-label={label} className="flex flex-col gap-1">
+    <section aria-label={label} className={`flex flex-col gap-1 ${className}`}>
       <FrequencyPlot ref={ref} {...plot} />
       <ChartExportButtons svgRef={ref} filename={filename} csv={csv} subject={subject} />
     </section>
@@ -31,7 +31,10 @@ interface BlendPlotsProps {
   onCursorHz: (hz: number | null) => void;
 }
 
-/** Magnitude, phase and group delay of the blend, stacked under one crosshair and one legend (on the magnitude plot). */
+/**
+ * Magnitude, phase and group delay of the blend, stacked under one crosshair and one legend (on the magnitude plot).
+ * On a narrow screen Blend's panel places the magnitude plot above its settings and the other two below (max-lg:order-*).
+ */
 export function BlendPlots({ data, stopHz, crossoverHz, markers, fileBase, hidden, onToggle, cursorHz, onCursorHz }: BlendPlotsProps) {
   const traces = useMemo(() => blendTraces(data), [data]);
   const csv = useMemo(() => blendCsv(data), [data]);
@@ -41,6 +44,7 @@ export function BlendPlots({ data, stopHz, crossoverHz, markers, fileBase, hidde
     <>
       <BlendPlotSection
         label="Magnitude"
+        className="max-lg:order-2"
         filename={`${fileBase}-magnitude`}
         subject="blend magnitude"
         title="Blend magnitude"
@@ -54,6 +58,7 @@ export function BlendPlots({ data, stopHz, crossoverHz, markers, fileBase, hidde
       />
       <BlendPlotSection
         label="Phase"
+        className="max-lg:order-5"
         filename={`${fileBase}-phase`}
         subject="blend phase"
         title="Blend phase"
@@ -66,6 +71,7 @@ export function BlendPlots({ data, stopHz, crossoverHz, markers, fileBase, hidde
       />
       <BlendPlotSection
         label="Group delay"
+        className="max-lg:order-5"
         filename={`${fileBase}-group-delay`}
         subject="group delay"
         title="Group delay of the sum"

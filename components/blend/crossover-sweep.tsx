@@ -9,9 +9,10 @@ import { NumberField } from '@/components/ui/number-field';
 import { DEMO_PROFILES } from '@/lib/demo/profiles';
 import { useCrossoverSweep } from '@/lib/hooks/use-crossover-sweep';
 import { blendMainSpeaker } from '@/lib/system-model/system-from-document';
-import { applyCrossoverSweepToDocument, candidateRangeHz, crossoverSweepRequestFromDocument, type CrossoverSweepAnswerRow } from '@/lib/system-model/crossover-sweep';
+import { applyCrossoverSweepToDocument, crossoverSweepRequestFromDocument, type CrossoverSweepAnswerRow } from '@/lib/system-model/crossover-sweep';
 import type { Slope, SpeakerProfile } from '@/lib/validations/system';
 import { slopeShortName } from './slope-select';
+import { SWEEP_DEFAULT_RANGE, sweepOffer } from './sweep-offer';
 
 type Pairing = { mainsFilter: Slope; subFilter: Slope };
 
@@ -32,7 +33,6 @@ const PAIRINGS: Pairing[] = [
   { mainsFilter: LR(8), subFilter: LR(8) },
 ];
 const pairingKey = (p: Pairing) => `${slopeShortName(p.mainsFilter)}/${slopeShortName(p.subFilter)}`;
-const MAX_PAIRINGS = 6;
 
 type SortKey = 'rank' | 'crossoverHz' | 'flatnessDb' | 'minus3DbHz' | 'shiftMs' | 'mainsLowBassDb';
 const COLUMNS: { key: SortKey | null; label: string; title?: string }[] = [
@@ -73,9 +73,9 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
   const subs = profileOptions(doc.profiles, 'sub');
   const [mainsId, setMainsId] = useState(() => speaker?.profileId ?? mains[0]?.id ?? '');
   const [subId, setSubId] = useState(() => doc.subs[0]?.profileId ?? subs[0]?.id ?? '');
-  const [fromHz, setFromHz] = useState(40);
-  const [toHz, setToHz] = useState(150);
-  const [stepHz, setStepHz] = useState(5);
+  const [fromHz, setFromHz] = useState<number>(SWEEP_DEFAULT_RANGE.fromHz);
+  const [toHz, setToHz] = useState<number>(SWEEP_DEFAULT_RANGE.toHz);
+  const [stepHz, setStepHz] = useState<number>(SWEEP_DEFAULT_RANGE.stepHz);
   const current: Pairing = { mainsFilter: doc.bassManagement.mainsHighpass, subFilter: doc.bassManagement.subLowpass };
   const choices = useMemo(() => [current, ...PAIRINGS.filter((p) => pairingKey(p) !== pairingKey(current))], [current.mainsFilter.family, current.mainsFilter.order, current.subFilter.family, current.subFilter.order]); // eslint-disable-line react-hooks/exhaustive-deps -- keyed on the slopes
   const [picked, setPicked] = useState<ReadonlySet<string>>(() => new Set([pairingKey(current), 'LR4/LR4']));
@@ -84,10 +84,10 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
   const [showAll, setShowAll] = useState(false);
   const sweep = useCrossoverSweep();
 
-  const candidatesHz = candidateRangeHz(fromHz, toHz, stepHz);
   const pairings = choices.filter((p) => picked.has(pairingKey(p)));
+  // As many pairings as fit the API's row cap with this range, and the API's own words when a sweep would not fit.
+  const { candidatesHz, maxPairings, limitNote, problem: rangeProblem } = sweepOffer(fromHz, toHz, stepHz, pairings.length);
   const rowsNeeded = candidatesHz.length * pairings.length;
-  const rangeProblem = toHz < fromHz ? 'The last candidate must not be below the first.' : candidatesHz.length > 60 ? 'At most 60 candidate points; widen the step.' : rowsNeeded > 120 ? 'Candidates × slope pairings must stay at or below 120 rows; pick fewer pairings or a wider step.' : pairings.length === 0 ? 'Pick at least one slope pairing.' : null;
   const mainsProfile = mains.find((p) => p.id === mainsId);
   const subProfile = subs.find((p) => p.id === subId);
 
@@ -154,7 +154,12 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
         <NumberField label="Step" unit="Hz" value={stepHz} min={1} max={50} step={1} onChange={setStepHz} testId="sweep-step-hz" />
       </div>
       <fieldset className="flex flex-col gap-2">
-        <legend className="text-xs font-medium text-ink-soft">Slope pairings to try (mains high-pass / sub low-pass, up to {MAX_PAIRINGS})</legend>
+        <legend className="text-xs font-medium text-ink-soft">Slope pairings to try (mains high-pass / sub low-pass, up to {maxPairings})</legend>
+        {limitNote ? (
+          <p className="text-xs text-ink-soft" data-testid="sweep-pairing-limit">
+            {limitNote}
+          </p>
+        ) : null}
         <div className="flex flex-wrap gap-2">
           {choices.map((p, i) => {
             const key = pairingKey(p);
@@ -164,7 +169,7 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
                 <input
                   type="checkbox"
                   checked={on}
-                  disabled={!on && picked.size >= MAX_PAIRINGS}
+                  disabled={!on && pairings.length >= maxPairings}
                   onChange={() =>
                     setPicked((s) => {
                       const next = new Set(s);

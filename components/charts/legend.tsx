@@ -1,5 +1,7 @@
 'use client';
 
+import { traceDash } from './coincident-traces';
+import type { TraceDash } from './plot-types';
 import { chartMetrics } from './theme';
 import type { ChartEmphasis } from './theme';
 
@@ -9,6 +11,8 @@ export interface LegendItem {
   color: string;
   width?: number;
   dashed?: boolean;
+  /** Explicit dash (a trace drawn over an identical one); wins over `dashed`. */
+  dash?: TraceDash;
   note?: string;
 }
 
@@ -48,7 +52,7 @@ export function Legend({ items, hidden, onToggle, emphasis = 'default', label }:
                 y2={swatchH / 2}
                 stroke={item.color}
                 strokeWidth={(item.width ?? 2) * m.lineScale}
-                strokeDasharray={item.dashed ? '5 3' : undefined}
+                {...traceDash(item, 0.75 * m.space, '5 3')}
                 opacity={shown ? 1 : 0.35}
               />
             </svg>

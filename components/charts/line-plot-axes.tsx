@@ -1,3 +1,4 @@
+import { traceDash } from './coincident-traces';
 import type { LinePlotLayout } from './line-plot-layout';
 import type { PlotTrace } from './plot-types';
 import { chartColors, numberStyle } from './theme';
@@ -79,7 +80,7 @@ export function ExportLegend({ layout, metrics: m, traces, widthPx }: AxisProps 
         if (!at) return null;
         return (
           <g key={t.id} transform={`translate(${at.xPx},${at.yPx})`}>
-            <line x1={0} x2={20} y1={0} y2={0} stroke={t.color} strokeWidth={(t.width ?? 2) * m.lineScale} strokeDasharray={t.dashed ? '5 3' : undefined} />
+            <line x1={0} x2={20} y1={0} y2={0} stroke={t.color} strokeWidth={(t.width ?? 2) * m.lineScale} {...traceDash(t, 0.75, '5 3')} />
             <text x={26} y={0} dy="0.32em" fill={chartColors.ink}>
               {t.note ? `${t.label} (${t.note})` : t.label}
             </text>

@@ -1,3 +1,4 @@
+import { traceDash } from './coincident-traces';
 import type { LinePlotLayout } from './line-plot-layout';
 import type { PlotTrace, PointMarker, ReferenceLine, XBand, XMarker } from './plot-types';
 import { tracePath } from './series';
@@ -116,7 +117,7 @@ export function PlotTraces({ layout, metrics, traces, x, clipId, breakJumpsOver,
           fill="none"
           stroke={t.color}
           strokeWidth={(t.width ?? 2) * metrics.lineScale}
-          strokeDasharray={t.dashed ? `${7 * metrics.lineScale} ${4 * metrics.lineScale}` : undefined}
+          {...traceDash(t, metrics.lineScale, `${7 * metrics.lineScale} ${4 * metrics.lineScale}`)}
           strokeLinejoin="round"
           strokeLinecap="round"
         />

@@ -1,6 +1,7 @@
 'use client';
 
 import { useId, useMemo, useState } from 'react';
+import { markCoincidentTraces } from './coincident-traces';
 import { Legend } from './legend';
 import { ExportLegend, PlotCrosshair, PlotXAxis, PlotYAxis } from './line-plot-axes';
 import { PlotBands, PlotGrid, PlotMarkers, PlotPoints, PlotReferences, PlotTraces } from './line-plot-layers';
@@ -48,7 +49,9 @@ export function LinePlot(props: LinePlotProps) {
   const uid = domId(useId());
   const { ref: containerRef, widthPx } = useContainerWidth<HTMLDivElement>(640, props.widthPx);
   const { hidden, toggle } = useHiddenTraces(props.hidden, props.defaultHidden, props.onToggle);
-  const visible = traces.filter((t) => !hidden.has(t.id));
+  // Identical curves hide each other: the copies say "same as …" and get an offset dash.
+  const marked = useMemo(() => markCoincidentTraces(traces), [traces]);
+  const visible = marked.filter((t) => !hidden.has(t.id));
 
   // y range from every trace (not only the visible ones) so toggling does not rescale the axis.
   const yRange = useMemo(() => plotYRange(yDomain, [...traces.map((t) => t.values), references.map((r) => r.value), points.map((p) => p.y)]), [yDomain, traces, references, points]);
@@ -133,7 +136,7 @@ export function LinePlot(props: LinePlotProps) {
       </svg>
       {showLegend && traces.length > 0 ? (
         <div className="mt-1">
-          <Legend items={traces} hidden={hidden} onToggle={toggle} emphasis={emphasis} label={`Traces of ${title}`} />
+          <Legend items={marked} hidden={hidden} onToggle={toggle} emphasis={emphasis} label={`Traces of ${title}`} />
         </div>
       ) : null}
     </div>

@@ -15,6 +15,15 @@ export interface PlotTrace {
   dashed?: boolean;
   /** Short qualifier shown in the legend, e.g. "minimum phase, estimated". */
   note?: string;
+  /** Set by the plot for a trace that coincides with an earlier one (see markCoincidentTraces). */
+  dash?: TraceDash;
+}
+
+/** An explicit dash pattern, px before emphasis scaling: dash, gap, and where the pattern starts. */
+export interface TraceDash {
+  dashPx: number;
+  gapPx: number;
+  offsetPx: number;
 }
 
 /** Horizontal line at a y value, e.g. the flat target at 0 dB. */

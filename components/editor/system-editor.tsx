@@ -7,12 +7,14 @@ import { BlendPanel } from '@/components/blend/blend-panel';
 import { OutsideRoomNotice } from '@/components/system/outside-room-notice';
 import { SystemContext, type SystemEditorValue } from '@/components/system/system-context';
 import { Button, buttonClass } from '@/components/ui/button';
+import { useRequiredText } from '@/components/ui/required-text';
 import { keepPendingSystem, signInToSaveHref } from '@/lib/client/url-state';
 import { newSystemDocument } from '@/lib/demo/systems';
 import { outsideForMlpGeometry, positionsOutsideRoom } from '@/lib/system-model/room-bounds';
 import { systemDocumentSchema, type SystemDocument } from '@/lib/validations/system';
 import { EditorNotices } from './editor-notices';
 import { PanelTabs, PANELS, type PanelId } from './panel-tabs';
+import { SaveNoteField } from './save-note-field';
 import { useDraft } from './use-draft';
 import { useSaveSystem } from './use-save-system';
 import { useUnits } from './use-units';
@@ -52,11 +54,12 @@ interface Props {
 export function SystemEditor({ saved, signedIn }: Props) {
   const [doc, setDoc] = useState<SystemDocument>(() => saved?.document ?? newSystemDocument());
   const [name, setName] = useState(saved?.name ?? 'Untitled System');
+  const nameCheck = useRequiredText({ id: 'system-name', label: 'System name', value: name, max: 200 });
   const [panel, setPanel] = useState<PanelId>('blend');
   const [copied, setCopied] = useState(false);
   const readOnly = saved?.role === 'viewer';
   const { units, setUnits } = useUnits();
-  const { revision, dirty, saveState, save, saveNew } = useSaveSystem({ saved, doc, name, panel });
+  const { revision, dirty, saveState, save, saveNew, note, setNote, noteProblem } = useSaveSystem({ saved, doc, name, panel });
   const { urlProblem, resumed, shareUrl } = useUrlSync({ saved, doc, name, panel, setDoc, setName, setPanel });
   const draft = useDraft({
     saved,
@@ -98,8 +101,10 @@ export function SystemEditor({ saved, signedIn }: Props) {
               readOnly={readOnly}
               maxLength={200}
               onChange={(e) => setName(e.target.value)}
-              className="w-full max-w-xl rounded-md border border-line bg-white px-3 py-2 text-lg font-semibold"
+              {...nameCheck.inputProps}
+              className={`w-full max-w-xl rounded-md border bg-white px-3 py-2 text-lg font-semibold ${nameCheck.error ? 'border-fail' : 'border-line'}`}
             />
+            {nameCheck.message}
             <p className="text-xs text-ink-faint">
               {saved ? (
                 <>
@@ -136,6 +141,7 @@ export function SystemEditor({ saved, signedIn }: Props) {
           ) : null}
           {saved && !readOnly ? <ShareDialog systemId={saved.id} /> : null}
           {signedIn ? <AddToLessonButton doc={doc} name={name} panel={panel} /> : null}
+          {signedIn && !readOnly ? <SaveNoteField note={note} onChange={setNote} problem={noteProblem} /> : null}
           {readOnly ? (
             <Link href={shareUrl()} className={buttonClass('secondary')}>
               Open a copy in the editor

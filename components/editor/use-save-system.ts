@@ -3,6 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { ApiError, apiFetch } from '@/lib/client/api';
+import { REVISION_NOTE_MAX } from '@/lib/validations/library';
 import type { SystemDocument } from '@/lib/validations/system';
 import { forgetDraft } from './draft-storage';
 
@@ -29,12 +30,16 @@ export function useSaveSystem({ saved, doc, name, panel }: SaveOptions) {
   const [revision, setRevision] = useState(saved?.revision ?? 0);
   const [lastSaved, setLastSaved] = useState(() => (saved ? savedForm(saved.name, saved.document) : ''));
   const [saveState, setSaveState] = useState<SaveState>({ kind: 'idle' });
+  // The optional note of the next save ("moved subs to the front corners"); kept until a save succeeds.
+  const [note, setNote] = useState('');
+  const noteProblem = note.trim().length > REVISION_NOTE_MAX ? `The note is ${note.trim().length} characters; at most ${REVISION_NOTE_MAX}. Shorten it to save.` : null;
   const dirty = saved ? savedForm(name, doc) !== lastSaved : false;
 
   async function saveNew(asName: string) {
+    if (noteProblem) return setSaveState({ kind: 'error', message: noteProblem });
     setSaveState({ kind: 'saving' });
     try {
-      const created = await apiFetch<{ id: string }>('/api/v1/systems', { method: 'POST', json: { name: asName, document: doc } });
+      const created = await apiFetch<{ id: string }>('/api/v1/systems', { method: 'POST', json: { name: asName, document: doc, ...(note.trim() ? { note } : {}) } });
       setSaveState({ kind: 'saved', at: Date.now() });
       router.push(`/systems/${created.id}?panel=${panel}`);
     } catch (e) {
@@ -44,10 +49,12 @@ export function useSaveSystem({ saved, doc, name, panel }: SaveOptions) {
 
   async function save() {
     if (!saved) return saveNew(name);
+    if (noteProblem) return setSaveState({ kind: 'error', message: noteProblem });
     setSaveState({ kind: 'saving' });
     try {
-      const answer = await apiFetch<{ revision: number; name: string; document: SystemDocument }>(`/api/v1/systems/${saved.id}`, { method: 'PUT', json: { name, document: doc, revision } });
+      const answer = await apiFetch<{ revision: number; name: string; document: SystemDocument }>(`/api/v1/systems/${saved.id}`, { method: 'PUT', json: { name, document: doc, revision, note } });
       setRevision(answer.revision);
+      setNote('');
       setLastSaved(savedForm(name, doc));
       forgetDraft(saved.id);
       setSaveState({ kind: 'saved', at: Date.now() });
@@ -58,5 +65,5 @@ export function useSaveSystem({ saved, doc, name, panel }: SaveOptions) {
     }
   }
 
-  return { revision, dirty, saveState, save, saveNew };
+  return { revision, dirty, saveState, save, saveNew, note, setNote, noteProblem };
 }

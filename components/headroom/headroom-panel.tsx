@@ -30,8 +30,8 @@ export function HeadroomPanel() {
     );
   const bars: Bar[] = data
     ? [
-        ...data.channels.map((c) => ({ id: `ch-${c.name}`, label: c.name, value: c.maxSplDb, target: c.targetPeakDb, status: statusOf(c.headroomDb) })),
-        ...data.subs.map((s, i) => ({ id: `sub-${i}`, label: s.name, value: s.maxSplDb, target: s.targetPeakDb, status: statusOf(s.headroomDb), note: data.subs.length > 1 ? 'its share' : undefined })),
+        ...data.channels.map((c) => ({ id: `ch-${c.name}`, label: c.name, value: c.maxSplDb, target: c.targetPeakDb, status: statusOf(c.headroomDb), note: c.binding === 'speaker' ? 'at its rating' : undefined })),
+        ...data.subs.map((s, i) => ({ id: `sub-${i}`, label: s.name, value: s.maxSplDb, target: s.targetPeakDb, status: statusOf(s.headroomDb), note: [data.subs.length > 1 ? 'its share' : '', s.binding === 'speaker' ? 'at its rating' : ''].filter(Boolean).join(', ') || undefined })),
         ...(data.subsCombined && data.subs.length > 1 ? [{ id: 'subs', label: 'Subs together', value: data.subsCombined.maxSplDb, target: data.subsCombined.targetPeakDb, status: statusOf(data.subsCombined.headroomDb) }] : []),
       ]
     : [];
@@ -56,7 +56,7 @@ export function HeadroomPanel() {
           </fieldset>
         </div>
         <p className="text-xs text-ink-soft">
-          Targets: {data?.channelTargetPeakDb ?? 105} dB SPL peaks per channel (85 dB reference at −20 dBFS, SMPTE RP 200) and {data?.subTargetPeakDb ?? 115} dB from the subs (LFE +10 dB in-band, common practice). Max SPL = sensitivity + 10·log10(power) − 20·log10(distance), free field, plus the room gain.
+          Targets: {data?.channelTargetPeakDb ?? 105} dB SPL peaks per channel (85 dB reference at −20 dBFS, SMPTE RP 200) and {data?.subTargetPeakDb ?? 115} dB from the subs (LFE +10 dB in-band, common practice). Max SPL = sensitivity + 10·log10(power) − 20·log10(distance), free field, plus the room gain, at the lower of the amplifier’s power and the speaker’s rating.
         </p>
       </section>
       {error ? <Notice kind="error">{error.message}</Notice> : null}
@@ -70,7 +70,7 @@ export function HeadroomPanel() {
               svgRef={chartRef}
               filename="headroom"
               subject="headroom chart"
-              csv={() => ['name,maxSplDb,targetPeakDb,headroomDb,powerW,powerNeededW', ...[...data.channels, ...data.subs].map((r) => `${r.name},${r.maxSplDb},${r.targetPeakDb},${r.headroomDb},${r.powerW},${r.powerNeededW}`)].join('\n')}
+              csv={() => ['name,maxSplDb,binding,amplifierSplDb,ratedSplDb,targetPeakDb,headroomDb,powerW,ratedPowerW,powerNeededW', ...[...data.channels, ...data.subs].map((r) => `${r.name},${r.maxSplDb},${r.binding},${r.amplifierSplDb},${r.ratedSplDb ?? ''},${r.targetPeakDb},${r.headroomDb},${r.powerW},${r.ratedPowerW ?? ''},${r.powerNeededW}`)].join('\n')}
             />
           </div>
           <BarChart ref={chartRef} bars={bars} title="Maximum SPL at the MLP against the target" description="Each channel's and sub's maximum SPL at the main listening position; the dashed tick is its target peak (105 dB per channel, 115 dB from the subs together)." unit="dB SPL" valueLabel="Maximum SPL at the MLP" />
@@ -79,10 +79,33 @@ export function HeadroomPanel() {
       ) : (
         <p className="text-sm text-ink-soft">{pending ? 'Computing…' : 'Add speakers or subs to check their headroom.'}</p>
       )}
+      {data ? <RatingLimit data={data} /> : null}
       {data ? <HeadroomTable data={data} onPower={setPower} readOnly={readOnly} /> : null}
       {data ? <Exposure data={data} /> : null}
       <p className="text-xs text-ink-soft">Sensitivity, impedance and rating come from each speaker’s profile ({doc.profiles.map((p) => p.name).join(' · ')}); the amplifier power is per speaker and per sub.</p>
     </div>
+  );
+}
+
+/** Channels whose amplifier is above the speaker's rating: the rating binds, and the verdict is taken there. */
+function RatingLimit({ data }: { data: HeadroomAnswer }) {
+  const limited = [...data.channels, ...data.subs].filter((r) => r.binding === 'speaker');
+  if (!limited.length) return null;
+  // One line per amplifier and rating, the channels that share them named together.
+  const groups = new Map<string, HeadroomRowOut[]>();
+  for (const r of limited) groups.set(`${r.powerW}/${r.usablePowerW}`, [...(groups.get(`${r.powerW}/${r.usablePowerW}`) ?? []), r]);
+  return (
+    <Notice kind="warn" title="The speaker’s rating is the limit">
+      <p data-testid="headroom-rating-limit">
+        {[...groups.values()]
+          .map((rows) => `${rows.map((r) => r.name).join(', ')}: amplifier ${watts(rows[0]!.powerW)} on a ${watts(rows[0]!.usablePowerW)} rating, so ${(rows[0]!.amplifierSplDb - rows[0]!.maxSplDb).toFixed(1)} dB less than the full amplifier would give`)
+          .join('; ')}
+        .
+      </p>
+      <p className="mt-1">
+        Maximum SPL, the bars and the headroom are taken at the rating (the table shows both figures). Turn the amplifier’s gain down or set a limiter so the speaker never gets more than its rating; the speaker maker’s ratings and instructions come first.
+      </p>
+    </Notice>
   );
 }
 
@@ -125,7 +148,21 @@ function HeadroomTable({ data, onPower, readOnly }: { data: HeadroomAnswer; onPo
           <NumberField label={`${r.name} power`} unit="W" value={r.powerW} min={1} max={20000} step={10} onChange={(v) => onPower(kind, index, v)} disabled={readOnly} testId={`power-${r.name}`} className="w-32" />
         </td>
         <td className="num px-2 py-1.5 text-right">{item && distanceM !== undefined ? formatLength(distanceM, units) : '—'}</td>
-        <td className="num px-2 py-1.5 text-right font-semibold" data-testid={`max-spl-${r.name}`}>{r.maxSplDb.toFixed(1)} dB</td>
+        <td className="num px-2 py-1.5 text-right" data-testid={`max-spl-${r.name}`}>
+          <span className="font-semibold">{r.maxSplDb.toFixed(1)} dB</span>
+          {r.ratedSplDb !== null ? (
+            <span className="block text-xs text-ink-soft" data-testid={`max-spl-detail-${r.name}`}>
+              amplifier {r.amplifierSplDb.toFixed(1)} · rating {r.ratedSplDb.toFixed(1)}
+            </span>
+          ) : null}
+        </td>
+        <td className="px-2 py-1.5 text-xs" data-testid={`binding-${r.name}`}>
+          {r.binding === 'speaker' ? (
+            <span className="font-semibold text-warn">Speaker rating ({watts(r.usablePowerW)})</span>
+          ) : (
+            <span>Amplifier ({watts(r.powerW)})</span>
+          )}
+        </td>
         <td className="num px-2 py-1.5 text-right">{r.targetPeakDb.toFixed(1)} dB</td>
         <td className={`num px-2 py-1.5 text-right font-semibold ${status === 'fail' ? 'text-fail' : status === 'warn' ? 'text-warn' : 'text-ok'}`}>
           {r.meetsTarget ? `${signed(r.headroomDb)} dB` : `${r.deficitDb.toFixed(1)} dB short`}
@@ -144,8 +181,8 @@ function HeadroomTable({ data, onPower, readOnly }: { data: HeadroomAnswer; onPo
         Per channel and per sub
       </h3>
       <div className="overflow-x-auto rounded-md border border-line bg-white">
-        <table className="w-full min-w-[52rem] text-sm" data-testid="headroom-table">
-          <caption className="sr-only">Maximum SPL at the MLP, target, headroom or deficit and power needed for each channel and sub</caption>
+        <table className="w-full min-w-[60rem] text-sm" data-testid="headroom-table">
+          <caption className="sr-only">Maximum SPL at the MLP at the binding limit (the amplifier, or the speaker’s rating when the amplifier is above it), which limit binds, target, headroom or deficit and power needed for each channel and sub</caption>
           <thead className="bg-paper text-left text-ink-soft">
             <tr>
               <th scope="col" className="px-2 py-1.5 font-medium">Channel</th>
@@ -153,6 +190,7 @@ function HeadroomTable({ data, onPower, readOnly }: { data: HeadroomAnswer; onPo
               <th scope="col" className="px-2 py-1.5 font-medium">Amplifier</th>
               <th scope="col" className="px-2 py-1.5 text-right font-medium">To MLP</th>
               <th scope="col" className="px-2 py-1.5 text-right font-medium">Max SPL</th>
+              <th scope="col" className="px-2 py-1.5 font-medium">Limited by</th>
               <th scope="col" className="px-2 py-1.5 text-right font-medium">Target</th>
               <th scope="col" className="px-2 py-1.5 text-right font-medium">Headroom</th>
               <th scope="col" className="px-2 py-1.5 text-right font-medium">Power for target</th>
@@ -170,6 +208,7 @@ function HeadroomTable({ data, onPower, readOnly }: { data: HeadroomAnswer; onPo
                   {data.subsCombined.summation === 'coherent' ? 'in phase at the MLP' : 'added as power'}; each sub above is held to its share of {data.subsCombined.targetPeakDb} dB
                 </td>
                 <td className="num px-2 py-1.5 text-right font-semibold">{data.subsCombined.maxSplDb.toFixed(1)} dB</td>
+                <td className="px-2 py-1.5 text-xs text-ink-soft">each sub’s own limit</td>
                 <td className="num px-2 py-1.5 text-right">{data.subsCombined.targetPeakDb.toFixed(1)} dB</td>
                 <td className={`num px-2 py-1.5 text-right font-semibold ${data.subsCombined.meetsTarget ? 'text-ok' : 'text-fail'}`}>
                   {data.subsCombined.meetsTarget ? `${signed(data.subsCombined.headroomDb)} dB` : `${(-data.subsCombined.headroomDb).toFixed(1)} dB short`}

@@ -20,7 +20,7 @@ export function AngleTable({ data, units, selected, onSelect }: { data: LayoutAn
       <h3 id="layout-table" className="text-base font-semibold">
         Angles, distances, delays and trims from the MLP
       </h3>
-      <div className="overflow-x-auto rounded-md border border-line bg-white">
+      <div className="relative overflow-x-auto rounded-md border border-line bg-white" role="region" aria-label="Angles, distances, delays and trims (scrolls sideways)" tabIndex={0}>
         <table className="w-full min-w-[56rem] text-sm" data-testid="layout-table">
           <caption className="sr-only">Each speaker’s azimuth and elevation from the MLP against the recommended range, distance, toe-in, and the delay and trim a processor needs</caption>
           <thead className="bg-paper text-left text-ink-soft">

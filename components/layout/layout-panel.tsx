@@ -10,6 +10,7 @@ import { AngleTable } from './angle-table';
 import { FloorPlan } from './floor-plan';
 import { ItemEditor } from './item-editor';
 import { LayoutSummary } from './layout-summary';
+import { PairEntry } from './pair-entry';
 import { PositionTable } from './position-table';
 import { TemplateBar } from './template-bar';
 
@@ -20,9 +21,11 @@ export function LayoutPanel() {
   const { data, error, pending, outside } = useLayout(doc);
   const [selected, setSelected] = useState<string | null>(() => (doc.speakers[0] ? `speaker:${doc.speakers[0].id}` : null));
   const planRef = useRef<SVGSVGElement>(null);
+  const mlpOutside = outside.some((o) => o.path.startsWith(`seats.${doc.seats.findIndex((s) => s.id === doc.mlpSeatId)}.`));
   return (
     <div className="flex flex-col gap-6" data-testid="layout-panel">
-      <TemplateBar doc={doc} units={units} setUnits={setUnits} readOnly={readOnly} update={update} mlpOutside={outside.some((o) => o.path.startsWith(`seats.${doc.seats.findIndex((s) => s.id === doc.mlpSeatId)}.`))} />
+      <TemplateBar doc={doc} units={units} setUnits={setUnits} readOnly={readOnly} update={update} mlpOutside={mlpOutside} />
+      <PairEntry mlpOutside={mlpOutside} />
       {error ? <Notice kind="error">{error.message}</Notice> : null}
       <OutsideRoomNotice outside={outside} title="Outside the room: no angles, distances or delays until it is fixed">
         <p className="mt-1">Move each one inside (Edit, below), or make the room larger on Modes. Changing the room never moves anything.</p>

@@ -20,7 +20,7 @@ export function PositionTable({ outside, units, selected, onSelect }: { outside:
       <h3 id="layout-outside" className="text-base font-semibold">
         Positions outside the room
       </h3>
-      <div className="overflow-x-auto rounded-md border border-line bg-white">
+      <div className="relative overflow-x-auto rounded-md border border-line bg-white" role="region" aria-label="Positions outside the room (scrolls sideways)" tabIndex={0}>
         <table className="w-full min-w-[40rem] text-sm" data-testid="outside-table">
           <caption className="sr-only">Seats, speakers and subs with a coordinate beyond a wall of the room</caption>
           <thead className="bg-paper text-left text-ink-soft">

@@ -2,6 +2,7 @@
 
 import Link from 'next/link';
 import { useRef, useState } from 'react';
+import { useRequiredText } from '@/components/ui/required-text';
 import { Button } from '@/components/ui/button';
 import { ApiError, apiFetch } from '@/lib/client/api';
 import type { AppLesson, AppLessonSummary } from '@/lib/data/lessons';
@@ -22,6 +23,8 @@ export function AddToLessonButton({ doc, name, panel }: { doc: SystemDocument; n
   const [newTitle, setNewTitle] = useState('');
   const [stepTitle, setStepTitle] = useState('');
   const [error, setError] = useState<string | null>(null);
+  const stepTitleCheck = useRequiredText({ label: 'Step title', value: stepTitle, max: 200 });
+  const newTitleCheck = useRequiredText({ label: 'New Lesson title', value: newTitle, max: 200 });
   const [busy, setBusy] = useState(false);
   const [added, setAdded] = useState<{ lessonId: string; lessonTitle: string; position: number } | null>(null);
 
@@ -88,7 +91,8 @@ export function AddToLessonButton({ doc, name, panel }: { doc: SystemDocument; n
           <p className="text-sm text-ink-soft">The Step keeps a copy of the System as it is now; later edits here do not change it.</p>
           <label className="flex flex-col gap-1 text-sm">
             <span className="font-medium">Step title</span>
-            <input value={stepTitle} maxLength={200} onChange={(e) => setStepTitle(e.target.value)} className="rounded-md border border-line px-3 py-2" />
+            <input value={stepTitle} maxLength={200} onChange={(e) => setStepTitle(e.target.value)} {...stepTitleCheck.inputProps} className={`rounded-md border px-3 py-2 ${stepTitleCheck.error ? 'border-fail' : 'border-line'}`} />
+            {stepTitleCheck.message}
           </label>
           <fieldset className="flex flex-col gap-1.5 text-sm">
             <legend className="mb-1 font-medium">Lesson</legend>
@@ -112,7 +116,8 @@ export function AddToLessonButton({ doc, name, panel }: { doc: SystemDocument; n
             {lessons !== null && choice === NEW ? (
               <label className="ml-6 flex flex-col gap-1">
                 <span className="text-xs text-ink-soft">New Lesson title</span>
-                <input value={newTitle} maxLength={200} onChange={(e) => setNewTitle(e.target.value)} className="rounded-md border border-line px-3 py-1.5" />
+                <input value={newTitle} maxLength={200} onChange={(e) => setNewTitle(e.target.value)} {...newTitleCheck.inputProps} className={`rounded-md border px-3 py-1.5 ${newTitleCheck.error ? 'border-fail' : 'border-line'}`} />
+                {newTitleCheck.message}
               </label>
             ) : null}
           </fieldset>

@@ -81,14 +81,15 @@ export function LessonEditor({ initial }: { initial: AppLesson }) {
         ) : null}
       </div>
 
-      <div className="grid gap-5 lg:grid-cols-[minmax(260px,340px)_1fr]">
-        <section aria-labelledby="steps-heading" className="flex flex-col gap-2">
-          <div className="flex items-baseline justify-between">
+      {/* One column on a phone: minmax(0, 1fr), so a long Step title is truncated instead of widening the page past the screen. */}
+      <div className="grid grid-cols-1 gap-5 lg:grid-cols-[minmax(260px,340px)_minmax(0,1fr)]">
+        <section aria-labelledby="steps-heading" className="flex min-w-0 flex-col gap-2">
+          <div className="flex items-baseline justify-between gap-2">
             <h2 id="steps-heading" className="text-lg font-semibold">
               Steps <span className="num text-sm font-normal text-ink-faint">({lesson.steps.length})</span>
             </h2>
             {lesson.steps.length ? (
-              <Link href={`/lessons/${lesson.id}/present?step=${(selected?.position ?? 1)}`} className={buttonClass('primary', 'px-3 py-1.5')}>
+              <Link href={`/lessons/${lesson.id}/present?step=${(selected?.position ?? 1)}`} className={buttonClass('primary', 'shrink-0 px-3 py-1.5')}>
                 Present
               </Link>
             ) : null}

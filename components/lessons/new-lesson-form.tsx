@@ -3,6 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { useRequiredText } from '@/components/ui/required-text';
 import { ApiError, apiFetch } from '@/lib/client/api';
 
 /** Creates a Lesson in one of the caller's writable workspaces and opens it. */
@@ -11,6 +12,7 @@ export function NewLessonForm({ workspaces }: { workspaces: { id: string; name: 
   const [title, setTitle] = useState('');
   const [workspaceId, setWorkspaceId] = useState(workspaces[0]?.id ?? '');
   const [error, setError] = useState<string | null>(null);
+  const titleCheck = useRequiredText({ id: 'new-lesson-title', label: 'New Lesson title', value: title, max: 200 });
   const [busy, setBusy] = useState(false);
   return (
     <form
@@ -29,7 +31,8 @@ export function NewLessonForm({ workspaces }: { workspaces: { id: string; name: 
     >
       <label className="flex min-w-[16rem] flex-1 flex-col gap-1 text-sm">
         <span className="font-medium">New Lesson title</span>
-        <input value={title} onChange={(e) => setTitle(e.target.value)} maxLength={200} required className="rounded-md border border-line px-3 py-2" aria-invalid={error ? true : undefined} aria-describedby={error ? 'new-lesson-error' : undefined} />
+        <input value={title} onChange={(e) => setTitle(e.target.value)} maxLength={200} className={`rounded-md border px-3 py-2 ${titleCheck.error ? 'border-fail' : 'border-line'}`} {...titleCheck.inputProps} aria-invalid={titleCheck.error || error ? true : undefined} aria-describedby={titleCheck.error ? 'new-lesson-title-required' : error ? 'new-lesson-error' : undefined} />
+        {titleCheck.message}
       </label>
       {workspaces.length > 1 ? (
         <label className="flex flex-col gap-1 text-sm">

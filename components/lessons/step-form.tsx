@@ -3,6 +3,7 @@
 import Link from 'next/link';
 import { useMemo, useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { useRequiredText } from '@/components/ui/required-text';
 import type { AppLessonStep } from '@/lib/data/lessons';
 import { LESSON_PANELS, LESSON_TRACES, sweepSchema, type LessonPanel, type LessonTrace } from '@/lib/validations/lesson';
 import { stepEditorHref } from './shared-lesson';
@@ -26,6 +27,7 @@ interface StepFormProps {
 /** One Step's title, talking points, panel, traces and sweep, with Save, Duplicate and Delete, and a live preview of its plot. */
 export function StepForm({ step, canEdit, busy, onSave, onDuplicate, onDelete }: StepFormProps) {
   const [title, setTitle] = useState(step.title);
+  const titleCheck = useRequiredText({ label: 'Step title', value: title, max: 200 });
   const [points, setPoints] = useState(step.points);
   const [panel, setPanel] = useState<LessonPanel>(step.panel);
   const [traces, setTraces] = useState<LessonTrace[]>(step.traces);
@@ -39,9 +41,9 @@ export function StepForm({ step, canEdit, busy, onSave, onDuplicate, onDelete }:
 
   return (
     <div className="flex flex-col gap-4">
-      <div className="grid gap-4 xl:grid-cols-[minmax(320px,420px)_1fr]">
+      <div className="grid grid-cols-1 gap-4 xl:grid-cols-[minmax(320px,420px)_minmax(0,1fr)]">
         <form
-          className="flex flex-col gap-3"
+          className="flex min-w-0 flex-col gap-3"
           onSubmit={(e) => {
             e.preventDefault();
             if (sweepError || !title.trim()) return;
@@ -50,7 +52,8 @@ export function StepForm({ step, canEdit, busy, onSave, onDuplicate, onDelete }:
         >
           <label className="flex flex-col gap-1 text-sm">
             <span className="font-medium">Step title</span>
-            <input value={title} readOnly={!canEdit} maxLength={200} onChange={(e) => setTitle(e.target.value)} className="rounded-md border border-line bg-white px-3 py-2" data-testid="step-title" />
+            <input value={title} readOnly={!canEdit} maxLength={200} onChange={(e) => setTitle(e.target.value)} {...titleCheck.inputProps} className={`rounded-md border bg-white px-3 py-2 ${titleCheck.error ? 'border-fail' : 'border-line'}`} data-testid="step-title" />
+            {titleCheck.message}
           </label>
           <label className="flex flex-col gap-1 text-sm">
             <span className="font-medium">Talking points</span>

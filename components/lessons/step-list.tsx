@@ -88,10 +88,10 @@ export function StepList({ steps, selectedId, canEdit, onSelect, onReorder }: St
           </button>
           {canEdit ? (
             <span className="flex flex-col border-l border-line">
-              <button type="button" onClick={() => move(s.id, -1)} disabled={i === 0} aria-label={`Move "${s.title}" up`} className="flex-1 px-2 text-xs hover:bg-wash disabled:opacity-30">
+              <button type="button" onClick={() => move(s.id, -1)} disabled={i === 0} aria-label={`Move "${s.title}" up`} className="min-w-9 flex-1 px-2 text-xs hover:bg-wash disabled:opacity-30">
                 ▲
               </button>
-              <button type="button" onClick={() => move(s.id, 1)} disabled={i === steps.length - 1} aria-label={`Move "${s.title}" down`} className="flex-1 px-2 text-xs hover:bg-wash disabled:opacity-30">
+              <button type="button" onClick={() => move(s.id, 1)} disabled={i === steps.length - 1} aria-label={`Move "${s.title}" down`} className="min-w-9 flex-1 px-2 text-xs hover:bg-wash disabled:opacity-30">
                 ▼
               </button>
             </span>

@@ -17,6 +17,18 @@ export interface StepPlotStep {
 
 const SUB_STYLES = [traceStyles.sub, traceStyles.sub2];
 
+interface StepPlotProps {
+  step: StepPlotStep;
+  progress?: number;
+  emphasis?: 'default' | 'projector';
+  compact?: boolean;
+  /** The height of the plots together, px (the Presenter view fits them to the screen); else each from its width. */
+  plotsHeightPx?: number;
+}
+
+/** Of the plots' height, the magnitude plot's share when the phase plot is shown under it. */
+const MAGNITUDE_SHARE = 0.56;
+
 declare global {
   interface Window {
     /** Frames the Lesson plot has drawn (read by scripts/bench-ui-sweep.ts and the e2e test). */
@@ -37,9 +49,10 @@ const fmtDb = (v: number) => (Number.isFinite(v) && v < -60 ? 'null (below −60
 /**
  * The plot of one Step at one moment of its sweep (`progress` 0–1): magnitude of the mains, each
  * sub and the sum, the phase when asked, and the read-outs at the crossover. Recomputed from dsp/
- * in the browser on every call, so a sweep animates frame by frame.
+ * in the browser on every call, so a sweep animates frame by frame. The phase is drawn from the first arrival at the
+ * MLP, as Blend draws it (lib/system-model/lesson-frame.ts).
  */
-export function StepPlot({ step, progress = 0, emphasis = 'default', compact = false }: { step: StepPlotStep; progress?: number; emphasis?: 'default' | 'projector'; compact?: boolean }) {
+export function StepPlot({ step, progress = 0, emphasis = 'default', compact = false, plotsHeightPx }: StepPlotProps) {
   const { sweep } = step;
   const value = useMemo(() => (sweep ? sweepValueAt(sweep, progress) : null), [sweep, progress]);
   const doc = useMemo(() => (sweep && value ? applyLessonSweepToDocument(step.document, sweep, value) : step.document), [step.document, sweep, value]);
@@ -70,6 +83,8 @@ export function StepPlot({ step, progress = 0, emphasis = 'default', compact = f
     result.paths.slice(1).forEach((p, i) => phaseTraces.push({ id: `sub-${i}-phase`, label: `${p.name} phase`, values: p.phaseDeg, ...(SUB_STYLES[i % 2] ?? traceStyles.sub) }));
   }
   const big = emphasis === 'projector';
+  const magnitudeHeightPx = plotsHeightPx === undefined ? undefined : Math.round(phaseTraces.length ? plotsHeightPx * MAGNITUDE_SHARE : plotsHeightPx);
+  const phaseHeightPx = plotsHeightPx === undefined || magnitudeHeightPx === undefined ? undefined : plotsHeightPx - magnitudeHeightPx;
   const readouts: { label: string; value: string; id: string }[] =
     metrics && assessment
       ? [
@@ -116,8 +131,24 @@ export function StepPlot({ step, progress = 0, emphasis = 'default', compact = f
         markers={markers}
         emphasis={emphasis}
         aspect={compact ? 0.45 : big ? (phaseTraces.length ? 0.3 : 0.4) : 0.5}
+        heightPx={magnitudeHeightPx}
       />
-      {phaseTraces.length ? <FrequencyPlot title={`${step.title}: phase`} quantity="phase" frequencyHz={result.frequencyHz} minHz={FRAME_START_HZ} maxHz={1000} traces={phaseTraces} emphasis={emphasis} aspect={big ? 0.18 : 0.3} /> : null}
+      {phaseTraces.length ? (
+        <FrequencyPlot
+          title={`${step.title}: phase`}
+          description="Phase of the mains and each sub, wrapped to ±180°, relative to the first arrival at the MLP."
+          quantity="phase"
+          frequencyHz={result.frequencyHz}
+          minHz={FRAME_START_HZ}
+          maxHz={1000}
+          traces={phaseTraces}
+          // The magnitude plot's legend already names these colours when it shows the mains and the subs.
+          showLegend={!(show.has('mains') && show.has('subs'))}
+          emphasis={emphasis}
+          aspect={big ? 0.18 : 0.3}
+          heightPx={phaseHeightPx}
+        />
+      ) : null}
       {!big ? readoutList : null}
       {step.panel === 'modes' && modes.length ? (
         <p className={big ? 'text-xl text-ink-soft' : 'text-xs text-ink-soft'}>Dashed grey lines: the room&apos;s first axial modes ({modes.slice(0, 8).map((m) => `${m.hz.toFixed(0)} Hz`).join(', ')}).</p>

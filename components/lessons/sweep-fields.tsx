@@ -2,6 +2,7 @@
 
 import { FILTER_CHOICES, filterChoiceLabel, SWEEP_PARAMETERS, type Sweep, type SweepParameter } from '@/lib/validations/lesson';
 import { SWEEP_LABELS, SWEEP_UNITS } from '@/lib/system-model/lesson-sweep';
+import { parseLengthText, parseNumberText } from '@/lib/number-input';
 
 /** A sweep being edited: numbers as typed (strings), so a half-typed value is not lost. */
 export type SweepDraft = { parameter: SweepParameter; from: string; to: string; durationS: string } | null;
@@ -15,7 +16,9 @@ export function sweepToDraft(sweep: Sweep | null): SweepDraft {
 export function draftToSweep(d: SweepDraft): unknown {
   if (!d) return null;
   const discrete = d.parameter === 'subPolarity' || d.parameter === 'filter';
-  const n = (s: string) => (s.trim() === '' ? NaN : Number(s));
+  // Either decimal mark (80,5 is 80.5), and a distance in any unit (10' 2", 310 cm); unreadable text is NaN, which the schema refuses.
+  const read = (s: string) => (d.parameter === 'subDistanceM' ? parseLengthText(s, { units: 'metric', decimalMark: '.' }) : parseNumberText(s, { decimalMark: '.' }));
+  const n = (s: string) => ((r) => (r.ok ? r.value : NaN))(read(s));
   return { parameter: d.parameter, from: discrete ? d.from : n(d.from), to: discrete ? d.to : n(d.to), durationS: n(d.durationS) };
 }
 

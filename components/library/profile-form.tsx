@@ -2,6 +2,7 @@
 
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch, type FieldPath } from 'react-hook-form';
+import { parseNumberText } from '@/lib/number-input';
 import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/client/api';
@@ -41,6 +42,8 @@ export function ProfileForm({ initial, workspaces, onSubmit, onCancel, submitLab
     formState: { errors, isSubmitting },
   } = useForm<FormInput & { workspaceId?: string }, unknown, ProfileFields>({
     resolver: zodResolver(profileFieldsSchema),
+    // Checked as it is typed (a required name left empty says so at once), not only on Save.
+    mode: 'onChange',
     defaultValues: { ...initial, workspaceId: workspaces?.[0]?.id },
   });
   const lowKind = useWatch({ control, name: 'lowRolloff.kind' });
@@ -52,7 +55,8 @@ export function ProfileForm({ initial, workspaces, onSubmit, onCancel, submitLab
     for (const part of path.split('.')) node = (node as Record<string, unknown> | undefined)?.[part];
     return (node as { message?: string } | undefined)?.message;
   };
-  const num = { valueAsNumber: true } as const;
+  // Either decimal mark (80,5 is 80.5): read by the one parser of number fields; unreadable text becomes NaN, which the schema refuses with a message.
+  const num = { setValueAs: (v: unknown) => (typeof v === 'number' ? v : ((r) => (r.ok ? r.value : Number.NaN))(parseNumberText(String(v), { decimalMark: '.' }))) };
 
   const field = (path: FieldPath<FormInput>, label: string, unit: string, opts: { step?: number; min?: number; max?: number } = {}) => {
     const id = `profile-${path.replace(/\./g, '-')}`;
@@ -62,7 +66,7 @@ export function ProfileForm({ initial, workspaces, onSubmit, onCancel, submitLab
         <label htmlFor={id} className="text-sm font-medium">
           {label} {unit ? <span className="font-normal text-ink-faint">({unit})</span> : null}
         </label>
-        <input id={id} type="number" inputMode="decimal" step={opts.step ?? 'any'} min={opts.min} max={opts.max} className={`num ${inputClass(e)}`} aria-invalid={e ? true : undefined} aria-describedby={e ? `${id}-error` : undefined} {...register(path, num)} />
+        <input id={id} type="text" inputMode="decimal" autoComplete="off" title={opts.min !== undefined && opts.max !== undefined ? `${opts.min} to ${opts.max}${unit ? ` ${unit}` : ''}` : undefined} className={`num ${inputClass(e)}`} aria-invalid={e ? true : undefined} aria-describedby={e ? `${id}-error` : undefined} {...register(path, num)} />
         {e ? (
           <p id={`${id}-error`} role="alert" className="text-sm text-fail">
             {e}

@@ -8,6 +8,7 @@ import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/client/api';
 import { systemsApi, type RevisionItem } from '@/lib/hooks/use-systems';
 import { formatWhen } from './format';
+import { RevisionNote } from './revision-note';
 
 interface Props {
   systemId: string;
@@ -20,6 +21,8 @@ export function RevisionHistory({ systemId, currentRevision, canEdit, revisions 
   const router = useRouter();
   const [busy, setBusy] = useState<number | null>(null);
   const [message, setMessage] = useState<{ kind: 'ok' | 'error'; text: string } | null>(null);
+  // Notes saved here, shown at once (the page's list catches up on refresh).
+  const [notes, setNotes] = useState<ReadonlyMap<number, string | null>>(new Map());
 
   async function restore(revision: number) {
     setBusy(revision);
@@ -51,8 +54,17 @@ export function RevisionHistory({ systemId, currentRevision, canEdit, revisions 
               </p>
               <p className="text-xs text-ink-faint">
                 <span className="num">{formatWhen(r.createdAt)}</span> · {r.authorName ?? 'a former member'}
-                {r.note ? ` · ${r.note}` : ''}
               </p>
+              <RevisionNote
+                systemId={systemId}
+                revision={r.revision}
+                note={notes.has(r.revision) ? (notes.get(r.revision) ?? null) : r.note}
+                canEdit={canEdit}
+                onSaved={(note) => {
+                  setNotes((m) => new Map(m).set(r.revision, note));
+                  router.refresh();
+                }}
+              />
             </div>
             <div className="flex gap-1.5">
               <Link href={`/library/${systemId}/revisions/${r.revision}`} className={buttonClass('ghost', 'px-2.5 py-1.5')} aria-label={`View revision ${r.revision}`}>

@@ -4,6 +4,7 @@ import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button, buttonClass } from '@/components/ui/button';
+import { useRequiredText } from '@/components/ui/required-text';
 import { ApiError } from '@/lib/client/api';
 import { systemsApi } from '@/lib/hooks/use-systems';
 import { ShareDialog } from '@/components/share/share-dialog';
@@ -27,6 +28,7 @@ export function SystemRowActions({ id, name, revision, canEdit, deleted }: Props
   const [confirmDelete, setConfirmDelete] = useState(false);
   const [newName, setNewName] = useState(name);
   const [nameError, setNameError] = useState<string | undefined>();
+  const renameCheck = useRequiredText({ id: `rename-${id}`, label: 'Name', value: newName, max: 200, serverError: nameError });
 
   async function run(fn: () => Promise<unknown>) {
     setBusy(true);
@@ -115,15 +117,10 @@ export function SystemRowActions({ id, name, revision, canEdit, deleted }: Props
             value={newName}
             onChange={(e) => setNewName(e.target.value)}
             maxLength={200}
-            aria-invalid={nameError ? true : undefined}
-            aria-describedby={nameError ? `rename-${id}-error` : undefined}
-            className={`rounded-md border bg-white px-3 py-2 text-sm ${nameError ? 'border-fail' : 'border-line'}`}
+            {...renameCheck.inputProps}
+            className={`rounded-md border bg-white px-3 py-2 text-sm ${renameCheck.error ? 'border-fail' : 'border-line'}`}
           />
-          {nameError ? (
-            <p id={`rename-${id}-error`} role="alert" className="text-sm text-fail">
-              {nameError}
-            </p>
-          ) : null}
+          {renameCheck.message}
           <p className="text-xs text-ink-faint">Renaming saves a new revision; the history keeps the old name.</p>
           <div className="flex justify-end gap-2">
             <Button variant="secondary" onClick={() => setRenaming(false)}>

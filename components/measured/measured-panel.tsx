@@ -7,6 +7,7 @@ import { useMemo, useState } from 'react';
 import { useSWRConfig } from 'swr';
 import { useSystem } from '@/components/system/system-context';
 import { Notice } from '@/components/ui/notice';
+import type { SharedMeasurement } from '@/lib/data/measurements';
 import { useCompute } from '@/lib/hooks/use-compute';
 import { deleteMeasurement, useMeasurementList, useMeasurementPoints, useSystemWorkspace, type MeasurementItem } from '@/lib/hooks/use-measurements';
 import { measuredRequestFromDocument, type PredictAnswer } from '@/lib/system-model/measured';
@@ -25,12 +26,13 @@ const SYSTEM_PATH = /^\/systems\/([0-9a-f-]{36})(?:\/|$)/i;
  * a sub measurement with the System's filters, delays, gains and polarity, with the best delay and
  * polarity found on the measured pair.
  */
-export function MeasuredPanel() {
+export function MeasuredPanel({ shared }: { shared?: { items: SharedMeasurement[]; omitted: number } } = {}) {
   const { doc, readOnly } = useSystem();
   const { status } = useSession();
-  const signedIn = status === 'authenticated';
+  // On a share link the System's own measurements come with the page (read-only); nothing is listed or saved.
+  const signedIn = status === 'authenticated' && !shared;
   const pathname = usePathname();
-  const systemId = pathname.match(SYSTEM_PATH)?.[1] ?? null;
+  const systemId = shared ? null : (pathname.match(SYSTEM_PATH)?.[1] ?? null);
   const workspace = useSystemWorkspace(signedIn ? systemId : null);
   const listQuery = !signedIn ? null : systemId && !workspace.error ? (workspace.data ? { workspaceId: workspace.data.workspaceId } : null) : {};
   const list = useMeasurementList(listQuery);
@@ -44,10 +46,11 @@ export function MeasuredPanel() {
   const [subTarget, setSubTarget] = useState<number | 'all'>(() => (doc.subs.length > 1 ? 'all' : 0));
   const [deleteError, setDeleteError] = useState<string | null>(null);
 
-  const saved = useMemo(() => list.data?.items ?? [], [list.data]);
+  const saved = useMemo(() => shared?.items ?? list.data?.items ?? [], [shared, list.data]);
+  const sharedPoints = useMemo(() => new Map((shared?.items ?? []).filter((m) => m.frequencyHz.length).map((m) => [m.id, m])), [shared]);
   const items: CurveItem[] = useMemo(
     () => [
-      ...saved.map((m: MeasurementItem) => ({ ...m, local: false })),
+      ...saved.map((m: MeasurementItem | SharedMeasurement) => ({ id: m.id, name: m.name, seat: m.seat, role: m.role, pointCount: m.pointCount, startHz: m.startHz, stopHz: m.stopHz, hasPhase: m.hasPhase, local: false })),
       ...local.map((c) => ({ id: c.id, name: c.name, seat: c.seat, role: c.role, pointCount: c.frequencyHz.length, startHz: c.frequencyHz[0] ?? 0, stopHz: c.frequencyHz[c.frequencyHz.length - 1] ?? 0, hasPhase: c.phaseDeg !== null, local: true })),
     ],
     [saved, local],
@@ -59,13 +62,13 @@ export function MeasuredPanel() {
   const mainsSeat = mainsId ? byId.get(mainsId)?.seat : null;
   const subId = pair.sub && byId.has(pair.sub) ? pair.sub : (items.find((i) => i.role === 'sub' && i.seat === mainsSeat)?.id ?? items.find((i) => i.role === 'sub')?.id ?? null);
 
-  const savedOverlayIds = [...overlay].filter((id) => byId.get(id) && !byId.get(id)!.local);
+  const savedOverlayIds = [...overlay].filter((id) => byId.get(id) && !byId.get(id)!.local && !shared);
   const points = useMeasurementPoints(savedOverlayIds);
   const overlayCurves = [...overlay]
     .map((id) => {
       const item = byId.get(id);
       if (!item) return null;
-      const pts = item.local ? local.find((c) => c.id === id) : points.data?.[id];
+      const pts = item.local ? local.find((c) => c.id === id) : shared ? sharedPoints.get(id) : points.data?.[id];
       return pts ? { item, frequencyHz: pts.frequencyHz, magnitudeDb: pts.magnitudeDb } : null;
     })
     .filter((c): c is NonNullable<typeof c> => c !== null);
@@ -74,6 +77,10 @@ export function MeasuredPanel() {
     if (!id) return null;
     const item = byId.get(id);
     if (!item) return null;
+    if (shared) {
+      const m = sharedPoints.get(id);
+      return m ? { frequencyHz: m.frequencyHz, magnitudeDb: m.magnitudeDb, phaseDeg: m.phaseDeg } : null;
+    }
     if (!item.local) return { measurementId: id };
     const c = local.find((l) => l.id === id)!;
     return { frequencyHz: c.frequencyHz, magnitudeDb: c.magnitudeDb, phaseDeg: c.phaseDeg };
@@ -102,7 +109,7 @@ export function MeasuredPanel() {
     <div className="flex flex-col gap-4" data-testid="measured-panel">
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div>
-          <h2 className="text-lg font-semibold">Measured</h2>
+          {shared ? null : <h2 className="text-lg font-semibold">Measured</h2>}
           <p className="max-w-3xl text-sm text-ink-soft">
             Bring measurements of the mains and the subs at a seat, each taken alone with no crossover in the processor (so they hold the speakers&apos; own roll-off, the distance
             and the room). Seamline applies this System&apos;s crossover, delays, gains and polarity to them and predicts the blend at that seat.
@@ -125,7 +132,15 @@ export function MeasuredPanel() {
         </label>
       </div>
 
-      {status === 'unauthenticated' ? (
+      {shared ? (
+        <Notice kind="info">
+          <span data-testid="shared-measured-note">
+            {shared.items.length
+              ? `The measurements uploaded for this System (${shared.items.length}${shared.omitted ? `, the newest; ${shared.omitted} more are in its workspace` : ''}), read-only: tick them to overlay, and pick a mains and a sub file to see the predicted blend. Nothing here can be changed or uploaded.`
+              : 'No measurements were uploaded for this System. Measurements are kept in the owner’s workspace; a share link shows only those uploaded for the shared System.'}
+          </span>
+        </Notice>
+      ) : status === 'unauthenticated' ? (
         <Notice kind="info" title="Saving measurements needs an account">
           <p>
             Uploads are kept in a workspace&apos;s Library, so they need you to be signed in.{' '}
@@ -140,10 +155,11 @@ export function MeasuredPanel() {
           </p>
         </Notice>
       ) : null}
-      {readOnly ? <Notice kind="info">You are a viewer of this System: you can look at the measurements and the prediction, but not change settings or upload.</Notice> : null}
+      {readOnly && !shared ? <Notice kind="info">You are a viewer of this System: you can look at the measurements and the prediction, but not change settings or upload.</Notice> : null}
 
       <div className="grid gap-4 xl:grid-cols-[minmax(320px,400px)_1fr]">
         <div className="flex min-w-0 flex-col gap-4">
+          {shared ? null : (
           <MeasurementUpload
             systemId={systemId}
             canSave={canWrite && !readOnly}
@@ -159,6 +175,7 @@ export function MeasuredPanel() {
               setOverlay((s) => new Set([...s, id]));
             }}
           />
+          )}
           {deleteError ? <Notice kind="error">{deleteError}</Notice> : null}
           <MeasurementList
             items={items}
@@ -171,7 +188,7 @@ export function MeasuredPanel() {
           />
         </div>
         <div className="flex min-w-0 flex-col gap-4">
-          <OverlayPlot curves={overlayCurves} offsets={offsets} onOffset={(id, db) => setOffsets((o) => ({ ...o, [id]: db }))} smoothing={smoothing} />
+          <OverlayPlot curves={overlayCurves} offsets={offsets} onOffset={(id, db) => setOffsets((o) => ({ ...o, [id]: db }))} onClearOffsets={() => setOffsets({})} smoothing={smoothing} />
           <PredictedBlend
             items={items}
             mainsId={mainsId}

@@ -42,6 +42,10 @@ const ROLES = [
   { value: 'sum', label: 'Mains + sub together' },
 ];
 
+/** "Skipped 3 lines of text before line 4 (notes or a header, not numbers); the data start on line 4." */
+const skippedNote = (count: number, firstDataLine: number) =>
+  `Skipped ${count} line${count === 1 ? '' : 's'} of text before line ${firstDataLine} (notes or a header, not numbers); the data start on line ${firstDataLine}.`;
+
 const baseName = (fileName: string) => fileName.replace(/\.[A-Za-z0-9]{1,5}$/, '').slice(0, 120) || 'Measurement';
 const guessRole = (fileName: string) => (/sub|lfe/i.test(fileName) ? 'sub' : /sum|both|together/i.test(fileName) ? 'sum' : 'mains');
 
@@ -92,7 +96,7 @@ export function MeasurementUpload({ systemId, canSave, saveBlockedReason, seatNa
     if (systemId) form.set('systemId', systemId);
     try {
       const answer = await uploadMeasurement(form, setProgress);
-      setSavedNote(`Saved "${answer.name}": ${answer.pointCount} points.`);
+      setSavedNote(`Saved "${answer.name}": ${answer.pointCount} points.${answer.skippedLines ? ` ${skippedNote(answer.skippedLines, answer.firstDataLine)}` : ''}`);
       setStage({ kind: 'empty' });
       onSaved(answer);
     } catch (e) {
@@ -160,9 +164,13 @@ export function MeasurementUpload({ systemId, canSave, saveBlockedReason, seatNa
               {formatHz(stage.parsed.startHz)} – {formatHz(stage.parsed.stopHz)}
             </span>
             , {stage.parsed.hasPhase ? 'with phase' : 'no phase (it will be estimated as minimum phase)'}
-            {stage.parsed.headerLine ? `, header on line ${stage.parsed.headerLine}` : ''}
             {stage.parsed.decimalComma ? ', decimal commas' : ''}.
           </p>
+          {stage.parsed.skippedLines ? (
+            <p className="text-xs text-ink-soft" data-testid="preview-skipped-lines">
+              {skippedNote(stage.parsed.skippedLines, stage.parsed.firstDataLine)}
+            </p>
+          ) : null}
           <FrequencyPlot
             title="Preview of the file's magnitude"
             quantity="magnitude"

@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { NumberField } from '@/components/ui/number-field';
 import type { ApiError } from '@/lib/client/api';
-import { applyMeasuredToDocument, type PredictAnswer } from '@/lib/system-model/measured';
+import { applyMeasuredToDocument, measurementRoleKind, type PredictAnswer } from '@/lib/system-model/measured';
 import type { CurveItem } from './measurement-list';
 
 interface Props {
@@ -23,6 +23,14 @@ interface Props {
 }
 
 const ESTIMATED = ' (estimated phase)';
+const ROLE_WORDS = { mains: 'a mains measurement', sub: 'a sub measurement', sum: 'mains and sub playing together' } as const;
+
+/** A warning when a file's role says it is not what it was picked as (a sub file as the mains measurement, or the reverse). */
+function roleMismatch(item: CurveItem | undefined, pickedAs: 'mains' | 'sub'): string | null {
+  const kind = measurementRoleKind(item?.role);
+  if (!item || !kind || kind === pickedAs) return null;
+  return `“${item.name}” is marked as ${ROLE_WORDS[kind]} (role “${item.role}”) but is picked as the ${pickedAs} measurement: the prediction applies the ${pickedAs === 'mains' ? 'high-pass' : 'low-pass'} to it as if it were the ${pickedAs}. Pick the ${pickedAs} file, or correct its role.`;
+}
 const clampDelay = (v: number) => Math.min(100, Math.max(0, Math.round(v * 100) / 100));
 
 /** Pick a mains and a sub measurement, apply the System's settings, compare the predicted sum with the measured one, and take the best delay and polarity. */
@@ -115,6 +123,13 @@ export function PredictedBlend({ items, mainsId, subId, onPick, subTarget, onSub
           </select>
         </label>
       </div>
+      {[roleMismatch(mains, 'mains'), roleMismatch(subItem, 'sub')].map((w) =>
+        w ? (
+          <Notice key={w} kind="warn">
+            <span data-testid="measured-role-warning">{w}</span>
+          </Notice>
+        ) : null,
+      )}
       {seatMismatch ? <Notice kind="warn">The two measurements are from different seats ({mains?.seat ?? 'no seat'} and {subItem?.seat ?? 'no seat'}): a prediction needs both from the same seat.</Notice> : null}
 
       <fieldset className="flex flex-wrap items-end gap-3 rounded-md border border-line px-3 pb-3 pt-1" disabled={readOnly}>
@@ -211,10 +226,10 @@ export function PredictedBlend({ items, mainsId, subId, onPick, subTarget, onSub
                   heightPx={200}
                 />
                 <div className="flex flex-wrap items-center gap-2">
-                  {a.keep ? null : (
-                    <Button onClick={apply} disabled={readOnly}>
-                      Apply to System
-                    </Button>
+                  {a.keep ? null : readOnly ? (
+                    <span className="text-xs text-ink-soft">Read-only here: the change is applied in the System&apos;s editor.</span>
+                  ) : (
+                    <Button onClick={apply}>Apply to System</Button>
                   )}
                   {applied ? <span className="text-xs text-ok" role="status">{applied}</span> : null}
                 </div>

@@ -19,11 +19,8 @@ export function ModeMap({ r, modes, mapIndices, onPick, units }: { r: RoomRespon
   ];
   const choices = (modes?.modes ?? []).slice(0, 40);
   const key = mapIndices?.join(',') ?? '';
-  const atSeats = doc.seats.map((s, i) => {
-    const col = Math.min(map.columns - 1, Math.max(0, Math.floor((s.xM / doc.room.widthM) * map.columns)));
-    const row = Math.min(map.rows - 1, Math.max(0, Math.floor((s.yM / doc.room.lengthM) * map.rows)));
-    return { name: s.name, mark: s.id === doc.mlpSeatId ? 'MLP' : String(i + 1), value: map.pressure[row]?.[col] ?? NaN };
-  });
+  // The mode at each seat's own position (the answer evaluates it there, not at the nearest cell of the map).
+  const atSeats = doc.seats.map((s, i) => ({ name: s.name, mark: s.id === doc.mlpSeatId ? 'MLP' : String(i + 1), value: map.seatPressure[i] ?? NaN }));
   const earLabel = units === 'imperial' ? `${(map.zM / 0.3048).toFixed(1)} ft` : `${map.zM.toFixed(2)} m`;
   return (
     <section aria-labelledby="modes-map" className="flex flex-col gap-2">

@@ -22,7 +22,7 @@ export function ModeTable({ modes, selected, onSelect, schroederHz, coincident }
     [modes, kinds, sort],
   );
   const header = (key: SortKey, label: string, title?: string) => (
-    <th scope="col" aria-sort={sort.key === key ? (sort.dir === 1 ? 'ascending' : 'descending') : 'none'} className="px-2 py-1.5 text-left font-medium">
+    <th scope="col" aria-sort={sort.key === key ? (sort.dir === 1 ? 'ascending' : 'descending') : 'none'} className="px-1.5 py-1.5 text-left font-medium sm:px-2">
       <button type="button" title={title} className="inline-flex items-center gap-1 rounded hover:underline" onClick={() => setSort((s) => ({ key, dir: s.key === key ? (s.dir === 1 ? -1 : 1) : 1 }))}>
         {label}
         <span aria-hidden="true" className="text-ink-faint">{sort.key === key ? (sort.dir === 1 ? '▲' : '▼') : '↕'}</span>
@@ -44,8 +44,9 @@ export function ModeTable({ modes, selected, onSelect, schroederHz, coincident }
           {rows.length} of {modes.length} modes
         </span>
       </fieldset>
-      <div className="max-h-96 overflow-auto rounded-md border border-line bg-white">
-        <table className="w-full text-sm" data-testid="mode-table">
+      {/* relative: the rows' screen-reader text (absolutely positioned) stays inside this scroll box instead of widening the page. */}
+      <div className="relative max-h-96 overflow-auto rounded-md border border-line bg-white">
+        <table className="w-full text-xs sm:text-sm" data-testid="mode-table">
           <caption className="sr-only">Room modes: frequency, indices along the length, width and height, and kind</caption>
           <thead className="sticky top-0 bg-paper text-ink-soft">
             <tr>
@@ -54,7 +55,7 @@ export function ModeTable({ modes, selected, onSelect, schroederHz, coincident }
               {header('nW', 'nW', 'Index across the width')}
               {header('nH', 'nH', 'Index along the height')}
               {header('kind', 'Kind')}
-              <th scope="col" className="px-2 py-1.5 text-left font-medium">
+              <th scope="col" className="px-1.5 py-1.5 text-left font-medium sm:px-2">
                 Map
               </th>
             </tr>
@@ -65,7 +66,7 @@ export function ModeTable({ modes, selected, onSelect, schroederHz, coincident }
               const isSelected = sameIndices(selected, m.indices);
               return (
                 <tr key={key} className={`border-t border-line ${isSelected ? 'bg-tint-info' : ''} ${m.frequencyHz > schroederHz ? 'text-ink-soft' : ''}`}>
-                  <td className="num px-2 py-1">
+                  <td className="num px-1.5 py-1 sm:px-2">
                     {m.frequencyHz.toFixed(2)}
                     {coincident.has(key) ? (
                       <span className="ml-1.5 rounded bg-tint-warn px-1 text-xs text-tint-ink-warn" title="Near-coincident: within 2 % of another mode below the Schroeder frequency">
@@ -74,11 +75,11 @@ export function ModeTable({ modes, selected, onSelect, schroederHz, coincident }
                       </span>
                     ) : null}
                   </td>
-                  <td className="num px-2 py-1">{m.indices[0]}</td>
-                  <td className="num px-2 py-1">{m.indices[1]}</td>
-                  <td className="num px-2 py-1">{m.indices[2]}</td>
-                  <td className="px-2 py-1">{m.kind}</td>
-                  <td className="px-2 py-1">
+                  <td className="num px-1.5 py-1 sm:px-2">{m.indices[0]}</td>
+                  <td className="num px-1.5 py-1 sm:px-2">{m.indices[1]}</td>
+                  <td className="num px-1.5 py-1 sm:px-2">{m.indices[2]}</td>
+                  <td className="px-1.5 py-1 sm:px-2">{m.kind}</td>
+                  <td className="px-1.5 py-1 sm:px-2">
                     <button
                       type="button"
                       aria-pressed={isSelected}

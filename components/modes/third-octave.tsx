@@ -11,7 +11,8 @@ export function ThirdOctave({ data }: { data: RoomModesAnswer }) {
   const coincident = new Set(data.bonello?.coincidencesAtHz ?? []);
   const columns = data.thirdOctaveBands.map((b) => ({
     id: String(b.centerHz),
-    label: b.centerHz >= 100 ? b.centerHz.toFixed(0) : b.centerHz.toFixed(b.centerHz < 31 ? 1 : 0),
+    // The IEC 61260-1 nominal label (25, 31.5, 80, 125, 160), not the exact base-ten centre (25.12, 79.43 …).
+    label: String(b.nominalHz),
     value: b.count,
     color: decreasing.has(b.centerHz) ? chartColors.fail : coincident.has(b.centerHz) ? chartColors.warn : chartColors.mains,
     note: `${b.axial} axial, ${b.tangential} tangential, ${b.oblique} oblique${decreasing.has(b.centerHz) ? ' — fewer than the band below' : ''}${coincident.has(b.centerHz) ? ' — holds coincident modes' : ''}`,
@@ -23,10 +24,10 @@ export function ThirdOctave({ data }: { data: RoomModesAnswer }) {
         <h3 id="modes-bands" className="text-base font-semibold">
           Modes per one-third octave
         </h3>
-        <ChartExportButtons svgRef={ref} filename="modes-per-third-octave" subject="modes per one-third octave" csv={() => ['centerHz,count,axial,tangential,oblique', ...data.thirdOctaveBands.map((b) => `${b.centerHz},${b.count},${b.axial},${b.tangential},${b.oblique}`)].join('\n')} />
+        <ChartExportButtons svgRef={ref} filename="modes-per-third-octave" subject="modes per one-third octave" csv={() => ['nominalHz,centerHz,count,axial,tangential,oblique', ...data.thirdOctaveBands.map((b) => `${b.nominalHz},${b.centerHz},${b.count},${b.axial},${b.tangential},${b.oblique}`)].join('\n')} />
       </div>
       {columns.length ? (
-        <ColumnChart ref={ref} columns={columns} title="Modes per one-third-octave band" description="Number of room modes in each IEC 61260-1 one-third-octave band; Bonello asks that the count never falls from one band to the next." xLabel="Band centre (Hz)" yLabel="Modes" />
+        <ColumnChart ref={ref} columns={columns} title="Modes per one-third-octave band" description="Number of room modes in each IEC 61260-1 one-third-octave band; Bonello asks that the count never falls from one band to the next." xLabel="Band, nominal mid-band frequency (Hz)" yLabel="Modes" />
       ) : (
         <p className="text-sm text-ink-soft">No complete band below {data.statisticalCount.frequencyHz} Hz.</p>
       )}

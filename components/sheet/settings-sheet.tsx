@@ -6,6 +6,8 @@ import type { SystemDocument } from '@/lib/validations/system';
 interface Props {
   name: string;
   revision: number;
+  /** The note saved with the revision shown ("moved subs to the front corners"), if any. */
+  revisionNote?: string | null;
   /** ISO time of the revision shown. */
   savedAt: string;
   savedBy?: string | null;
@@ -55,7 +57,7 @@ function SheetHead({ columns }: { columns: readonly { label: string; right?: boo
  * room-mode summary and notes, dated and with the revision. A pure render of the document, so the
  * editor, the Library and the shared page print the same thing.
  */
-export function SettingsSheet({ name, revision, savedAt, savedBy, workspaceName, document, printedAt }: Props) {
+export function SettingsSheet({ name, revision, revisionNote, savedAt, savedBy, workspaceName, document, printedAt }: Props) {
   const sheet = computeSettingsSheet(document);
   return (
     <article className="settings-sheet mx-auto flex max-w-[60rem] flex-col gap-5 rounded-lg border border-line bg-white p-5 text-ink sm:p-8" aria-labelledby="sheet-title">
@@ -70,6 +72,14 @@ export function SettingsSheet({ name, revision, savedAt, savedBy, workspaceName,
         <dl className="num grid grid-cols-[auto_auto] gap-x-3 text-sm">
           <dt className="text-ink-faint">Revision</dt>
           <dd data-testid="sheet-revision">{revision}</dd>
+          {revisionNote ? (
+            <>
+              <dt className="text-ink-faint">Note</dt>
+              <dd className="max-w-64 break-words font-sans" data-testid="sheet-revision-note">
+                {revisionNote}
+              </dd>
+            </>
+          ) : null}
           <dt className="text-ink-faint">Saved</dt>
           <dd>
             <time dateTime={savedAt}>{savedAt.slice(0, 10)}</time>

@@ -1,7 +1,9 @@
 'use client';
 
-import { useId, useState } from 'react';
+import { useId, useState, type KeyboardEvent } from 'react';
+import { formatNumberText, parseLengthText, parseNumberText } from '@/lib/number-input';
 import { feetToMetres, metresToFeet } from '@/lib/units';
+import { useDecimalMark } from './use-decimal-mark';
 
 export interface NumberFieldProps {
   label: string;
@@ -14,7 +16,7 @@ export interface NumberFieldProps {
   step?: number;
   /** Show a range slider beside the number. */
   slider?: boolean;
-  /** A length in metres: shown and typed in feet when units === 'imperial'. */
+  /** A length in metres: shown in feet when units === 'imperial'; typed in any unit (10' 2", 122 in, 310 cm, 3.1 m). */
   length?: boolean;
   units?: 'metric' | 'imperial';
   digits?: number;
@@ -25,13 +27,19 @@ export interface NumberFieldProps {
   testId?: string;
 }
 
+/** What was typed, the value it gave once converted, and the units then shown: shown again as typed while both hold. */
+type Typed = { text: string; value: number; units: 'metric' | 'imperial' };
+
 /**
- * A labelled numeric field with its unit and an optional slider; keyboard operable (arrow keys
- * step the number and the slider). Lengths are stored in metres and shown in feet on request.
- * Out-of-range or non-numeric input shows a message and is not passed on.
+ * A labelled numeric field with its unit and an optional slider; keyboard operable (arrow keys step the number,
+ * Escape drops an edit). Text is read by lib/number-input: either decimal mark (`80,5` is 80.5), and for lengths
+ * feet and inches or metric units as people write them. The value typed is converted to SI once and kept; what is
+ * shown is never written back, so switching units does not change the stored value. Unreadable or out-of-range
+ * input shows a message and changes nothing.
  */
 export function NumberField({ label, value, onChange, unit, min, max, step = 1, slider, length, units = 'metric', digits, error, hint, disabled, className = '', testId }: NumberFieldProps) {
   const id = useId();
+  const decimalMark = useDecimalMark();
   const imperial = Boolean(length) && units === 'imperial';
   const toShown = (v: number) => (imperial ? metresToFeet(v) : v);
   const fromShown = (v: number) => (imperial ? feetToMetres(v) : v);
@@ -39,32 +47,67 @@ export function NumberField({ label, value, onChange, unit, min, max, step = 1, 
   const shownMin = min === undefined ? undefined : toShown(min);
   const shownMax = max === undefined ? undefined : toShown(max);
   const shownStep = imperial ? Math.max(0.1, Math.round(metresToFeet(step) * 10) / 10) : step;
-  const fmt = (v: number) => {
-    const d = digits ?? (shownStep >= 1 ? 0 : shownStep >= 0.1 ? 1 : 2);
-    return String(Number(toShown(v).toFixed(d)));
-  };
-  // What the person is typing; null shows the value itself (so outside changes appear at once).
+  const shownDigits = digits ?? (shownStep >= 1 ? 0 : shownStep >= 0.1 ? 1 : 2);
+  const fmt = (v: number) => formatNumberText(toShown(v), shownDigits, decimalMark);
+  const limit = (v: number) => `${formatNumberText(v, 2, decimalMark)}${shownUnit ? ` ${shownUnit}` : ''}`;
+  // What the person is typing; null shows the value (as last typed, while it and the units are unchanged).
   const [draft, setDraft] = useState<string | null>(null);
+  const [typed, setTyped] = useState<Typed | null>(null);
   const [localError, setLocalError] = useState<string | null>(null);
-  const text = draft ?? fmt(value);
+  const text = draft ?? (typed && typed.value === value && typed.units === units ? typed.text : fmt(value));
 
-  const commit = (raw: string) => {
+  /** The text read into SI (units typed are honoured; a bare number is in the shown unit). */
+  const parse = (raw: string) => (length ? parseLengthText(raw, { units: imperial ? 'imperial' : 'metric', decimalMark }) : parseNumberText(raw, { decimalMark, unit }));
+  /** The SI value of `raw`, or the message that says why it is refused. */
+  const read = (raw: string): { ok: true; value: number } | { ok: false; message: string } => {
+    const r = parse(raw);
+    if (!r.ok) return { ok: false, message: `${label}: ${r.message}` };
+    if (min !== undefined && r.value < min - 1e-9) return { ok: false, message: `${label} must be at least ${limit(shownMin!)}` };
+    if (max !== undefined && r.value > max + 1e-9) return { ok: false, message: `${label} must be at most ${limit(shownMax!)}` };
+    return r;
+  };
+
+  const edit = (raw: string) => {
     setDraft(raw);
-    const n = Number(raw.replace(',', '.'));
-    if (raw.trim() === '' || !Number.isFinite(n)) {
-      setLocalError(`${label} must be a number`);
-      return;
-    }
-    if (shownMin !== undefined && n < shownMin - 1e-9) {
-      setLocalError(`${label} must be at least ${Number(shownMin.toFixed(2))}${shownUnit ? ` ${shownUnit}` : ''}`);
-      return;
-    }
-    if (shownMax !== undefined && n > shownMax + 1e-9) {
-      setLocalError(`${label} must be at most ${Number(shownMax.toFixed(2))}${shownUnit ? ` ${shownUnit}` : ''}`);
+    const r = read(raw);
+    if (!r.ok) {
+      // Half-typed text ("10 f" on the way to "10 ft") is not flagged until the field is left; a number out of range is.
+      setLocalError(parse(raw).ok ? r.message : null);
       return;
     }
     setLocalError(null);
-    onChange(fromShown(n));
+    setTyped({ text: raw.trim(), value: r.value, units });
+    onChange(r.value);
+  };
+
+  const leave = () => {
+    if (draft === null) return;
+    const r = read(draft);
+    if (r.ok) setDraft(null);
+    else setLocalError(r.message); // an invalid entry stays, with its message
+  };
+
+  const stepBy = (direction: 1 | -1) => {
+    const r = draft === null ? null : read(draft);
+    const base = toShown(r?.ok ? r.value : value);
+    let next = Number((base + direction * shownStep).toFixed(Math.max(shownDigits, 6)));
+    if (shownMin !== undefined) next = Math.max(next, shownMin);
+    if (shownMax !== undefined) next = Math.min(next, shownMax);
+    setDraft(null);
+    setTyped(null);
+    setLocalError(null);
+    onChange(fromShown(next));
+  };
+
+  const onKeyDown = (e: KeyboardEvent<HTMLInputElement>) => {
+    if (e.altKey || e.ctrlKey || e.metaKey) return;
+    if (e.key === 'ArrowUp' || e.key === 'ArrowDown') {
+      e.preventDefault();
+      stepBy(e.key === 'ArrowUp' ? 1 : -1);
+    } else if (e.key === 'Escape' && draft !== null) {
+      setDraft(null);
+      setLocalError(null);
+    } else if (e.key === 'Enter') leave();
   };
 
   const message = localError ?? error;
@@ -78,20 +121,23 @@ export function NumberField({ label, value, onChange, unit, min, max, step = 1, 
         <input
           id={id}
           data-testid={testId}
-          type="number"
-          inputMode="decimal"
+          type="text"
+          role="spinbutton"
+          inputMode={length ? 'text' : 'decimal'}
+          autoComplete="off"
+          title={length ? `Any unit: 10' 2", 10 ft 2 in, 122 in, 10.17 ft, 3.1 m, 310 cm (a bare number is in ${imperial ? 'feet' : 'metres'})` : undefined}
+          spellCheck={false}
           value={text}
-          min={shownMin}
-          max={shownMax}
-          step={shownStep}
+          aria-valuenow={Number(toShown(value).toFixed(6))}
+          aria-valuetext={`${text}${shownUnit && !length ? ` ${shownUnit}` : ''}`}
+          aria-valuemin={shownMin}
+          aria-valuemax={shownMax}
           disabled={disabled}
           aria-invalid={message ? true : undefined}
           aria-describedby={message ? `${id}-msg` : hint ? `${id}-hint` : undefined}
-          onBlur={() => {
-            // A valid entry gives way to the formatted value; an invalid one stays with its message.
-            if (!localError) setDraft(null);
-          }}
-          onChange={(e) => commit(e.target.value)}
+          onBlur={leave}
+          onKeyDown={onKeyDown}
+          onChange={(e) => edit(e.target.value)}
           className={`num w-24 rounded-md border bg-white px-2 py-1.5 text-sm disabled:cursor-not-allowed disabled:border-dashed disabled:bg-muted disabled:text-ink-soft ${message ? 'border-fail' : 'border-line'}`}
         />
         {slider && min !== undefined && max !== undefined ? (
@@ -106,6 +152,7 @@ export function NumberField({ label, value, onChange, unit, min, max, step = 1, 
             onChange={(e) => {
               const n = Number(e.target.value);
               setDraft(null);
+              setTyped(null);
               setLocalError(null);
               onChange(fromShown(n));
             }}

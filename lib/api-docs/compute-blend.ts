@@ -143,7 +143,7 @@ export const BLEND_DOCS: ApiRouteDoc[] = [
     fields: [
       ...systemFields('The crossover the processor runs now, 20…300: with mainsHighpass and subLowpass it is the present row.'),
       { name: 'pairings[]', type: 'array', required: true, description: `1–6 slope pairings to try, { mainsFilter: { family, order }, subFilter: { family, order } }; ${slopeNote}.` },
-      { name: 'candidatesHz', type: 'number[]', unit: 'Hz', description: 'Candidate crossover points, 20…300, 1–60 of them (default 40–150 Hz in 5 Hz steps). Candidates × pairings ≤ 120.' },
+      { name: 'candidatesHz', type: 'number[]', unit: 'Hz', description: 'Candidate crossover points, 20…300, 1–60 of them (default 40–150 Hz in 5 Hz steps). Candidates × pairings ≤ 120 rows: the default 23 candidates allow 5 pairings, 20 or fewer allow 6; a refusal says how many pairings fit.' },
       { name: 'maxDelayMs', type: 'number', unit: 'ms', description: 'Largest shift of the subs\' delay tried either way, 1…50 (default 20).' },
     ],
     answer: [

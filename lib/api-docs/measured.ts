@@ -33,20 +33,24 @@ export const MEASURED_DOCS: ApiRouteDoc[] = [
     summary: 'Uploads a measured response (multipart/form-data) into the Library of a workspace where the caller is an editor or owner.',
     auth: 'session',
     fields: [
-      { name: 'file', type: 'file (text or CSV, ≤ 2 MB)', required: true, description: 'Two or three numeric columns per line: frequency (Hz), magnitude (dB), optional phase (°), separated by commas, semicolons, tabs or spaces. An optional header row; lines starting with # or ; are comments; decimal point, or decimal comma when the columns are not comma-separated.' },
+      { name: 'file', type: 'file (text or CSV, ≤ 2 MB)', required: true, description: 'Two or three numeric columns per line: frequency (Hz), magnitude (dB), optional phase (°), separated by commas, semicolons, tabs or spaces. Leading lines that do not begin with a number (notes, a header row) are skipped and counted; lines starting with # or ; are comments anywhere; decimal point, or decimal comma when the columns are not comma-separated.' },
       { name: 'name', type: 'string', description: '1–120 characters; default: the file name.' },
       { name: 'systemId', type: 'uuid', description: 'The System it was measured for; the measurement goes to that System’s workspace (editor there).' },
       { name: 'workspaceId', type: 'uuid', description: 'Without systemId: the workspace to keep it in (default: the caller’s personal workspace).' },
       { name: 'seat', type: 'string', description: 'Where it was measured, e.g. "Row 1 centre (MLP)".' },
       { name: 'role', type: 'string', description: '"mains", "sub", "sum" or another channel label (L, C, SL…).' },
     ],
-    answer: summary,
+    answer: [
+      ...summary,
+      { name: 'skippedLines', type: 'integer', description: 'Leading lines skipped because they do not begin with a number (notes, comments, the header row).' },
+      { name: 'firstDataLine', type: 'integer', description: 'The 1-based line of the first number.' },
+    ],
     examples: [
       {
         title: 'Upload a mains measurement taken at the MLP',
         request: { multipart: { file: 'seat-1-mains.csv', name: 'Seat 1 mains (invented)', systemId: SYSTEM, seat: 'Row 1 centre (MLP)', role: 'mains' } },
         status: 201,
-        responseExcerpt: { id: ID, name: 'Seat 1 mains (invented)', pointCount: 240, startHz: 20, stopHz: 19027, hasPhase: true },
+        responseExcerpt: { id: ID, name: 'Seat 1 mains (invented)', pointCount: 240, startHz: 20, stopHz: 19027, hasPhase: true, skippedLines: 3, firstDataLine: 4 },
       },
       {
         title: 'A refused file: every line error named (nothing is stored)',
@@ -56,7 +60,7 @@ export const MEASURED_DOCS: ApiRouteDoc[] = [
       },
     ],
     notes: [
-      'Refused with 400 (each issue names "line N, column M"): a non-numeric cell, a frequency that is not positive or not strictly increasing (duplicates included), fewer than 8 points, phase outside ±3600°, magnitude outside ±300 dB, binary content. At most 50 issues are listed; totalIssues counts them all.',
+      'Refused with 400 (each issue names "line N, column M"): a non-numeric cell or a line of text below the first number, a frequency that is not positive or not strictly increasing (duplicates included), fewer than 8 points, phase outside ±3600°, magnitude outside ±300 dB, binary content. At most 50 issues are listed; totalIssues counts them all.',
       '413 over 2 MB; 415 when the body is not multipart/form-data or the file is declared as a type that is not text (an image, a PDF, an archive).',
       ACCESS,
     ],

@@ -25,6 +25,12 @@ export interface AppMeasurementSummary {
   createdAt: string;
 }
 
+/** POST /api/v1/measurements's answer: the stored summary and how the file was read (leading lines of text skipped, first data line). */
+export interface AppUploadAnswer extends AppMeasurementSummary {
+  skippedLines: number;
+  firstDataLine: number;
+}
+
 /** A measurement with every point exactly as uploaded. */
 export interface AppMeasurement extends AppMeasurementSummary, MeasurementData {}
 
@@ -128,6 +134,44 @@ export async function deleteMeasurement(caller: Caller, id: string): Promise<voi
   const r = await findRow(id, false);
   await requireMembership(caller, r.workspaceId, 'editor', 'That measurement');
   await Measurement.destroy({ where: { id } });
+}
+
+/** A System's measurement as its share link shows it: the points, without who uploaded it or where it is kept. */
+export type SharedMeasurement = Omit<AppMeasurement, 'workspaceId' | 'workspaceName' | 'createdByName'>;
+
+/** Most measurements a share link shows, and most points of one (more is listed without its points). */
+export const SHARED_MEASUREMENT_LIMITS = { count: 12, points: 20_000 } as const;
+
+/**
+ * The measurements uploaded for one System (its own, in its own workspace: never another System's), newest first, for
+ * its share link. No access check: the caller (share-links.ts) has checked the token. `omitted` counts those beyond
+ * the limit; a file of more points than the limit comes without them (`frequencyHz` empty).
+ */
+export async function systemMeasurementsUnchecked(systemId: string, workspaceId: string): Promise<{ items: SharedMeasurement[]; omitted: number }> {
+  db();
+  const where = { systemId, workspaceId };
+  const total = await Measurement.count({ where });
+  const rows = (await Measurement.findAll({ where, order: [['createdAt', 'DESC'], ['id', 'ASC']], limit: SHARED_MEASUREMENT_LIMITS.count })) as Row[];
+  const items = rows.map((r): SharedMeasurement => {
+    const tooDense = r.pointCount > SHARED_MEASUREMENT_LIMITS.points;
+    const d = r.data;
+    return {
+      id: r.id,
+      systemId: r.systemId,
+      name: r.name,
+      seat: r.seat,
+      role: r.role,
+      pointCount: r.pointCount,
+      startHz: r.startHz,
+      stopHz: r.stopHz,
+      hasPhase: r.hasPhase,
+      createdAt: r.createdAt.toISOString(),
+      frequencyHz: tooDense ? [] : d.frequencyHz,
+      magnitudeDb: tooDense ? [] : d.magnitudeDb,
+      phaseDeg: tooDense ? null : (d.phaseDeg ?? null),
+    };
+  });
+  return { items, omitted: Math.max(0, total - rows.length) };
 }
 
 /** For the demo seed: adds a measurement to a workspace unless one of that name is there. */

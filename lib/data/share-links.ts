@@ -6,6 +6,7 @@ import { newToken } from '@/lib/tokens';
 import { isShareToken } from '@/lib/validations/share-link';
 import { Lesson, ShareLink, System, User } from '@/models';
 import { assertUuid } from './ids';
+import { systemMeasurementsUnchecked, type SharedMeasurement } from './measurements';
 import { stepsOf, toStep, type AppLessonShareLink, type SharedLesson } from './lessons';
 import { createSystem, getSystemUnchecked, type AppSystem } from './systems';
 
@@ -129,6 +130,19 @@ export async function getSharedSystem(token: string): Promise<(AppSystem & { sha
   if (!link) return null;
   const system = await getSystemUnchecked(link.targetId);
   return system ? { ...system, sharedAt: link.createdAt.toISOString() } : null;
+}
+
+/**
+ * The measurements of the System behind a live link, read-only, for anyone holding the token: only those uploaded for
+ * that System in its own workspace (never another System's or the rest of the workspace's); null when the link is
+ * unknown, revoked or its System deleted.
+ */
+export async function getSharedMeasurements(token: string): Promise<{ items: SharedMeasurement[]; omitted: number } | null> {
+  const link = await liveLink(token, 'system');
+  if (!link) return null;
+  const system = await System.findByPk(link.targetId, { attributes: ['id', 'workspaceId', 'deletedAt'] });
+  if (!system || system.deletedAt) return null;
+  return systemMeasurementsUnchecked(system.id, system.workspaceId);
 }
 
 /** The Lesson behind a live link, for anyone holding the token; null when unknown, revoked or deleted. */

@@ -151,7 +151,7 @@ export async function createSystem(caller: Caller, input: { name: string; docume
       { workspaceId, ownerId: caller.id, lastEditorId: caller.id, name: input.name, document: input.document, revision: 1, tags: input.document.tags },
       { transaction },
     );
-    await SystemRevision.create({ systemId: s.id, revision: 1, name: s.name, document: input.document, authorId: caller.id, note: input.note ?? 'created' }, { transaction });
+    await SystemRevision.create({ systemId: s.id, revision: 1, name: s.name, document: input.document, authorId: caller.id, note: input.note || 'created' }, { transaction });
     return s.id;
   });
   const created = await findLive(id);
@@ -177,7 +177,7 @@ export async function updateSystem(caller: Caller, id: string, input: { name: st
         currentRevision: current?.revision ?? null,
       });
     }
-    await SystemRevision.create({ systemId: id, revision: input.revision + 1, name: input.name, document: input.document, authorId: caller.id, note: input.note ?? null }, { transaction });
+    await SystemRevision.create({ systemId: id, revision: input.revision + 1, name: input.name, document: input.document, authorId: caller.id, note: input.note || null }, { transaction });
   });
   const saved = await findLive(id);
   return { ...toSummary(saved), document: readDocument(saved.document), role };
@@ -210,22 +210,51 @@ export async function restoreSystem(caller: Caller, id: string): Promise<AppSyst
 export async function listRevisions(caller: Caller, id: string): Promise<AppRevision[]> {
   const s = await findLive(id);
   await requireMembership(caller, s.workspaceId, 'viewer', 'That System');
-  const rows = await SystemRevision.findAll({ where: { systemId: id }, include: [{ model: User, as: 'author', attributes: ['name'] }], order: [['revision', 'DESC']], attributes: { exclude: ['document'] } });
-  return rows.map((r) => ({
+  const rows = await SystemRevision.findAll({ where: { systemId: id }, include: revisionInclude, order: [['revision', 'DESC']], attributes: { exclude: ['document'] } });
+  return rows.map(toRevision);
+}
+
+const revisionInclude = [{ model: User, as: 'author', attributes: ['name'] }];
+
+function toRevision(r: SystemRevision): AppRevision {
+  return {
     revision: r.revision,
     name: r.name,
     authorName: (r as unknown as { author?: User }).author?.name ?? null,
     note: r.note ?? null,
     createdAt: r.createdAt.toISOString(),
-  }));
+  };
 }
 
-export async function getRevision(caller: Caller, id: string, revision: number): Promise<{ revision: number; name: string; document: SystemDocument; createdAt: string }> {
+export async function getRevision(caller: Caller, id: string, revision: number): Promise<{ revision: number; name: string; note: string | null; document: SystemDocument; createdAt: string }> {
   const s = await findLive(id);
   await requireMembership(caller, s.workspaceId, 'viewer', 'That System');
   const r = await SystemRevision.findOne({ where: { systemId: id, revision } });
   if (!r) throw notFound('That revision');
-  return { revision: r.revision, name: r.name, document: readDocument(r.document), createdAt: r.createdAt.toISOString() };
+  return { revision: r.revision, name: r.name, note: r.note ?? null, document: readDocument(r.document), createdAt: r.createdAt.toISOString() };
+}
+
+/** The note of one revision (null when it has none), for a page that shows that revision. Viewers may read it. */
+export async function getRevisionNote(caller: Caller, id: string, revision: number): Promise<string | null> {
+  const s = await findLive(id);
+  await requireMembership(caller, s.workspaceId, 'viewer', 'That System');
+  const r = await SystemRevision.findOne({ where: { systemId: id, revision }, attributes: ['note'] });
+  if (!r) throw notFound('That revision');
+  return r.note ?? null;
+}
+
+/**
+ * Changes the note of a saved revision (editors and owners; an empty note removes it). Only the note changes: the
+ * revision's document, name, author and time stay as they were, and no new revision is made.
+ */
+export async function setRevisionNote(caller: Caller, id: string, revision: number, note: string): Promise<AppRevision> {
+  const s = await findLive(id);
+  await requireMembership(caller, s.workspaceId, 'editor', 'That System');
+  const [count] = await SystemRevision.update({ note: note || null }, { where: { systemId: id, revision } });
+  if (count !== 1) throw notFound('That revision');
+  const row = await SystemRevision.findOne({ where: { systemId: id, revision }, include: revisionInclude, attributes: { exclude: ['document'] } });
+  if (!row) throw notFound('That revision');
+  return toRevision(row);
 }
 
 /** Restoring an old revision saves it as a new revision (history only grows). */

@@ -2,14 +2,14 @@
 
 import useSWR from 'swr';
 import { ApiError, apiFetch, jsonFetcher, type ApiIssue } from '@/lib/client/api';
-import type { AppMeasurement, AppMeasurementSummary } from '@/lib/data/measurements';
+import type { AppMeasurement, AppMeasurementSummary, AppUploadAnswer } from '@/lib/data/measurements';
 import type { AppSystem } from '@/lib/data/systems';
 
 /** The API's answers, typed by the data layer that makes them (type imports only: nothing of the server is bundled). */
 export type MeasurementItem = AppMeasurementSummary;
 export type MeasurementPoints = AppMeasurement;
-/** POST /api/v1/measurements answers the stored measurement without its points. */
-export type UploadAnswer = AppMeasurementSummary;
+/** POST /api/v1/measurements answers the stored measurement without its points, and the leading lines it skipped. */
+export type UploadAnswer = AppUploadAnswer;
 
 /** The caller's measurements (of one workspace when given); null skips the request (signed out). */
 export function useMeasurementList(query: { workspaceId?: string } | null) {

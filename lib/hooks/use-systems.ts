@@ -22,6 +22,7 @@ export const systemsApi = {
   restore: (id: string) => apiFetch<SystemItem>(`/api/v1/systems/${id}/restore`, { method: 'POST' }),
   restoreRevision: (id: string, revision: number, currentRevision: number) =>
     apiFetch<SystemItem>(`/api/v1/systems/${id}/revisions/${revision}/restore`, { method: 'POST', json: { revision: currentRevision } }),
+  setRevisionNote: (id: string, revision: number, note: string) => apiFetch<RevisionItem>(`/api/v1/systems/${id}/revisions/${revision}`, { method: 'PATCH', json: { note } }),
   share: (id: string) => apiFetch<ShareLinkItem>(`/api/v1/systems/${id}/share-links`, { method: 'POST' }),
   revokeLink: (token: string) => apiFetch<ShareLinkItem>(`/api/v1/share-links/${encodeURIComponent(token)}`, { method: 'DELETE' }),
   copyShared: (token: string, workspaceId: string, name?: string) => apiFetch<SystemItem>(`/api/v1/shared/${encodeURIComponent(token)}/copy`, { method: 'POST', json: { workspaceId, ...(name ? { name } : {}) } }),

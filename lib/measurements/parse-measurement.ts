@@ -1,7 +1,8 @@
 /**
  * Reads a measured response from plain text or CSV: two or three numeric columns (frequency Hz,
- * magnitude dB, optional phase °) separated by commas, semicolons, tabs or spaces; an optional
- * header row; `#` and `;` comment lines; a decimal point, or a decimal comma when the columns are
+ * magnitude dB, optional phase °) separated by commas, semicolons, tabs or spaces; any leading lines that do not
+ * begin with a number (a header row, notes such as `* invented meter` or `"Date: …"`) are skipped and counted;
+ * `#` and `;` comment lines anywhere; a decimal point, or a decimal comma when the columns are
  * not comma-separated (the European style `20,5;-3,25`). Shared by the upload route (server) and
  * the upload control's preview (browser), so both refuse the same files with the same messages.
  * Splitting is papaparse's; here only the checks of each cell.
@@ -40,6 +41,10 @@ export interface ParsedMeasurement {
   headerLine: number | null;
   /** The header row's cells, if there was one. */
   header: string[] | null;
+  /** Leading lines skipped because they do not begin with a number (comments, notes and the header included; blank lines not counted). */
+  skippedLines: number;
+  /** 1-based line of the first data line (the skipped lines are above it). */
+  firstDataLine: number;
 }
 
 export type ParseMeasurementResult =
@@ -102,6 +107,11 @@ function splitLines(lines: string[], delimiter: Delimiter): string[][] {
   return (Papa.parse<string[]>(lines.join('\n'), { delimiter, newline: '\n', quoteChar: '"', skipEmptyLines: false }).data).map(trimFields);
 }
 
+/** One line on its own (an unbalanced quote cannot reach into the next line). */
+function splitLine(line: string, delimiter: Delimiter): string[] {
+  return splitLines([line], delimiter)[0] ?? [];
+}
+
 /** Picks the separator that gives 2–3 numeric columns on most of the first data lines. */
 function detectFormat(sample: string[]): { delimiter: Delimiter; decimalComma: boolean } {
   const candidates: { delimiter: Delimiter; decimalComma: boolean }[] = [
@@ -113,7 +123,7 @@ function detectFormat(sample: string[]): { delimiter: Delimiter; decimalComma: b
   let best = { score: -1, pick: candidates[3] as { delimiter: Delimiter; decimalComma: boolean } };
   for (const c of candidates) {
     if (c.delimiter !== ' ' && !sample.some((l) => l.includes(c.delimiter))) continue;
-    const rows = splitLines(sample, c.delimiter);
+    const rows = sample.map((l) => splitLine(l, c.delimiter));
     let score = 0;
     for (const r of rows) {
       if (r.length >= 2 && r.length <= 3 && r.every((cell) => numericCell(cell, c.decimalComma) !== null)) score++;
@@ -155,13 +165,29 @@ export function parseMeasurementText(text: string): ParseMeasurementResult {
     return fail('The file holds no data lines.');
   }
 
-  const sample = dataLineIdx.slice(0, 40).map((i) => rawLines[i] as string);
+  // The separator is judged on lines that look like data (begin with a digit, sign or point), so many lines of notes on top do not sway it.
+  const looksNumeric = dataLineIdx.filter((i) => /^["']?[+\-.\d]/.test((rawLines[i] as string).trimStart()));
+  const sample = (looksNumeric.length ? looksNumeric : dataLineIdx).slice(0, 40).map((i) => rawLines[i] as string);
   const { delimiter, decimalComma } = detectFormat(sample);
-  const kept = rawLines.map((l) => (l.trim() === '' || isComment(l) ? '' : l));
+
+  // Leading lines that do not begin with a number (notes, a header) are skipped and counted; the data start at the
+  // first line whose first cell is a number. A line further down that is not numbers is an error naming its line.
+  let start = 0;
+  while (start < dataLineIdx.length && numericCell(splitLine(rawLines[dataLineIdx[start] as number] as string, delimiter)[0] ?? '', decimalComma) === null) start++;
+  const leading = new Set(dataLineIdx.slice(0, start));
+  const lastSkipped = start > 0 ? (dataLineIdx[start - 1] as number) : null;
+  const headerLine = lastSkipped === null ? null : lastSkipped + 1;
+  const header = lastSkipped === null ? null : splitLine(rawLines[lastSkipped] as string, delimiter);
+  const dataStart = dataLineIdx[start] ?? rawLines.length;
+  const skippedLines = rawLines.slice(0, dataStart).filter((l) => l.trim() !== '').length;
+  if (start === dataLineIdx.length) {
+    add(null, null, `no line begins with a number (${skippedLines} line${skippedLines === 1 ? '' : 's'} of text)`);
+    return fail('The file holds no data lines: no line begins with a number.');
+  }
+
+  const kept = rawLines.map((l, i) => (l.trim() === '' || isComment(l) || leading.has(i) ? '' : l));
   const rows = splitLines(kept, delimiter);
 
-  let headerLine: number | null = null;
-  let header: string[] | null = null;
   let columns: number | null = null;
   const frequencyHz: number[] = [];
   const magnitudeDb: number[] = [];
@@ -170,16 +196,10 @@ export function parseMeasurementText(text: string): ParseMeasurementResult {
   let firstDataLine: number | null = null;
   let lastDataLine: number | null = null;
 
-  for (const idx of dataLineIdx) {
+  for (const idx of dataLineIdx.slice(start)) {
     const line = idx + 1;
     const cells = rows[idx] ?? [];
     const values = cells.map((c) => numericCell(c, decimalComma));
-    // A header: the first data line, with a cell that is not a number.
-    if (headerLine === null && firstDataLine === null && columns === null && values.some((v) => v === null)) {
-      headerLine = line;
-      header = cells;
-      continue;
-    }
     if (firstDataLine === null) firstDataLine = line;
     lastDataLine = line;
     if (cells.length < 2 || cells.length > 3) {
@@ -234,9 +254,12 @@ export function parseMeasurementText(text: string): ParseMeasurementResult {
       stopHz: frequencyHz[frequencyHz.length - 1] as number,
       hasPhase,
       delimiter,
-      decimalComma,
+      // Said only when a number in the data used one (a tab file allows decimal commas but may not have any).
+      decimalComma: decimalComma && dataLineIdx.slice(start).some((i) => /\d,\d/.test(rawLines[i] as string)),
       headerLine,
       header,
+      skippedLines,
+      firstDataLine: dataStart + 1,
     },
   };
 }

@@ -11,7 +11,17 @@ import { roundTo, roundToSignificant } from './rounding';
 
 export interface HeadroomRowOut {
   name: string;
+  /** Maximum SPL at the binding limit: the amplifier's power, or the speaker's rating when the amplifier is above it. */
   maxSplDb: number;
+  /** Maximum SPL with the amplifier's full power. */
+  amplifierSplDb: number;
+  /** Maximum SPL at the speaker's rated power; null when the profile gives no rating. */
+  ratedSplDb: number | null;
+  /** Which limit sets maxSplDb (and so the headroom verdict). */
+  binding: 'amplifier' | 'speaker';
+  /** The power maxSplDb is computed at: min(amplifier, rating), W. */
+  usablePowerW: number;
+  ratedPowerW: number | null;
   perUnitSplDb: number;
   sensitivity1WDb: number;
   targetPeakDb: number;
@@ -66,11 +76,16 @@ type Row = HeadroomRequest['channels'][number];
 function rowOut(row: Row, defaultTarget: number): HeadroomRowOut {
   const targetPeakDb = row.targetPeakDb ?? defaultTarget;
   const opts = { sensitivityDb: row.sensitivityDb, sensitivityRef: row.sensitivityRef, impedanceOhm: row.impedanceOhm, powerW: row.powerW, distanceM: row.distanceM, count: row.count, roomGainDb: row.roomGainDb };
-  const h = headroomCheck({ ...opts, targetPeakDb });
+  const h = headroomCheck({ ...opts, targetPeakDb, ...(row.ratedPowerW === undefined ? {} : { ratedPowerW: row.ratedPowerW }) });
   const m = maxSplDb(opts);
   return {
     name: row.name,
     maxSplDb: roundTo(h.maxSplDb, 2),
+    amplifierSplDb: roundTo(h.amplifierSplDb, 2),
+    ratedSplDb: h.ratedSplDb === null ? null : roundTo(h.ratedSplDb, 2),
+    binding: h.binding,
+    usablePowerW: h.usablePowerW,
+    ratedPowerW: row.ratedPowerW ?? null,
     perUnitSplDb: roundTo(m.perUnitSplDb, 2),
     sensitivity1WDb: roundTo(m.sensitivity1WDb, 2),
     targetPeakDb: roundTo(targetPeakDb, 2),
@@ -92,6 +107,7 @@ export const HEADROOM_SAFETY_NOTES = [
   'NIOSH recommends at most 85 dBA averaged over 8 hours with a 3 dB exchange rate: every 3 dB more halves the safe time (100 dBA: 15 minutes a day). Published: NIOSH, Criteria for a Recommended Standard: Occupational Noise Exposure, 1998.',
   'Wear hearing protection while running level sweeps or stress tests, and warn everyone in the room before playing test signals.',
   'Amplifier power above a speaker’s rating can destroy drivers; the power-needed figures assume undistorted peaks and are not a licence to drive past the rating.',
+  'Where the amplifier is above the speaker’s rating, the maximum SPL and the verdict are taken at the rating (the binding limit): set the amplifier’s gain or a limiter so the speaker never gets more. The speaker maker’s ratings and instructions come first; a rating says nothing about how long a driver takes its full power.',
   'Mounting speakers or subs on walls and ceilings and any electrical work (dedicated circuits, in-wall wiring) must follow local building and electrical codes; use rated hardware and a licensed professional where the codes require one.',
 ];
 

@@ -2,10 +2,12 @@
  * Lesson frame: one frame of a Lesson Step's plot (`computeLessonFrame`), the System's mains channel and subs summed by
  * dsp/ in the browser (so a sweep can be recomputed every animation frame without a round trip), with the blend
  * read-outs at the crossover. The paths are the whole-system model's (`systemPaths`), the same ones
- * POST /api/v1/blend sums for the document. No request and nothing written back: a frame is computed from the document.
+ * POST /api/v1/blend sums for the document, with phase drawn from the first arrival at the MLP as Blend draws it
+ * (`fromFirstArrival`). No request and nothing written back: a frame is computed from the document.
  */
 import { assessBlend, blendMetrics, blendResponse, logFrequencyGridHz, roomModes, systemPaths, type BlendAssessment, type BlendMetrics, type BlendResult } from '@/dsp';
 import type { SystemDocument } from '@/lib/validations/system';
+import { fromFirstArrival } from './first-arrival';
 import { distanceToSeatM } from './geometry';
 import { systemModelFromDocument } from './system-from-document';
 
@@ -38,7 +40,8 @@ export function computeLessonFrame(doc: SystemDocument): LessonFrame | null {
   if (!model) return null;
   const paths = systemPaths(model);
   const temperatureC = doc.room.temperatureC;
-  const result = blendResponse({ temperatureC, frequencyHz: frameGridHz(), paths });
+  // Phase drawn from the first arrival at the MLP, as Blend draws it (levels and phase differences do not change).
+  const result = blendResponse({ temperatureC, frequencyHz: frameGridHz(), paths: fromFirstArrival(paths).paths });
   const crossoverHz = doc.bassManagement.crossoverHz;
   const metrics = paths.length >= 1 ? blendMetrics(result, { crossoverHz, mainsIndex: 0, subIndex: paths.length > 1 ? 1 : 0 }) : null;
   const assessment = paths.length >= 1 ? assessBlend({ temperatureC, paths, crossoverHz }) : null;

@@ -6,6 +6,7 @@
  */
 import {
   ADVICE_RULES,
+  bandPowerAverageDb,
   bestMeasuredAlignment,
   logFrequencyGridHz,
   predictMeasuredBlend,
@@ -254,4 +255,41 @@ export function applyMeasuredToDocument(
         : { delayMs: s.delayMs + mainsShift, invert: s.invert },
   );
   return retimeDocument(doc, before, { mainsDelayMs: rec.mainsDelayMs, subs });
+}
+
+/** What a measurement's role says was playing: `sub` (sub, LFE), `sum` (mains and sub together), `mains` (mains or a channel label), or unknown. */
+export function measurementRoleKind(role: string | null | undefined): 'mains' | 'sub' | 'sum' | null {
+  if (!role || !role.trim()) return null;
+  if (/sum|both|together|\+/i.test(role)) return 'sum';
+  if (/sub|lfe/i.test(role)) return 'sub';
+  return 'mains';
+}
+
+/**
+ * The band a measured curve is level-aligned to the model sum in (the sum is at 0 dB through the passband), by its
+ * role, within the file's own range: a mains file above the crossover (2·fc … 8·fc), a sub file below it (fc/3 … fc),
+ * anything else around it (fc/2 … 2·fc). Null when the file does not reach a third of an octave of that band.
+ */
+export function overlayAlignBandHz(role: string | null, crossoverHz: number, curveHz: readonly number[]): { startHz: number; stopHz: number } | null {
+  const kind = measurementRoleKind(role);
+  const [lo, hi] = kind === 'mains' ? [2, 8] : kind === 'sub' ? [1 / 3, 1] : [0.5, 2];
+  const startHz = Math.max(crossoverHz * lo, curveHz[0] ?? Infinity);
+  const stopHz = Math.min(crossoverHz * hi, curveHz[curveHz.length - 1] ?? 0);
+  return stopHz >= startHz * 2 ** (1 / 3) ? { startHz: Math.round(startHz), stopHz: Math.round(stopHz) } : null;
+}
+
+/** The offset that brings a curve's power average over the band to the model sum's there, dB (0.1 dB); null when either has no point in it. */
+export function overlayAlignOffsetDb(
+  model: { frequencyHz: readonly number[]; magnitudeDb: readonly number[] },
+  curve: { frequencyHz: readonly number[]; magnitudeDb: readonly number[] },
+  band: { startHz: number; stopHz: number },
+): number | null {
+  try {
+    const target = bandPowerAverageDb({ ...model, ...band }).levelDb;
+    const own = bandPowerAverageDb({ frequencyHz: curve.frequencyHz, magnitudeDb: curve.magnitudeDb, ...band }).levelDb;
+    return roundTo(target - own, 1);
+  } catch (e) {
+    if (e instanceof RangeError) return null;
+    throw e;
+  }
 }

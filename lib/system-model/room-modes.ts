@@ -7,6 +7,7 @@ import {
   bonelloCheck,
   modeCountsPerThirdOctave,
   nearCoincidentModes,
+  nominalMidbandHz,
   roomModes,
   roomProportionCheck,
   schroederFrequencyHz,
@@ -29,6 +30,8 @@ export interface RoomModeOut {
 
 export interface ThirdOctaveBandOut {
   centerHz: number;
+  /** The band's label, IEC 61260-1 nominal mid-band frequency (25, 31.5, 40 … 160, 200). */
+  nominalHz: number;
   lowerHz: number;
   upperHz: number;
   count: number;
@@ -107,6 +110,7 @@ export function computeRoomModes(input: RoomModesRequest): RoomModesAnswer {
     },
     thirdOctaveBands: bands.map((b) => ({
       centerHz: roundToSignificant(b.centerHz, 4),
+      nominalHz: nominalMidbandHz(b.centerHz, 3),
       lowerHz: roundToSignificant(b.lowerHz, 4),
       upperHz: roundToSignificant(b.upperHz, 4),
       count: b.count,

@@ -3,7 +3,8 @@
  * front-wall notches) and the compute behind POST /api/v1/room-response (`computeRoomResponse`, assembled from
  * dsp/room: no mathematics of its own beyond averaging for the 0 dB reference and rounding).
  */
-import { logFrequencyGridHz, modePressureMap, quarterWaveNotchHz, schroederFrequencyHz, seatSpreadDb, speedOfSoundMps, summedModalResponse, type ModeKind } from '@/dsp';
+import { logFrequencyGridHz, modePressureAt, modePressureMap, nodeAlignedCellCount, quarterWaveNotchHz, schroederFrequencyHz, seatSpreadDb, speedOfSoundMps, summedModalResponse, type ModeKind } from '@/dsp';
+import { ROOM_LIMITS } from '@/lib/validations/compute-common';
 import type { RoomResponseRequest } from '@/lib/validations/compute-room';
 import type { SystemDocument } from '@/lib/validations/system';
 import { mlpSeat, toPointM } from './geometry';
@@ -23,7 +24,11 @@ export interface RoomResponseAnswer {
   subs: { name: string }[];
   seats: { name: string; summedDb: number[]; perSubDb: number[][]; bandMeanDb: number }[];
   spread: { startHz: number; stopHz: number; spreadDb: number[]; meanSpreadDb: number; maxSpreadDb: number; maxSpreadHz: number } | null;
-  map: { indices: Indices; kind: ModeKind; frequencyHz: number; zM: number; columns: number; rows: number; xM: number[]; yM: number[]; pressure: number[][] } | null;
+  /**
+   * One mode over the floor at zM, sampled at cell centres (rows and columns rounded to counts whose centres fall on
+   * every node line, so a node reads 0), and `seatPressure`, the mode at each seat's own position, in seat order.
+   */
+  map: { indices: Indices; kind: ModeKind; frequencyHz: number; zM: number; columns: number; rows: number; xM: number[]; yM: number[]; pressure: number[][]; seatPressure: number[] } | null;
   quarterWave: { name: string; distanceM: number; notchHz: number }[];
 }
 
@@ -98,7 +103,10 @@ export function computeRoomResponse(input: RoomResponseRequest): RoomResponseAns
   let mapOut: RoomResponseAnswer['map'] = null;
   if (map) {
     const [nl, nw, nh] = map.indices;
-    const m = modePressureMap({ room: dims, indices: [nl, nw, nh], zM: map.zM, columns: map.columns, rows: map.rows });
+    // Cell counts whose centres fall on every node line, so a node reads 0 rather than the cosine half a cell away.
+    const columns = nodeAlignedCellCount(nw, map.columns, ROOM_LIMITS.maxMapCells);
+    const rows = nodeAlignedCellCount(nl, map.rows, ROOM_LIMITS.maxMapCells);
+    const m = modePressureMap({ room: dims, indices: [nl, nw, nh], zM: map.zM, columns, rows });
     const c = speedOfSoundMps(room.temperatureC);
     const modeHz = (c / 2) * Math.hypot(nl / room.lengthM, nw / room.widthM, nh / room.heightM);
     const nonZero = [nl, nw, nh].filter((n) => n > 0).length;
@@ -114,6 +122,8 @@ export function computeRoomResponse(input: RoomResponseRequest): RoomResponseAns
       xM: roundAllToSignificant(m.xM, 4),
       yM: roundAllToSignificant(m.yM, 4),
       pressure,
+      // At each seat itself, not at the nearest cell.
+      seatPressure: seats.map((seat) => roundTo(modePressureAt({ room: dims, indices: [nl, nw, nh], xM: seat.xM, yM: seat.yM, zM: seat.zM }), 3)),
     };
   }
   return {

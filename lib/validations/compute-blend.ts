@@ -104,8 +104,27 @@ export const DEFAULT_SWEEP_CANDIDATES_HZ: readonly number[] = Array.from({ lengt
 
 const pairingSchema = z.strictObject({ mainsFilter: filterShapeSchema, subFilter: filterShapeSchema });
 
-/** Most candidate points × slope pairings one sweep request may try. */
+/**
+ * Most candidate points × slope pairings one sweep request may try. The row cap stays at 120: each row is a whole-system
+ * timing search (about 20 ms on one core), so 120 rows are a few seconds of server time; six pairings fit it only with
+ * 20 candidate points or fewer (the default 23 allow five).
+ */
 export const SWEEP_LIMITS = { maxCandidates: 60, maxPairings: 6, maxRows: 120, minHz: 20, maxHz: 300 } as const;
+
+/** How many slope pairings fit the row cap with `candidateCount` candidate points (at most maxPairings; 0 when even one does not). */
+export function sweepPairingsThatFit(candidateCount: number): number {
+  if (!(candidateCount > 0)) return SWEEP_LIMITS.maxPairings;
+  return Math.min(SWEEP_LIMITS.maxPairings, Math.floor(SWEEP_LIMITS.maxRows / candidateCount));
+}
+
+/** Why candidates × pairings is too many rows, in the words the Crossover sweep and the API both use; null when it fits. */
+export function sweepRowsProblem(candidateCount: number, pairingCount: number): string | null {
+  const rows = candidateCount * pairingCount;
+  if (rows <= SWEEP_LIMITS.maxRows) return null;
+  const fit = sweepPairingsThatFit(candidateCount);
+  const advice = fit > 0 ? `with ${candidateCount} candidate points at most ${fit} slope pairing${fit === 1 ? '' : 's'} fit` : `${candidateCount} candidate points alone are too many`;
+  return `${candidateCount} candidate points × ${pairingCount} slope pairings gives ${rows} rows; at most ${SWEEP_LIMITS.maxRows} are allowed: ${advice} (widen the step or narrow the range to try more)`;
+}
 
 
 const timingMainsSchema = z.strictObject({
@@ -155,10 +174,8 @@ export const crossoverSweepRequestSchema = z
     maxDelayMs: num(1, 50, 'ms').default(20),
   })
   .superRefine((b, ctx) => {
-    const n = (b.candidatesHz?.length ?? DEFAULT_SWEEP_CANDIDATES_HZ.length) * b.pairings.length;
-    if (n > SWEEP_LIMITS.maxRows) {
-      ctx.addIssue({ code: 'custom', path: ['candidatesHz'], message: `candidates × pairings gives ${n} rows; at most ${SWEEP_LIMITS.maxRows} are allowed` });
-    }
+    const problem = sweepRowsProblem(b.candidatesHz?.length ?? DEFAULT_SWEEP_CANDIDATES_HZ.length, b.pairings.length);
+    if (problem) ctx.addIssue({ code: 'custom', path: ['candidatesHz'], message: problem });
   });
 
 export type CrossoverSweepRequest = z.infer<typeof crossoverSweepRequestSchema>;

@@ -2,12 +2,19 @@ import { z } from 'zod';
 import { uuidField } from './common';
 import { systemDocumentSchema, systemNameSchema } from './system';
 
-export const systemCreateSchema = z.object({ name: systemNameSchema, document: systemDocumentSchema, workspaceId: uuidField('workspaceId must be a workspace id').optional() });
+/** A revision's note ("moved subs to the front corners"): trimmed, at most 200 characters; empty means no note. */
+export const REVISION_NOTE_MAX = 200;
+const revisionNoteSchema = z.string({ error: 'note must be text' }).trim().max(REVISION_NOTE_MAX, `note must be at most ${REVISION_NOTE_MAX} characters`);
+
+export const systemCreateSchema = z.object({ name: systemNameSchema, document: systemDocumentSchema, workspaceId: uuidField('workspaceId must be a workspace id').optional(), note: revisionNoteSchema.optional() });
 export const systemUpdateSchema = z.object({
   name: systemNameSchema,
   document: systemDocumentSchema,
   revision: z.number({ error: 'revision must be the revision you last read' }).int().min(1),
+  note: revisionNoteSchema.optional(),
 });
+/** PATCH /api/v1/systems/[id]/revisions/[revision]: the revision's note, changed after the fact (empty removes it). */
+export const revisionNoteUpdateSchema = z.object({ note: revisionNoteSchema });
 export const systemRenameSchema = z.object({ name: systemNameSchema, revision: z.number().int().min(1) });
 export const systemListQuerySchema = z.object({
   q: z.string().trim().max(100).optional(),

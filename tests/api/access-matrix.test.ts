@@ -1,10 +1,9 @@
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { API_DOCS } from '@/lib/api-docs';
 import { addMember } from '@/lib/data/workspaces';
 import { juniperLaneDocument } from '@/lib/demo/systems';
 import { demoProfile } from '@/lib/demo/profiles';
+import { apiRouteFiles } from '../helpers/api-routes';
 import { Client, signedInClient, uniqueEmail } from '../helpers/http';
 import { testDb } from '../helpers/db';
 
@@ -143,6 +142,7 @@ const MATRIX: Record<string, { expect: Expect; build: Builder }> = {
   'GET /api/v1/systems/[id]/export': { expect: read(), build: (f) => ({ path: `/api/v1/systems/${f.systemId}/export?format=json` }) },
   'GET /api/v1/systems/[id]/revisions': { expect: read(), build: (f) => ({ path: `/api/v1/systems/${f.systemId}/revisions` }) },
   'GET /api/v1/systems/[id]/revisions/[revision]': { expect: read(), build: (f) => ({ path: `/api/v1/systems/${f.systemId}/revisions/1` }) },
+  'PATCH /api/v1/systems/[id]/revisions/[revision]': { expect: write(), build: (f) => ({ path: `/api/v1/systems/${f.systemId}/revisions/1`, body: { note: 'Matrix note' } }) },
   'POST /api/v1/systems/[id]/revisions/[revision]/restore': {
     expect: write(),
     build: async (f) => ({ path: `/api/v1/systems/${f.systemId}/revisions/1/restore`, body: { revision: await systemRevision(f, f.systemId) } }),
@@ -210,21 +210,11 @@ const MATRIX: Record<string, { expect: Expect; build: Builder }> = {
 
 /** Every `METHOD /path` the app serves, from the route files themselves (next-auth's own routes aside). */
 function discoverRoutes(): string[] {
-  const root = path.resolve(__dirname, '../../app/api');
   const found: string[] = [];
-  const walk = (dir: string) => {
-    for (const entry of readdirSync(dir)) {
-      const full = path.join(dir, entry);
-      if (statSync(full).isDirectory()) walk(full);
-      else if (entry === 'route.ts') {
-        const rel = `/api/${path.relative(root, dir).split(path.sep).join('/')}`;
-        if (rel.startsWith('/api/auth/')) continue;
-        const source = readFileSync(full, 'utf8');
-        for (const m of source.matchAll(/export (?:const|async function) (GET|POST|PUT|PATCH|DELETE)\b/g)) found.push(`${m[1]} ${rel}`);
-      }
-    }
-  };
-  walk(root);
+  for (const { route, source } of apiRouteFiles()) {
+    if (route.startsWith('/api/auth/')) continue;
+    for (const m of source.matchAll(/export (?:const|async function) (GET|POST|PUT|PATCH|DELETE)\b/g)) found.push(`${m[1]} ${route}`);
+  }
   return found.sort();
 }
 

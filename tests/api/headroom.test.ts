@@ -60,6 +60,16 @@ describe('POST /api/v1/headroom — inverse-square law against reference level (
     assertInDelta(body.channels[1].headroomDb, 2.46, 0.005, 'against 95 dB');
   });
 
+  it('a 200 W amplifier on a 120 W-rated speaker: the rating binds; both maxima given (by hand: 87 + 10·log10 P − 9.54, inverse-square/power law, Kinsler et al. 2000)', async () => {
+    const { body } = await call({ channels: [{ ...L, powerW: 200, ratedPowerW: 120 }] });
+    const row = body.channels[0];
+    expect(row.binding).toBe('speaker');
+    assertInDelta(row.amplifierSplDb, 97.46 + 10 * Math.log10(2), 0.01, 'with the full amplifier');
+    assertInDelta(row.ratedSplDb, 97.46 + 10 * Math.log10(1.2), 0.01, 'at the rating');
+    assertInDelta(row.maxSplDb, row.ratedSplDb, 1e-9, 'the binding limit');
+    assertInDelta(row.headroomDb, row.ratedSplDb - 105, 0.01, 'verdict at the rating');
+  });
+
   it('hearing safety: NIOSH 85 dBA for 8 h with a 3 dB exchange — 100 dBA for 15 minutes (published: NIOSH 1998), and installation cautions', async () => {
     const { body } = await call({ channels: [L] });
     expect(body.exposure.find((e: Json) => e.levelDba === 85).minutes).toBe(480);

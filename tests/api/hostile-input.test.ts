@@ -1,5 +1,4 @@
-import { appendFileSync, readdirSync, readFileSync, statSync } from 'node:fs';
-import path from 'node:path';
+import { appendFileSync } from 'node:fs';
 import fc from 'fast-check';
 import type { z } from 'zod';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -14,10 +13,11 @@ import { headroomRequestSchema } from '@/lib/validations/compute-headroom';
 import { layoutRequestSchema } from '@/lib/validations/compute-layout';
 import { roomModesRequestSchema, roomResponseRequestSchema } from '@/lib/validations/compute-room';
 import { lessonCreateSchema, lessonUpdateSchema, stepCreateSchema, stepReorderSchema, stepUpdateSchema } from '@/lib/validations/lesson';
-import { copySchema, revisionRestoreSchema, systemCreateSchema, systemDuplicateSchema, systemRenameSchema, systemUpdateSchema } from '@/lib/validations/library';
+import { copySchema, revisionNoteUpdateSchema, revisionRestoreSchema, systemCreateSchema, systemDuplicateSchema, systemRenameSchema, systemUpdateSchema } from '@/lib/validations/library';
 import { measurementUploadFieldsSchema, predictRequestSchema } from '@/lib/validations/measurement';
 import { profileCreateSchema, profileUpdateSchema } from '@/lib/validations/profile';
 import { invitationCreateSchema, memberUpdateSchema, workspaceCreateSchema } from '@/lib/validations/workspace';
+import { apiRouteFiles } from '../helpers/api-routes';
 import { baseUrl } from '../helpers/env';
 import { testDb } from '../helpers/db';
 import { Client, uniqueEmail } from '../helpers/http';
@@ -122,6 +122,7 @@ const JSON_ROUTES: JsonRoute[] = [
   { method: 'PUT', route: '/api/v1/systems/[id]', path: (f) => `/api/v1/systems/${f.systemId}`, schema: systemUpdateSchema, limitBytes: 256 * KB, session: true, template: (f) => ({ name: `System ${MARK}`, document: juniperLaneDocument(), revision: f.systemRevision }) },
   { method: 'PATCH', route: '/api/v1/systems/[id]', path: (f) => `/api/v1/systems/${f.systemId}`, schema: systemRenameSchema, limitBytes: 16 * KB, session: true, template: (f) => ({ name: `System ${MARK} renamed`, revision: f.systemRevision }) },
   { method: 'POST', route: '/api/v1/systems/[id]/duplicate', path: (f) => `/api/v1/systems/${f.systemId}/duplicate`, schema: systemDuplicateSchema, limitBytes: 16 * KB, session: true, bodyOptional: true, template: (f) => ({ name: `System ${MARK} copy`, workspaceId: f.workspaceId }) },
+  { method: 'PATCH', route: '/api/v1/systems/[id]/revisions/[revision]', path: (f) => `/api/v1/systems/${f.systemId}/revisions/1`, schema: revisionNoteUpdateSchema, limitBytes: 16 * KB, session: true, template: () => ({ note: `Note ${MARK}` }) },
   { method: 'POST', route: '/api/v1/systems/[id]/revisions/[revision]/restore', path: (f) => `/api/v1/systems/${f.systemId}/revisions/1/restore`, schema: revisionRestoreSchema, limitBytes: 16 * KB, session: true, template: (f) => ({ revision: f.systemRevision }) },
   { method: 'POST', route: '/api/v1/shared/[token]/copy', path: (f) => `/api/v1/shared/${f.shareToken}/copy`, schema: copySchema, limitBytes: 16 * KB, session: true, template: (f) => ({ workspaceId: f.workspaceId, name: `Copy ${MARK}` }) },
 
@@ -137,24 +138,13 @@ const JSON_ROUTES: JsonRoute[] = [
 
 /** POST/PUT/PATCH handlers in app/api that read a JSON body (they call parseJson), found by walking the folder. */
 function discoverJsonRoutes(): string[] {
-  const root = path.resolve(__dirname, '../../app/api');
   const found: string[] = [];
-  const walk = (dir: string) => {
-    for (const entry of readdirSync(dir)) {
-      const full = path.join(dir, entry);
-      if (statSync(full).isDirectory()) walk(full);
-      else if (entry === 'route.ts') {
-        const rel = `/api/${path.relative(root, dir).split(path.sep).join('/')}`;
-        const source = readFileSync(full, 'utf8');
-        const parts = source.split(/(?=export (?:const|async function) (?:GET|POST|PUT|PATCH|DELETE)\b)/);
-        for (const part of parts) {
-          const m = /^export (?:const|async function) (POST|PUT|PATCH)\b/.exec(part);
-          if (m && /\bparseJson\(|request\.json\(\)/.test(part)) found.push(`${m[1]} ${rel}`);
-        }
-      }
+  for (const { route, source } of apiRouteFiles()) {
+    for (const part of source.split(/(?=export (?:const|async function) (?:GET|POST|PUT|PATCH|DELETE)\b)/)) {
+      const m = /^export (?:const|async function) (POST|PUT|PATCH)\b/.exec(part);
+      if (m && /\bparseJson\(|request\.json\(\)/.test(part)) found.push(`${m[1]} ${route}`);
     }
-  };
-  walk(root);
+  }
   return found.sort();
 }
 

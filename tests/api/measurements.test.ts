@@ -58,6 +58,8 @@ describe('measurements over HTTP', () => {
     const up = await owner.post('/api/v1/measurements', form(text, { name: 'Test seat 1 mains (invented)', systemId, seat: 'Row 1 centre (MLP)', role: 'mains' }));
     expect(up.status, up.text).toBe(201);
     expect(up.body).toMatchObject({ name: 'Test seat 1 mains (invented)', pointCount: 64, startHz: 20, stopHz: f[63], hasPhase: true });
+    // A comment and a header above the first number: two lines skipped, data from line 3 (counted by hand).
+    expect(up.body).toMatchObject({ skippedLines: 2, firstDataLine: 3 });
     const id = up.body.id as string;
     made.push(id);
 

@@ -69,6 +69,8 @@ describe('POST /api/v1/room-modes — the documented contract', () => {
       expect(b.axial + b.tangential + b.oblique).toBe(b.count);
     }
     assertInDelta(bands[0].centerHz, 25.12, 0.01, 'first complete band above 20 Hz');
+    // Each band is labelled with its nominal mid-band frequency (published: IEC 61260-1, nominal mid-band frequencies).
+    expect(bands.map((b) => b.nominalHz)).toEqual([25, 31.5, 40, 50, 63, 80, 100, 125, 160, 200].slice(0, bands.length));
     // (0,0,1) at 63.56 Hz and (2,1,0) at 64.05 Hz are 0.49 Hz apart in the 63 Hz band, which holds fewer than five modes.
     expect(body.bonello.coincidencesAtHz).toContain(63.1);
     expect(body.bonello.passes).toBe(false);

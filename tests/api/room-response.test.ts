@@ -77,9 +77,14 @@ describe('POST /api/v1/room-response — modal seat responses (published: Kuttru
     const { body } = await call(BODY);
     expect(body.map.kind).toBe('axial');
     assertInDelta(body.map.frequencyHz, 26.81, 0.005, 'mode frequency');
-    expect(body.map.pressure).toHaveLength(16);
+    // 16 rows asked for; 17 answered, the nearest count whose cell centres fall on the (1,0,0) node at L/2 (geometry).
+    expect(body.map.rows).toBe(17);
+    expect(body.map.pressure).toHaveLength(17);
     expect(body.map.pressure[0]).toHaveLength(10);
     body.map.yM.forEach((y: number, r: number) => assertInDelta(body.map.pressure[r][3], Math.cos((Math.PI * y) / 6.4), 0.002, `row ${r}`));
+    expect(Math.abs(body.map.pressure[8][3])).toBe(0);
+    // At each seat itself (y = 3.7 m): cos(π·3.7/6.4) = −0.243 (geometry), not the nearest cell's value.
+    expect(body.map.seatPressure).toEqual([-0.243, -0.243, -0.243]);
     assertInDelta(body.quarterWave[0].notchHz, 171.6, 0.05, 'c/(4d)');
   });
 });

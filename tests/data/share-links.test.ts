@@ -9,7 +9,9 @@ import type { Caller } from '@/lib/access';
 import { config } from '@/lib/config';
 import { lindenStreetDocument } from '@/lib/demo/systems';
 import { createLesson } from '@/lib/data/lessons';
-import { copySharedSystem, createLessonShareLink, createShareLink, getSharedSystem, listShareLinks, revokeShareLink } from '@/lib/data/share-links';
+import { createMeasurement } from '@/lib/data/measurements';
+import { copySharedSystem, createLessonShareLink, createShareLink, getSharedMeasurements, getSharedSystem, listShareLinks, revokeShareLink } from '@/lib/data/share-links';
+import { parseMeasurementText } from '@/lib/measurements/parse-measurement';
 import { createSystem, deleteSystem, getSystemUnchecked } from '@/lib/data/systems';
 import { createUserWithWorkspace } from '@/lib/data/users';
 import { json, route } from '@/lib/http';
@@ -59,6 +61,25 @@ describe('share links (data layer)', () => {
     expect(await getSharedSystem('not a token')).toBeNull();
     await revokeShareLink(owner, token);
     expect(await getSharedSystem(token)).toBeNull();
+  });
+
+  it('a link gives its System’s own measurements, read-only, and never another System’s or the rest of the workspace’s', async () => {
+    const parsed = parseMeasurementText(Array.from({ length: 8 }, (_, i) => `${20 * 2 ** i},${80 + i}`).join('\n'));
+    if (!parsed.ok) throw new Error(parsed.message);
+    const other = await createSystem(owner, { name: 'Other den (invented)', document: lindenStreetDocument() });
+    await createMeasurement(owner, { workspaceId, systemId }, { name: 'own sub (invented)', role: 'sub' }, parsed.measurement);
+    await createMeasurement(owner, { workspaceId, systemId: other.id }, { name: 'other system (invented)', role: 'sub' }, parsed.measurement);
+    await createMeasurement(owner, { workspaceId, systemId: null }, { name: 'workspace only (invented)', role: 'mains' }, parsed.measurement);
+    const link = await createShareLink(owner, systemId);
+    const shared = await getSharedMeasurements(link.token);
+    expect(shared!.items.map((m) => m.name)).toEqual(['own sub (invented)']);
+    expect(shared!.items[0]).toMatchObject({ systemId, role: 'sub', pointCount: 8, frequencyHz: [20, 40, 80, 160, 320, 640, 1280, 2560], magnitudeDb: [80, 81, 82, 83, 84, 85, 86, 87] });
+    expect(shared!.items[0]).not.toHaveProperty('createdByName');
+    expect(shared!.items[0]).not.toHaveProperty('workspaceId');
+    expect(shared!.omitted).toBe(0);
+    await revokeShareLink(owner, link.token);
+    expect(await getSharedMeasurements(link.token)).toBeNull();
+    expect(await getSharedMeasurements('not-a-token')).toBeNull();
   });
 
   it('a link to a deleted System is null', async () => {

@@ -39,6 +39,31 @@ describe('parseMeasurementText accepts the documented formats', () => {
     expect(m.delimiter).toBe(',');
     expect(m.startHz).toBe(20);
     expect(m.phaseDeg).toHaveLength(10);
+    // Lines 1–3 (a comment, the header, a comment) come before the first number: three skipped (counted by hand).
+    expect(m.skippedLines).toBe(3);
+    expect(m.firstDataLine).toBe(4);
+  });
+
+  it('a tab-separated file with note lines on top (*, ", ;, #, text) skips them and says how many', () => {
+    // An invented meter's export: five lines of notes and a header before the numbers (counted by hand).
+    const notes = ['* Invented meter export', '"Seat: MLP"', '; mic calibration applied', '# 2026-01-01', 'Sweep notes: 1/48 octave', 'Freq\tSPL\tPhase'];
+    const m = accepted(parseMeasurementText([...notes, ...logLines(10, 24, '\t')].join('\n')));
+    expect(m.delimiter).toBe('\t');
+    expect(m.decimalComma).toBe(false); // decimal points only in this file
+    expect(m.pointCount).toBe(10);
+    expect(m.skippedLines).toBe(6);
+    expect(m.firstDataLine).toBe(7);
+    expect(m.headerLine).toBe(6);
+    expect(m.header).toEqual(['Freq', 'SPL', 'Phase']);
+    expect(m.startHz).toBe(20);
+    // A note with an unbalanced quote does not swallow the lines below it.
+    const quoted = accepted(parseMeasurementText(['"Unbalanced quote note', ...logLines(9, 12, '\t', false)].join('\n')));
+    expect([quoted.skippedLines, quoted.pointCount, quoted.firstDataLine]).toEqual([1, 9, 2]);
+  });
+
+  it('a file that begins with numbers skips nothing', () => {
+    const m = accepted(parseMeasurementText(logLines(9, 12, '\t').join('\n')));
+    expect([m.skippedLines, m.headerLine, m.firstDataLine]).toEqual([0, null, 1]);
   });
 
   it('European-style: semicolons with decimal commas', () => {
@@ -179,6 +204,19 @@ describe('parseMeasurementText refuses bad files, naming the line and the column
     expect(r.totalIssues).toBe(80);
     expect(r.issues[49]!.path).toBe('line 51, column 2');
     expect(r.message).toContain('(and 79 more)');
+  });
+
+  it('a note line between the numbers is still an error naming its line (only leading lines are skipped)', () => {
+    const lines = ['* notes on top', 'Hz\tdB', ...logLines(10, 24, '\t', false)];
+    lines.splice(6, 0, '* a note in the middle'); // becomes line 7
+    const r = refused(parseMeasurementText(lines.join('\n')));
+    expect(r.issues[0]).toMatchObject({ line: 7 });
+    expect(r.message).toContain('line 7');
+  });
+
+  it('only lines of text: refused, saying no line begins with a number', () => {
+    const r = refused(parseMeasurementText('* one\n"two"\nthree\tfour'));
+    expect(r.issues[0]!.message).toContain('no line begins with a number (3 lines of text)');
   });
 
   it('an empty file or one of comments only', () => {

@@ -42,6 +42,15 @@ describe('computeHeadroom: the answer of POST /api/v1/headroom', () => {
     expect(l.amplifierAboveRating).toBe(false);
   });
 
+  it('a 200 W amplifier on a 120 W-rated speaker: the maximum SPL, the headroom and the bars are at the rating, and the answer says the speaker binds', () => {
+    // By hand (inverse-square/power law, Kinsler et al. 2000): L is 88 dB/2.83 V into 8 Ω = 88 dB/1 W at 3 m.
+    // Amplifier 88 + 10·log10(200) − 9.5424 = 101.47 dB; rating 88 + 10·log10(120) − 9.5424 = 99.25 dB; headroom −5.75 dB.
+    const doc = withSpeaker(testSystem(), 'L', { amplifierPowerW: 200 });
+    const rated = { ...doc, profiles: doc.profiles.map((p) => (p.id === doc.speakers[0]!.profileId ? { ...p, ratedPowerW: 120 } : p)) };
+    const l = computeHeadroom(headroomRequestSchema.parse(headroomRequestFromDocument(rated))).channels[0]!;
+    expect(l).toMatchObject({ binding: 'speaker', usablePowerW: 120, ratedPowerW: 120, powerW: 200, amplifierSplDb: 101.47, ratedSplDb: 99.25, maxSplDb: 99.25, headroomDb: -5.75, meetsTarget: false, amplifierAboveRating: true });
+  });
+
   it('two subs share the 115 dB LFE peak: each is held to 115 − 20·log10 2; together they are summed in phase', () => {
     const a = answer();
     const splA = 90 + 10 * Math.log10(300) - 20 * Math.log10(4) + 20 * Math.log10(2);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { AppError } from '@/lib/errors';
-import { applyMeasuredToDocument, computeMeasured, measuredRequestFromDocument } from '@/lib/system-model/measured';
+import { applyMeasuredToDocument, computeMeasured, measuredRequestFromDocument, measurementRoleKind, overlayAlignBandHz, overlayAlignOffsetDb } from '@/lib/system-model/measured';
 import { predictRequestSchema } from '@/lib/validations/measurement';
 import { testSystem, withSpeaker, withSub } from './test-system';
 
@@ -69,5 +69,29 @@ describe('computeMeasured: refusals', () => {
     expect(thrown).toBeInstanceOf(AppError);
     expect((thrown as AppError).status).toBe(400);
     expect((thrown as AppError).issues.map((i) => i.path)).toEqual(['sub.curve']);
+  });
+});
+
+describe('the overlay’s automatic level alignment and role checks', () => {
+  it('a role says what was playing: sub/LFE, sum, a mains or channel label, or unknown (common practice in naming files)', () => {
+    expect(['sub', 'Sub A', 'LFE', 'mains', 'L', 'SL', 'sum', 'Mains + sub together', null, ' '].map((r) => measurementRoleKind(r))).toEqual(['sub', 'sub', 'sub', 'mains', 'mains', 'mains', 'sum', 'sum', null, null]);
+  });
+
+  it('the band by role: mains 2·fc … 8·fc, sub fc/3 … fc, other fc/2 … 2·fc, clipped to the file; null under a third of an octave (arithmetic by hand)', () => {
+    const wide = [10, 20000];
+    expect(overlayAlignBandHz('mains', 80, wide)).toEqual({ startHz: 160, stopHz: 640 });
+    expect(overlayAlignBandHz('sub', 80, wide)).toEqual({ startHz: 27, stopHz: 80 });
+    expect(overlayAlignBandHz('sum', 80, wide)).toEqual({ startHz: 40, stopHz: 160 });
+    expect(overlayAlignBandHz(null, 100, [60, 20000])).toEqual({ startHz: 60, stopHz: 200 });
+    // 160 … 200 Hz is 0.32 octave (log2 1.25), just under a third: no band.
+    expect(overlayAlignBandHz('mains', 80, [10, 200])).toBeNull();
+  });
+
+  it('an absolute-SPL file (the model’s shape plus 72.4 dB) is shifted by exactly −72.4 dB; no overlap → null', () => {
+    const hz = Array.from({ length: 49 }, (_, i) => 20 * 2 ** (i / 8));
+    const model = { frequencyHz: hz, magnitudeDb: hz.map((f) => -3 * Math.log2(f / 20) / 6) };
+    const file = { frequencyHz: hz, magnitudeDb: model.magnitudeDb.map((v) => v + 72.4) };
+    expect(overlayAlignOffsetDb(model, file, { startHz: 40, stopHz: 120 })).toBe(-72.4);
+    expect(overlayAlignOffsetDb(model, { frequencyHz: [1000, 2000], magnitudeDb: [80, 80] }, { startHz: 40, stopHz: 120 })).toBeNull();
   });
 });

@@ -62,7 +62,11 @@ describe('computeRoomResponse: the answer of POST /api/v1/room-response', () => 
   it('two seats: a spread over 20–120 Hz; a mode map of (1, 0, 0) at c/2L', () => {
     const a = computeRoomResponse(roomResponseRequestSchema.parse(roomResponseRequestFromDocument(testSystem(), { mapIndices: [1, 0, 0] })));
     expect(a.spread).toMatchObject({ startHz: 20, stopHz: 120 });
-    expect(a.map).toMatchObject({ indices: [1, 0, 0], kind: 'axial', frequencyHz: sig(C20 / 14, 6), columns: 40, rows: 50 });
-    expect(a.map!.pressure).toHaveLength(50);
+    // 50 rows asked for; 51, the nearest count with a cell centre on the node at L/2 (geometry).
+    expect(a.map).toMatchObject({ indices: [1, 0, 0], kind: 'axial', frequencyHz: sig(C20 / 14, 6), columns: 40, rows: 51 });
+    expect(a.map!.pressure).toHaveLength(51);
+    expect(a.map!.pressure[25]!.every((p) => p === 0)).toBe(true);
+    // Both seats at y = 5 m of a 7 m room: cos(5π/7) = −0.623 (geometry), read at the seat, not at a cell.
+    expect(a.map!.seatPressure).toEqual([-0.623, -0.623]);
   });
 });

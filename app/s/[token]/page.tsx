@@ -7,13 +7,13 @@ import { SheetToolbar } from '@/components/sheet/sheet-toolbar';
 import { Wordmark } from '@/components/ui/mark';
 import { getCaller } from '@/lib/auth';
 import { SharedLesson } from '@/components/lessons/shared-lesson';
-import { getLessonByShareToken, getSharedSystem } from '@/lib/data/share-links';
+import { getLessonByShareToken, getSharedMeasurements, getSharedSystem } from '@/lib/data/share-links';
 import { listWorkspaces } from '@/lib/data/workspaces';
 
 export const dynamic = 'force-dynamic';
 export const metadata = { title: 'Shared', robots: { index: false, follow: false } };
 
-/** A share link's read-only page, open to anyone: a System's plots and Settings sheet, or a Lesson's Steps. */
+/** A share link's read-only page, open to anyone: every panel of a System (its own measurements included) and its Settings sheet, or a Lesson's Steps. */
 export default async function SharedPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
   const system = await getSharedSystem(token);
@@ -22,7 +22,7 @@ export default async function SharedPage({ params }: { params: Promise<{ token: 
     if (!lesson) notFound();
     return <SharedLesson lesson={lesson} />;
   }
-  const caller = await getCaller();
+  const [caller, measurements] = await Promise.all([getCaller(), getSharedMeasurements(token)]);
   const writable = caller ? (await listWorkspaces(caller)).filter((w) => w.role !== 'viewer').map((w) => ({ id: w.id, name: w.name })) : [];
 
   return (
@@ -59,12 +59,15 @@ export default async function SharedPage({ params }: { params: Promise<{ token: 
           <CopyToLibrary token={token} workspaces={writable} signedIn={!!caller} />
         </div>
         <div className="no-print">
-          <SharedPanels document={system.document} />
+          <SharedPanels document={system.document} measurements={measurements ?? { items: [], omitted: 0 }} />
         </div>
-        <section aria-label="Settings sheet" className="flex flex-col gap-2">
+        <section aria-label="Settings sheet" className="flex min-w-0 flex-col gap-2">
           <h2 className="no-print text-lg font-semibold">Settings sheet</h2>
           <SheetToolbar />
-          <SettingsSheet name={system.name} revision={system.revision} savedAt={system.updatedAt} savedBy={system.lastEditorName} document={system.document} printedAt={new Date().toISOString()} />
+          {/* On a phone the sheet scrolls within its own box, not the page. */}
+          <div className="min-w-0 overflow-x-auto print:overflow-visible">
+            <SettingsSheet name={system.name} revision={system.revision} savedAt={system.updatedAt} savedBy={system.lastEditorName} document={system.document} printedAt={new Date().toISOString()} />
+          </div>
         </section>
       </main>
     </>

@@ -58,7 +58,7 @@ export default function ApiDocsPage() {
         <ul className="flex flex-wrap gap-2 text-sm">
           {API_DOCS.map((r) => (
             <li key={r.id}>
-              <a href={`#${r.id}`} className="num rounded border border-line bg-white px-2 py-1 hover:bg-[#EFECE4]">
+              <a href={`#${r.id}`} className="num rounded border border-line bg-white px-2 py-1 wrap-anywhere hover:bg-[#EFECE4]">
                 {r.method} {r.path}
               </a>
             </li>
@@ -67,7 +67,7 @@ export default function ApiDocsPage() {
       </nav>
       {API_DOCS.map((r) => (
         <section key={r.id} id={r.id} className="mt-8 scroll-mt-4" data-testid="api-route">
-          <h2 className="num text-xl font-semibold">
+          <h2 className="num text-xl font-semibold wrap-anywhere">
             <span className="mr-2 rounded bg-ink px-2 py-0.5 text-sm text-white">{r.method}</span>
             {r.path}
           </h2>
@@ -81,7 +81,7 @@ export default function ApiDocsPage() {
           <FieldTable fields={r.fields} caption="Request fields" />
           <FieldTable fields={r.answer} caption="Answer fields" />
           {r.examples.map((ex) => (
-            <div key={ex.title} className="mt-3 grid gap-3 md:grid-cols-2">
+            <div key={ex.title} className="mt-3 grid grid-cols-1 gap-3 md:grid-cols-2">
               <div>
                 <h3 className="text-sm font-semibold">Example: {ex.title}</h3>
                 <pre tabIndex={0} className="num mt-1 max-h-96 overflow-auto rounded border border-line bg-white p-3 text-xs">{pretty(ex.request)}</pre>

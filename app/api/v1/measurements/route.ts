@@ -11,7 +11,10 @@ export const GET = route(async (request) => {
   return json(await listMeasurements(caller, parseQuery(request, measurementListQuerySchema)));
 });
 
-/** Upload (multipart/form-data): `file`, optional `name`, `systemId` or `workspaceId`, `seat`, `role`. A refused file stores nothing. */
+/**
+ * Upload (multipart/form-data): `file`, optional `name`, `systemId` or `workspaceId`, `seat`, `role`. A refused file stores
+ * nothing. The answer says how many leading lines that do not begin with a number were skipped (`skippedLines`).
+ */
 export const POST = route(async (request) => {
   const caller = await requireCaller();
   const upload = await readMeasurementUpload(request);
@@ -25,5 +28,6 @@ export const POST = route(async (request) => {
   }
   const name = fields.name ?? (upload.fileName.replace(/\.[A-Za-z0-9]{1,5}$/, '').trim().slice(0, 120) || 'Measurement');
   const created = await createMeasurement(caller, target, { name, seat: fields.seat, role: fields.role }, result.measurement);
-  return json({ ...created }, 201);
+  const { skippedLines, firstDataLine } = result.measurement;
+  return json({ ...created, skippedLines, firstDataLine }, 201);
 });

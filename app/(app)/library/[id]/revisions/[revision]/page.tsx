@@ -30,7 +30,7 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
           {old.revision === system.revision ? 'This is the current revision.' : `You are looking at revision ${old.revision}; the System is now at revision ${system.revision}. Restore it from the history to make it current.`}
         </Notice>
       </div>
-      <SettingsSheet name={old.name} revision={old.revision} savedAt={old.createdAt} workspaceName={system.workspaceName} document={old.document} />
+      <SettingsSheet name={old.name} revision={old.revision} revisionNote={old.note} savedAt={old.createdAt} workspaceName={system.workspaceName} document={old.document} />
     </>
   );
 }
