@@ -213,7 +213,7 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
         </p>
       ) : null}
       {rows.length ? (
-        <div className="overflow-x-auto">
+        <div className="relative overflow-x-auto">
           <table className="w-full min-w-[52rem] border-collapse text-sm" data-testid="sweep-table">
             <caption className="sr-only">Crossover sweep results, {sort.key === 'rank' ? 'best first' : `sorted by ${sort.key}`}</caption>
             <thead>

@@ -180,7 +180,7 @@ function HeadroomTable({ data, onPower, readOnly }: { data: HeadroomAnswer; onPo
       <h3 id="headroom-table" className="text-base font-semibold">
         Per channel and per sub
       </h3>
-      <div className="overflow-x-auto rounded-md border border-line bg-white">
+      <div className="relative overflow-x-auto rounded-md border border-line bg-white">
         <table className="w-full min-w-[60rem] text-sm" data-testid="headroom-table">
           <caption className="sr-only">Maximum SPL at the MLP at the binding limit (the amplifier, or the speaker’s rating when the amplifier is above it), which limit binds, target, headroom or deficit and power needed for each channel and sub</caption>
           <thead className="bg-paper text-left text-ink-soft">

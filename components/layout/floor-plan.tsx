@@ -70,7 +70,7 @@ export function FloorPlan({ doc, layout, selected, onSelect, units, outside = []
   const rAz = status.get('R')?.azimuthDeg;
   const font = 11;
   return (
-    <div ref={boxRef} className="w-full overflow-x-auto" data-testid="floor-plan">
+    <div ref={boxRef} className="w-full relative overflow-x-auto" data-testid="floor-plan">
       <svg ref={ref} xmlns="http://www.w3.org/2000/svg" width={svgW} height={svgH} viewBox={`0 0 ${svgW} ${svgH}`} role="img" aria-labelledby={`${uid}-t`} aria-describedby={`${uid}-d`} style={{ fontFamily: 'var(--font-sans, system-ui, sans-serif)', fontSize: font }}>
         <title id={`${uid}-t`}>Floor plan of the room with seats, speakers and subs</title>
         <desc id={`${uid}-d`}>

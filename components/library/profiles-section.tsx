@@ -51,7 +51,7 @@ export function ProfilesSection({ workspaces }: { workspaces: { id: string; name
       {!data && !error ? <p role="status">Loading profiles…</p> : null}
       {data && data.items.length === 0 ? <div className="rounded-lg border border-dashed border-line bg-white p-6 text-sm text-ink-soft">No Speaker profiles yet.</div> : null}
       {data && data.items.length ? (
-        <div className="overflow-x-auto rounded-lg border border-line bg-white">
+        <div className="relative overflow-x-auto rounded-lg border border-line bg-white">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">Speaker profiles in your workspaces</caption>
             <thead className="border-b border-line bg-shade text-xs uppercase tracking-wide text-ink-faint">

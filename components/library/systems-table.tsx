@@ -107,7 +107,7 @@ export function SystemsTable({ view, items, total, page, pageSize, query, tags, 
           )}
         </div>
       ) : (
-        <div className="overflow-x-auto rounded-lg border border-line bg-white">
+        <div className="relative overflow-x-auto rounded-lg border border-line bg-white">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">{view === 'deleted' ? 'Recently deleted Systems' : 'Systems in your workspaces'}</caption>
             <thead className="border-b border-line bg-shade text-xs uppercase tracking-wide text-ink-faint">

@@ -12,7 +12,7 @@ export function QuarterWave({ r, crossoverHz, subNames, units, left }: { r: Room
         The reflection from the wall behind a source cancels its output at f = c / (4d) (Allison, JAES 1974), d measured from the acoustic centre to the front wall. Keep the notch out of the source’s own band: subs close to the wall (notch above
         the crossover), mains either close or well away.
       </p>
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full max-w-2xl text-sm">
           <thead className="text-ink-soft">
             <tr>

@@ -64,7 +64,7 @@ export function SharedPanels({ document, measurements }: Props) {
           ))}
         </nav>
         {panels.map(({ id, title, body }) => (
-          <section key={id} aria-labelledby={`shared-${id}`} className="min-w-0 overflow-x-auto rounded-lg border border-line bg-white p-4" data-testid={`shared-${id}`}>
+          <section key={id} aria-labelledby={`shared-${id}`} className="min-w-0 relative overflow-x-auto rounded-lg border border-line bg-white p-4" data-testid={`shared-${id}`}>
             <h2 id={`shared-${id}`} className="mb-3 scroll-mt-4 text-lg font-semibold">
               {title}
             </h2>

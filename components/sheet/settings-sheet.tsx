@@ -27,7 +27,7 @@ const Meaning = ({ children }: { children: string }) => <span className="block m
 /** A settings table that scrolls sideways on a narrow screen, with its head row (see SheetHead). */
 function SheetTable({ columns, children }: { columns: Parameters<typeof SheetHead>[0]['columns']; children: ReactNode }) {
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="sheet-table w-full text-left text-sm">
         <SheetHead columns={columns} />
         {children}

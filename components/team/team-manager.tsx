@@ -81,7 +81,7 @@ export function TeamManager({ userId }: { userId: string }) {
             <p className="text-sm text-ink-soft">Your role: {current.role}. Owners manage members; editors create and change Systems; viewers read.</p>
           </div>
           {message ? <Notice kind={message.kind}>{message.text}</Notice> : null}
-          <div className="overflow-x-auto rounded-lg border border-line bg-white">
+          <div className="relative overflow-x-auto rounded-lg border border-line bg-white">
             <table className="w-full text-left text-sm">
               <caption className="sr-only">Members of {current.name}</caption>
               <thead className="border-b border-line bg-shade text-xs uppercase tracking-wide text-ink-faint">

@@ -6,7 +6,7 @@ import { lengthText } from './length-text';
 /** When the mains and each sub arrive at the MLP (air time plus the delay set), and their phase difference at the crossover. */
 export function ArrivalsTable({ data, temperatureC, units, pending }: { data: TimingAnswer; temperatureC: number; units: UnitSystem; pending: boolean }) {
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full min-w-[40rem] border-collapse text-sm" data-testid="timing-arrivals">
         <caption className="pb-2 text-left text-sm text-ink-soft">
           Arrival at the MLP at {formatValue(temperatureC, '°C', 0)} (c = {formatNumber(data.speedOfSoundMps, 1)} m/s) and phase at {formatHzReadout(data.crossoverHz)}

@@ -34,7 +34,7 @@ export default async function LessonsPage() {
                 </p>
               </div>
               {l.stepCount ? (
-                <Link href={`/lessons/${l.id}/present`} className="rounded-md border border-line px-3 py-1.5 text-sm hover:bg-[#EFECE4]">
+                <Link href={`/lessons/${l.id}/present`} className="rounded-md border border-line px-3 py-1.5 text-sm hover:bg-wash">
                   Present
                 </Link>
               ) : null}

@@ -32,14 +32,14 @@ export default async function SharedPage({ params }: { params: Promise<{ token: 
           <Link href="/" aria-label="Seamline home">
             <Wordmark size={26} />
           </Link>
-          <span className="rounded bg-[#EFECE4] px-2 py-0.5 text-xs font-medium text-ink-soft">Shared · read-only</span>
+          <span className="rounded bg-wash px-2 py-0.5 text-xs font-medium text-ink-soft">Shared · read-only</span>
           <div className="ml-auto flex items-center gap-2 text-sm">
             {caller ? (
-              <Link href="/library" className="rounded-md px-2 py-1 hover:bg-[#EFECE4]">
+              <Link href="/library" className="rounded-md px-2 py-1 hover:bg-wash">
                 My Library
               </Link>
             ) : (
-              <Link href={`/sign-in?callbackUrl=${encodeURIComponent(`/s/${token}`)}`} className="rounded-md px-2 py-1 hover:bg-[#EFECE4]">
+              <Link href={`/sign-in?callbackUrl=${encodeURIComponent(`/s/${token}`)}`} className="rounded-md px-2 py-1 hover:bg-wash">
                 Sign in
               </Link>
             )}
@@ -65,7 +65,7 @@ export default async function SharedPage({ params }: { params: Promise<{ token: 
           <h2 className="no-print text-lg font-semibold">Settings sheet</h2>
           <SheetToolbar />
           {/* On a phone the sheet scrolls within its own box, not the page. */}
-          <div className="min-w-0 overflow-x-auto print:overflow-visible">
+          <div className="min-w-0 relative overflow-x-auto print:overflow-visible">
             <SettingsSheet name={system.name} revision={system.revision} savedAt={system.updatedAt} savedBy={system.lastEditorName} document={system.document} printedAt={new Date().toISOString()} />
           </div>
         </section>

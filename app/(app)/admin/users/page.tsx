@@ -13,9 +13,9 @@ export default async function AdminUsersPage() {
     <div className="max-w-5xl">
       <h1 className="text-2xl font-semibold">Users</h1>
       <p className="mt-1 text-sm text-ink-soft">Every account on this Seamline site ({users.length}).</p>
-      <div className="mt-4 overflow-x-auto rounded-lg border border-line bg-white">
+      <div className="mt-4 relative overflow-x-auto rounded-lg border border-line bg-white">
         <table className="w-full text-left text-sm">
-          <thead className="border-b border-line bg-[#FAF9F5] text-xs uppercase tracking-wide text-ink-faint">
+          <thead className="border-b border-line bg-shade text-xs uppercase tracking-wide text-ink-faint">
             <tr>
               <th className="px-3 py-2">Name</th>
               <th className="px-3 py-2">E-mail</th>

@@ -5,10 +5,10 @@ export const metadata = { title: 'API' };
 function FieldTable({ fields, caption }: { fields: ApiField[]; caption: string }) {
   if (!fields.length) return null;
   return (
-    <div className="mt-3 overflow-x-auto rounded-md border border-line bg-white">
+    <div className="mt-3 relative overflow-x-auto rounded-md border border-line bg-white">
       <table className="w-full text-left text-sm">
         <caption className="px-3 py-2 text-left text-xs font-semibold uppercase tracking-wide text-ink-faint">{caption}</caption>
-        <thead className="border-y border-line bg-[#FAF9F5] text-xs text-ink-faint">
+        <thead className="border-y border-line bg-shade text-xs text-ink-faint">
           <tr>
             <th className="px-3 py-1.5">Field</th>
             <th className="px-3 py-1.5">Type</th>
@@ -50,7 +50,7 @@ export default function ApiDocsPage() {
           Every error has the same shape, with the status 400 (invalid), 401 (sign in), 403 (your role does not allow it), 404 (not found, also for what you may not see), 409
           (revision conflict), 413 (too large), 415 (not JSON), 429 (too many attempts) or 503 (database unavailable; retry).
         </p>
-        <pre tabIndex={0} className="num mt-2 overflow-x-auto rounded bg-[#FAF9F5] p-3 text-xs">
+        <pre tabIndex={0} className="num mt-2 overflow-x-auto rounded bg-shade p-3 text-xs">
           {pretty({ error: { code: 'invalid', message: 'paths.1.filter.order: Linkwitz–Riley order must be 2, 4 or 8', issues: [{ path: 'paths.1.filter.order', message: 'Linkwitz–Riley order must be 2, 4 or 8' }] } })}
         </pre>
       </section>
@@ -58,7 +58,7 @@ export default function ApiDocsPage() {
         <ul className="flex flex-wrap gap-2 text-sm">
           {API_DOCS.map((r) => (
             <li key={r.id}>
-              <a href={`#${r.id}`} className="num rounded border border-line bg-white px-2 py-1 wrap-anywhere hover:bg-[#EFECE4]">
+              <a href={`#${r.id}`} className="num rounded border border-line bg-white px-2 py-1 wrap-anywhere hover:bg-wash">
                 {r.method} {r.path}
               </a>
             </li>
