@@ -259,7 +259,7 @@ export function SettingsSheet({ name, revision, revisionNote, savedAt, savedBy, 
         <h2 id="sheet-notes" className="mb-2 text-base font-semibold">
           Notes
         </h2>
-        {sheet.notes.trim() ? <p className="whitespace-pre-wrap text-sm">{sheet.notes}</p> : <p className="text-sm text-ink-faint">No notes.</p>}
+        {sheet.notes.trim() ? <p className="whitespace-pre-wrap wrap-anywhere text-sm">{sheet.notes}</p> : <p className="text-sm text-ink-faint">No notes.</p>}
       </section>
 
       <footer className="border-t border-line pt-2 text-xs text-ink-faint">

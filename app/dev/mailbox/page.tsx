@@ -24,7 +24,7 @@ export default async function DevMailboxPage() {
                 <span className="num">{new Date(m.receivedAt).toISOString().replace('T', ' ').slice(0, 19)}</span> · to {m.to}
               </p>
               <h2 className="mt-1 font-semibold">{m.subject}</h2>
-              <pre className="mt-2 whitespace-pre-wrap text-sm">{m.text}</pre>
+              <pre className="mt-2 whitespace-pre-wrap wrap-anywhere text-sm">{m.text}</pre>
               {m.links.map((link) => (
                 <a key={link} href={link} className="mt-2 block break-all text-sm text-mains underline">
                   {link}
