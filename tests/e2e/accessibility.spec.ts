@@ -1,20 +1,12 @@
 import { expect, test } from '@playwright/test';
 import { panelReady, seriousViolations } from './helpers/axe';
+import { PANELS } from './helpers/panels';
 
 // One test per page and per editor panel, so a slow scan on a busy machine never adds up past a test's timeout.
 // Each waits for the panel's own ready signal (its first answer drawn, nothing busy), never a fixed sleep.
 // An axe scan is pure CPU in the page: on a shared 2-core machine at load 20+ a scan that takes 8 s alone took 66 s,
 // so these tests get twice the suite's 60 s; npm test still lists any that take over a third of it.
 test.describe.configure({ timeout: 120_000 });
-
-const PANELS = [
-  { name: 'Blend', ready: 'readout-sum-level' },
-  { name: 'Timing', ready: 'timing-arrivals' },
-  { name: 'Modes', ready: 'mode-table' },
-  { name: 'Layout', ready: 'status-L' },
-  { name: 'Headroom', ready: 'max-spl-L' },
-  { name: 'Measured', ready: 'measured-panel' },
-] as const;
 
 // Modes draws a mode table of every mode below 200 Hz, a mode map and seat plots with thousands of SVG elements:
 // its text and controls, its mode table and its plots are scanned apart.

@@ -8,19 +8,10 @@
  * that really widen the page: an element a scroll box or a clipping box holds is left out).
  */
 import { expect, test, type Page } from '@playwright/test';
+import { PANELS } from './helpers/panels';
 import { juniperLaneDocument } from '../../lib/demo/systems';
 
 const WIDTH = 375;
-
-/** The editor's panels and the element each one shows once its first answer is drawn (as in accessibility.spec). */
-const PANELS = [
-  { name: 'Blend', ready: 'readout-sum-level' },
-  { name: 'Timing', ready: 'timing-arrivals' },
-  { name: 'Modes', ready: 'mode-table' },
-  { name: 'Layout', ready: 'status-L' },
-  { name: 'Headroom', ready: 'max-spl-L' },
-  { name: 'Measured', ready: 'measured-panel' },
-] as const;
 
 /** Null when the page is no wider than the screen; else the widths and the elements that stick out furthest. */
 function sidewaysOverflow(page: Page): Promise<string | null> {
