@@ -17,8 +17,8 @@ function speakers(profileId: string, amplifierPowerW: number, list: SpeakerSeed[
 }
 
 /**
- * The invented "Juniper Lane screening room": 6.4 × 4.9 × 2.7 m, 7.1.4, two subs in the front
- * corners, three seats on the first row (README, "Demo data"). Invented for the demo.
+ * The invented "Juniper Lane screening room": 6.4 × 4.9 × 2.7 m, 7.1.4, one sub in the front-left
+ * corner and one on the right wall, three seats on the first row (README, "Demo data"). Invented for the demo.
  */
 export function juniperLaneDocument(): SystemDocument {
   return {
@@ -46,7 +46,7 @@ export function juniperLaneDocument(): SystemDocument {
     ]),
     subs: [
       { id: 'sub1', name: 'Sub front left', xM: 0.3, yM: 0.3, zM: 0.3, profileId: 'marrow-s12', delayMs: 0, gainDb: 0, invert: false, distanceOverrideM: null, amplifierPowerW: 500, count: 1 },
-      { id: 'sub2', name: 'Sub front right', xM: 4.6, yM: 0.3, zM: 0.3, profileId: 'marrow-s12', delayMs: 0, gainDb: 0, invert: false, distanceOverrideM: null, amplifierPowerW: 500, count: 1 },
+      { id: 'sub2', name: 'Sub right wall', xM: 4.6, yM: 2.8, zM: 0.3, profileId: 'marrow-s12', delayMs: 0, gainDb: 0, invert: false, distanceOverrideM: null, amplifierPowerW: 500, count: 1 },
     ],
     bassManagement: {
       crossoverHz: 80,
@@ -57,7 +57,7 @@ export function juniperLaneDocument(): SystemDocument {
       mainsDelayMs: 0,
     },
     profiles: [demoProfile('quillon-b6'), demoProfile('marrow-s12')],
-    notes: 'Invented demo room for Larkspur AV (fictional). Both subs in the front corners; first row of three seats at 3.7 m.',
+    notes: 'Invented demo room for Larkspur AV (fictional). One sub in the front-left corner, the other on the right wall 2.8 m from the front (where the client wanted it); first row of three seats at 3.7 m.',
     tags: ['demo', 'home theater', '7.1.4'],
   };
 }

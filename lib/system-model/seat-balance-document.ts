@@ -1,0 +1,99 @@
+/**
+ * Seat balance on a System: its request (`seatBalanceRequestFromDocument`: every seat and sub, on the Modes tab's
+ * grid and band, so the numbers match the seat-to-seat spread shown there), the recommendation written back
+ * (`applySeatBalanceToDocument`) and the measures of its present settings for the Settings sheet
+ * (`seatBalanceStateFromDocument`, no search).
+ */
+import { logFrequencyGridHz, modalTransfers, seatBalanceEvaluator, type SubSetting } from '@/dsp';
+import { SEAT_BALANCE_LIMITS, seatBalanceModelRequestSchema, type SeatBalanceModelRequest } from '@/lib/validations/compute-seat-balance';
+import type { SystemDocument } from '@/lib/validations/system';
+import { toPointM } from './geometry';
+import { positionsOutsideRoom } from './room-bounds';
+import { roundTo, roundToSignificant } from './rounding';
+import type { SeatBalanceAnswer, SeatBalanceExtras, SeatBalanceSummary } from './seat-balance';
+
+/** The Modes tab's grid and spread band (roomResponseRequestFromDocument): Seat balance measures on the same points. */
+export const SYSTEM_SEAT_BALANCE_GRID = { startHz: 15, stopHz: 200, pointsPerOctave: 48 } as const;
+export const SYSTEM_SEAT_BALANCE_BAND = { startHz: 20, stopHz: 120 } as const;
+
+/** Why a System cannot be balanced, or its request with the extras (present settings, box counts). */
+export type SeatBalanceDocumentRequest =
+  | { ok: true; request: SeatBalanceModelRequest; extras: Required<Pick<SeatBalanceExtras, 'present' | 'fixedGainDb'>> }
+  | { ok: false; reason: string };
+
+/** The request for a System's subs and seats (the limits and placement are the caller's to add). */
+export function seatBalanceRequestFromDocument(doc: SystemDocument, options: { placementCount?: number; seed?: number } = {}): SeatBalanceDocumentRequest {
+  if (doc.subs.length === 0) return { ok: false, reason: 'Add a sub first: Seat balance sets the subs.' };
+  if (doc.seats.length < 2) return { ok: false, reason: 'Add a second seat: Seat balance makes several seats alike.' };
+  if (doc.seats.length > SEAT_BALANCE_LIMITS.maxSeats) return { ok: false, reason: `Seat balance works on at most ${SEAT_BALANCE_LIMITS.maxSeats} seats; this System has ${doc.seats.length}.` };
+  const outside = positionsOutsideRoom(doc).filter((o) => /^(subs|seats)\./.test(o.path));
+  if (outside.length > 0) return { ok: false, reason: 'A seat or sub stands outside the room: move it inside on Layout first.' };
+  const parsed = seatBalanceModelRequestSchema.safeParse({
+    room: { ...doc.room },
+    seats: doc.seats.map((s) => ({ name: s.name, xM: s.xM, yM: s.yM, zM: s.zM })),
+    subs: doc.subs.map((s) => ({ name: s.name, xM: s.xM, yM: s.yM, zM: s.zM })),
+    band: { ...SYSTEM_SEAT_BALANCE_BAND },
+    grid: { ...SYSTEM_SEAT_BALANCE_GRID },
+    ...(options.placementCount ? { placement: { count: options.placementCount } } : {}),
+    seed: options.seed ?? 1,
+  });
+  if (!parsed.success) return { ok: false, reason: parsed.error.issues[0]?.message ?? 'The System cannot be balanced as it is.' };
+  return {
+    ok: true,
+    request: parsed.data,
+    extras: {
+      present: doc.subs.map((s) => ({ delayMs: s.delayMs, gainDb: s.gainDb, invert: s.invert })),
+      fixedGainDb: doc.subs.map((s) => 20 * Math.log10(s.count)),
+    },
+  };
+}
+
+/**
+ * Writes the answer's per-sub settings into the System. Seat balance fixes the subs against each other; how the group
+ * sits against the mains is Timing's and the level match's, so the group keeps its present mean delay, its present
+ * level at the seats (one gain offset for all subs) and, where it can, each sub's present polarity (inverting every
+ * sub together changes no seat's level). None of that changes the seat-to-seat spread.
+ */
+export function applySeatBalanceToDocument(doc: SystemDocument, answer: Pick<SeatBalanceAnswer, 'subs' | 'after' | 'present'>): SystemDocument {
+  if (answer.subs.length !== doc.subs.length) return doc;
+  const present = answer.present;
+  const levelOffsetDb = present ? present.meanLevelDb - answer.after.meanLevelDb : 0;
+  const matches = answer.subs.filter((s, i) => s.invert === doc.subs[i]!.invert).length;
+  const flipAll = matches * 2 < answer.subs.length;
+  const mean = (v: number[]) => v.reduce((a, x) => a + x, 0) / v.length;
+  const base = Math.max(0, mean(doc.subs.map((s) => s.delayMs)) - mean(answer.subs.map((s) => s.delayMs)));
+  const top = Math.max(...answer.subs.map((s) => s.delayMs));
+  const shift = Math.min(base, 100 - top);
+  return {
+    ...doc,
+    subs: doc.subs.map((sub, i) => {
+      const a = answer.subs[i] as SubSetting;
+      return {
+        ...sub,
+        delayMs: roundTo(a.delayMs + shift, 2),
+        gainDb: roundTo(Math.min(30, Math.max(-30, a.gainDb + levelOffsetDb)), 1),
+        invert: flipAll ? !a.invert : a.invert,
+      };
+    }),
+  };
+}
+
+/** The seat-to-seat spread of a System with every sub neutral and with its present settings (the Settings sheet's). */
+export function seatBalanceStateFromDocument(doc: SystemDocument): { before: SeatBalanceSummary; present: SeatBalanceSummary; band: { startHz: number; stopHz: number } } | null {
+  const r = seatBalanceRequestFromDocument(doc);
+  if (!r.ok) return null;
+  const { request, extras } = r;
+  const grid = request.grid ?? SYSTEM_SEAT_BALANCE_GRID;
+  const frequencyHz = logFrequencyGridHz(grid);
+  const t = modalTransfers({ room: request.room, sourcesM: request.subs.map(toPointM), receiversM: request.seats.map(toPointM), frequencyHz, rt60S: request.room.rt60S, temperatureC: request.room.temperatureC, maxModeHz: 1.5 * grid.stopHz });
+  const transfers = t.transfers.map((row, s) => {
+    const a = Math.pow(10, (extras.fixedGainDb[s] ?? 0) / 20);
+    return row.map((c) => ({ re: Float64Array.from(c.re, (v) => v * a), im: Float64Array.from(c.im, (v) => v * a) }));
+  });
+  const ev = seatBalanceEvaluator({ frequencyHz: t.frequencyHz, transfers, startHz: request.band.startHz, stopHz: request.band.stopHz, maxOutputLossDb: request.limits.maxOutputLossDb });
+  const summary = (settings: readonly SubSetting[]): SeatBalanceSummary => {
+    const m = ev.measure(settings);
+    return { meanSpreadDb: roundTo(m.meanSpreadDb, 2), maxSpreadDb: roundTo(m.maxSpreadDb, 2), maxSpreadHz: roundToSignificant(m.maxSpreadHz, 4), meanLevelDb: roundTo(m.meanLevelDb, 2) };
+  };
+  return { before: summary(request.subs.map(() => ({ delayMs: 0, gainDb: 0, invert: false }))), present: summary(extras.present), band: request.band };
+}
