@@ -97,3 +97,57 @@ export function seatBalanceStateFromDocument(doc: SystemDocument): { before: Sea
   };
   return { before: summary(request.subs.map(() => ({ delayMs: 0, gainDb: 0, invert: false }))), present: summary(extras.present), band: request.band };
 }
+
+/** A stored measurement as the Library lists it (no points). */
+export interface SeatBalanceMeasurementRef {
+  id: string;
+  name: string;
+  seat: string | null;
+  role: string | null;
+  hasPhase: boolean;
+}
+
+/** The measured request for a System, or what is missing: a file per sub (role = its name) per seat (its name). */
+export type SeatBalanceMeasuredDocumentRequest =
+  | { ok: true; body: { seats: { name: string }[]; subs: { name: string; present: { delayMs: number; gainDb: number; invert: boolean } }[]; measurements: { sub: string; seat: string; measurementId: string }[]; band: { startHz: number; stopHz: number }; grid: { startHz: number; stopHz: number; pointsPerOctave: number } }; used: { sub: string; seat: string; name: string }[] }
+  | { ok: false; reason: string; missing: { sub: string; seat: string }[]; withoutPhase: { sub: string; seat: string; name: string }[] };
+
+/**
+ * Picks, for every sub at every seat of the System, the first listed measurement (the list is newest first) whose role
+ * is the sub's name and whose seat is the seat's name (case and outer spaces ignored) and which has phase. Says which
+ * pairs have no file, and which have only files without phase.
+ */
+export function seatBalanceMeasuredRequestFromDocument(doc: SystemDocument, measurements: readonly SeatBalanceMeasurementRef[]): SeatBalanceMeasuredDocumentRequest {
+  const key = (v: string | null) => (v ?? '').trim().toLowerCase();
+  const missing: { sub: string; seat: string }[] = [];
+  const withoutPhase: { sub: string; seat: string; name: string }[] = [];
+  const picked: { sub: string; seat: string; measurementId: string; name: string }[] = [];
+  for (const sub of doc.subs) {
+    for (const seat of doc.seats) {
+      const matching = measurements.filter((m) => key(m.role) === key(sub.name) && key(m.seat) === key(seat.name));
+      const usable = matching.find((m) => m.hasPhase);
+      if (usable) picked.push({ sub: sub.name, seat: seat.name, measurementId: usable.id, name: usable.name });
+      else if (matching[0]) withoutPhase.push({ sub: sub.name, seat: seat.name, name: matching[0].name });
+      else missing.push({ sub: sub.name, seat: seat.name });
+    }
+  }
+  if (doc.subs.length === 0 || doc.seats.length < 2) return { ok: false, reason: 'Seat balance needs a sub and at least two seats.', missing, withoutPhase };
+  if (missing.length || withoutPhase.length) {
+    const parts = [
+      missing.length ? `${missing.length} sub-and-seat pair${missing.length === 1 ? ' has' : 's have'} no measurement` : '',
+      withoutPhase.length ? `${withoutPhase.length} only without phase` : '',
+    ].filter(Boolean);
+    return { ok: false, reason: `${parts.join('; ')}. Upload one file per sub per seat, with phase from one timing reference: role = the sub's name, seat = the seat's name.`, missing, withoutPhase };
+  }
+  return {
+    ok: true,
+    body: {
+      seats: doc.seats.map((s) => ({ name: s.name })),
+      subs: doc.subs.map((s) => ({ name: s.name, present: { delayMs: s.delayMs, gainDb: s.gainDb, invert: s.invert } })),
+      measurements: picked.map(({ sub, seat, measurementId }) => ({ sub, seat, measurementId })),
+      band: { ...SYSTEM_SEAT_BALANCE_BAND },
+      grid: { ...SYSTEM_SEAT_BALANCE_GRID },
+    },
+    used: picked.map(({ sub, seat, name }) => ({ sub, seat, name })),
+  };
+}

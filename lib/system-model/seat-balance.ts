@@ -57,7 +57,7 @@ export interface SeatBalanceAnswer {
   subs: SeatBalanceSubAnswer[];
   before: SeatBalanceSummary;
   after: SeatBalanceSummary;
-  /** The settings passed as present (the System's), measured the same way; absent from API answers. */
+  /** The present settings (the System's, or the measured request's `present`), measured the same way; absent otherwise. */
   present?: SeatBalanceSummary;
   evaluated: number;
   /** The band's grid points and each seat's level there, before and after (dB, 0 = before's mean level). */
@@ -257,5 +257,6 @@ export function computeMeasuredSeatBalance(input: SeatBalanceMeasuredRequest, cu
     }),
   );
   const seats = input.seats.map((s) => ({ name: s.name, weight: s.weight ?? 1 }));
-  return solve({ frequencyHz, transfers, seats, subs: input.subs.map((s) => ({ name: s.name })), band: input.band, grid, limits: input.limits, seed: input.seed }, 'measured', extras);
+  const present = input.subs.every((s) => s.present) ? input.subs.map((s) => s.present!) : undefined;
+  return solve({ frequencyHz, transfers, seats, subs: input.subs.map((s) => ({ name: s.name })), band: input.band, grid, limits: input.limits, seed: input.seed }, 'measured', { ...(present ? { present } : {}), ...extras });
 }

@@ -121,7 +121,15 @@ export type SeatBalanceModelRequest = z.infer<typeof seatBalanceModelRequestSche
 export const seatBalanceMeasuredRequestSchema = z
   .object({
     seats: seatsSchema({}),
-    subs: z.array(z.object({ name: roomItemNameSchema })).min(1, 'at least one sub is needed').max(SEAT_BALANCE_LIMITS.maxSubs, `at most ${SEAT_BALANCE_LIMITS.maxSubs} subs`),
+    subs: z
+      .array(
+        z.object({
+          name: roomItemNameSchema,
+          /** The processor's present setting of this sub (the System's), to compare with; the files are taken without it. */
+          present: z.object({ delayMs: num(0, 100, 'ms'), gainDb: num(-30, 30, 'dB'), invert: z.boolean({ error: 'must be true or false' }) }).optional(),
+        }),
+      )
+      .min(1, 'at least one sub is needed').max(SEAT_BALANCE_LIMITS.maxSubs, `at most ${SEAT_BALANCE_LIMITS.maxSubs} subs`),
     measurements: z
       .array(z.object({ sub: roomItemNameSchema, seat: roomItemNameSchema, measurementId: uuidField('must be a measurement id') }))
       .min(1, 'at least one measurement is needed')
@@ -133,6 +141,8 @@ export const seatBalanceMeasuredRequestSchema = z
   })
   .superRefine((r, ctx) => {
     refineCommon(r, ctx);
+    const withPresent = r.subs.filter((s) => s.present).length;
+    if (withPresent > 0 && withPresent < r.subs.length) ctx.addIssue({ code: 'custom', path: ['subs'], message: 'give `present` for every sub or for none' });
     const seen = new Set<string>();
     r.measurements.forEach((m, i) => {
       const key = `${m.sub.toLowerCase()}\u0000${m.seat.toLowerCase()}`;
