@@ -10,7 +10,7 @@ import type { SystemDocument } from '@/lib/validations/system';
 import { toPointM } from './geometry';
 import { positionsOutsideRoom } from './room-bounds';
 import { roundTo, roundToSignificant } from './rounding';
-import type { SeatBalanceAnswer, SeatBalanceExtras, SeatBalanceSummary } from './seat-balance';
+import { withFixedGainsDb, type SeatBalanceAnswer, type SeatBalanceExtras, type SeatBalanceSummary } from './seat-balance';
 
 /** The Modes tab's grid and spread band (roomResponseRequestFromDocument): Seat balance measures on the same points. */
 export const SYSTEM_SEAT_BALANCE_GRID = { startHz: 15, stopHz: 200, pointsPerOctave: 48 } as const;
@@ -86,10 +86,7 @@ export function seatBalanceStateFromDocument(doc: SystemDocument): { before: Sea
   const grid = request.grid ?? SYSTEM_SEAT_BALANCE_GRID;
   const frequencyHz = logFrequencyGridHz(grid);
   const t = modalTransfers({ room: request.room, sourcesM: request.subs.map(toPointM), receiversM: request.seats.map(toPointM), frequencyHz, rt60S: request.room.rt60S, temperatureC: request.room.temperatureC, maxModeHz: 1.5 * grid.stopHz });
-  const transfers = t.transfers.map((row, s) => {
-    const a = Math.pow(10, (extras.fixedGainDb[s] ?? 0) / 20);
-    return row.map((c) => ({ re: Float64Array.from(c.re, (v) => v * a), im: Float64Array.from(c.im, (v) => v * a) }));
-  });
+  const transfers = withFixedGainsDb(t.transfers, extras.fixedGainDb);
   const ev = seatBalanceEvaluator({ frequencyHz: t.frequencyHz, transfers, startHz: request.band.startHz, stopHz: request.band.stopHz, maxOutputLossDb: request.limits.maxOutputLossDb });
   const summary = (settings: readonly SubSetting[]): SeatBalanceSummary => {
     const m = ev.measure(settings);

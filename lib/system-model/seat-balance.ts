@@ -95,11 +95,15 @@ const summary = (m: SeatBalanceMeasures): SeatBalanceSummary => ({
 const gridOf = (r: { band: { startHz: number; stopHz: number }; grid?: { startHz: number; stopHz: number; pointsPerOctave: number } | undefined }) =>
   r.grid ?? { startHz: r.band.startHz, stopHz: r.band.stopHz, pointsPerOctave: 48 };
 
-const scaled = (t: SeatTransfer, gainDb: number): SeatTransfer => {
-  if (gainDb === 0) return t;
-  const a = Math.pow(10, gainDb / 20);
-  return { re: Float64Array.from(t.re, (v) => v * a), im: Float64Array.from(t.im, (v) => v * a) };
-};
+/** transfers[sub][seat] with each sub's fixed level (dB; a System sub's 20·log10(count)) applied. */
+export function withFixedGainsDb(transfers: readonly (readonly SeatTransfer[])[], fixedGainDb: readonly number[] | undefined): SeatTransfer[][] {
+  return transfers.map((row, s) => {
+    const gainDb = fixedGainDb?.[s] ?? 0;
+    if (gainDb === 0) return [...row];
+    const a = Math.pow(10, gainDb / 20);
+    return row.map((t) => ({ re: Float64Array.from(t.re, (v) => v * a), im: Float64Array.from(t.im, (v) => v * a) }));
+  });
+}
 
 /** Each seat's level (dB) at the band points for `settings`, relative to `referenceDb`. */
 function seatCurvesDb(frequencyHz: Float64Array, bandHz: Float64Array, transfers: readonly (readonly SeatTransfer[])[], settings: readonly SubSetting[]): number[][] {
@@ -141,7 +145,7 @@ interface Problem {
 
 /** Optimises one problem and shapes the answer (curves relative to the neutral settings' mean level). */
 function solve(p: Problem, source: SeatBalanceAnswer['source'], extras: SeatBalanceExtras, progressShare = 1): SeatBalanceAnswer {
-  const transfers = p.transfers.map((row, s) => row.map((t) => scaled(t, extras.fixedGainDb?.[s] ?? 0)));
+  const transfers = withFixedGainsDb(p.transfers, extras.fixedGainDb);
   const evaluator: SeatBalanceEvaluator = seatBalanceEvaluator({ frequencyHz: p.frequencyHz, transfers, startHz: p.band.startHz, stopHz: p.band.stopHz, seatWeights: p.seats.map((s) => s.weight), maxOutputLossDb: p.limits.maxOutputLossDb });
   const searchLimits = { maxDelayMs: p.limits.maxDelayMs, minGainDb: p.limits.minGainDb, maxGainDb: p.limits.maxGainDb, allowInvert: p.limits.allowInvert };
   const r = optimizeSubSettings({
