@@ -22,6 +22,8 @@ export interface SubPlacementSearchOptions {
   readonly keep?: number;
   /** Evaluations for each combination's first, quick search (default 3000). */
   readonly quickEvaluations?: number;
+  /** Evaluations for each finalist's full search (default: optimizeSubSettings's own). */
+  readonly finalEvaluations?: number;
   /** Called as combinations are done: (done, total) over the quick pass and the final re-optimisation. */
   readonly onProgress?: (done: number, total: number) => void;
 }
@@ -132,7 +134,7 @@ export function subPlacementSearch(options: SubPlacementSearchOptions): SubPlace
   });
   quickRanked.sort((a, b) => a.objectiveDb - b.objectiveDb || 0);
   const ranked: RankedPlacement[] = quickRanked.slice(0, finalists).map(({ combo }, i) => {
-    const r = optimizeSubSettings({ evaluator: evaluatorOf(combo), ...(limits ? { limits } : {}), seed });
+    const r = optimizeSubSettings({ evaluator: evaluatorOf(combo), ...(limits ? { limits } : {}), seed, ...(options.finalEvaluations ? { maxEvaluations: options.finalEvaluations } : {}) });
     evaluated += r.evaluated;
     onProgress?.(combos.length + i + 1, steps);
     return { candidates: [...combo], settings: r.settings, before: r.before, after: r.after };

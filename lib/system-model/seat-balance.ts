@@ -5,6 +5,7 @@
  * here only the grid, names, the seats' curves for the plots and rounding.
  */
 import {
+  combinationCount,
   defaultSubCandidates,
   logFrequencyGridHz,
   measuredSeatTransfer,
@@ -22,6 +23,7 @@ import { invalid } from '@/lib/errors';
 import type { SeatBalanceMeasuredRequest, SeatBalanceModelRequest } from '@/lib/validations/compute-seat-balance';
 import { toPointM } from './geometry';
 import { roundAllTo, roundTo, roundToSignificant } from './rounding';
+import { placementEvaluations, searchEvaluations, SEAT_BALANCE_WORK } from './seat-balance-work';
 
 /** The measures of one set of settings as the answer gives them. */
 export interface SeatBalanceSummary {
@@ -152,6 +154,7 @@ function solve(p: Problem, source: SeatBalanceAnswer['source'], extras: SeatBala
     evaluator,
     limits: searchLimits,
     seed: p.seed,
+    maxEvaluations: searchEvaluations(p.subs.length, p.seats.length, evaluator.bandHz.length),
     ...(extras.present ? { starts: [extras.present] } : {}),
     ...(extras.onProgress ? { onProgress: (done: number, total: number) => extras.onProgress?.((progressShare * done) / total) } : {}),
   });
@@ -190,16 +193,27 @@ export function computeSeatBalance(input: SeatBalanceModelRequest, extras: SeatB
   const frequencyHz = logFrequencyGridHz(grid);
   const transfersAt = (points: { xM: number; yM: number; zM: number }[]) =>
     modalTransfers({ room: input.room, sourcesM: points.map(toPointM), receiversM: input.seats.map(toPointM), frequencyHz, rt60S: input.room.rt60S, temperatureC: input.room.temperatureC, maxModeHz: 1.5 * grid.stopHz });
-  const t = transfersAt(input.subs);
   const seats = input.seats.map((s) => ({ name: s.name, weight: s.weight ?? 1 }));
-  const problem: Problem = { frequencyHz: t.frequencyHz, transfers: t.transfers, seats, subs: input.subs.map((s) => ({ ...s })), band: input.band, grid, limits: input.limits, seed: input.seed };
   const placing = input.placement;
+  // A placement search too big for one request is refused before any work.
+  const bandPoints = Array.from(frequencyHz).filter((f) => f >= input.band.startHz && f <= input.band.stopHz).length;
+  const candidates = placing
+    ? [
+        ...(placing.defaults ? defaultSubCandidates(input.room).map((c) => ({ name: c.name, xM: roundTo(c.positionM.x, 3), yM: roundTo(c.positionM.y, 3), zM: roundTo(c.positionM.z, 3) })) : []),
+        ...placing.candidates,
+      ]
+    : [];
+  const combinations = placing ? Math.min(combinationCount(candidates.length, placing.count), placing.maxCombinations) : 0;
+  const budget = placing ? placementEvaluations(placing.count, seats.length, bandPoints, combinations) : null;
+  if (placing && !budget) {
+    const most = Math.max(1, Math.floor((0.7 * SEAT_BALANCE_WORK.placementUnits) / (SEAT_BALANCE_WORK.minQuickEvaluations * placing.count * seats.length * bandPoints)));
+    const message = `at most ${most} combinations for ${placing.count} subs, ${seats.length} seats and ${bandPoints} points in the band`;
+    throw invalid(`placement.maxCombinations: ${message} — lower maxCombinations, the seats or the grid's points per octave`, [{ path: 'placement.maxCombinations', message }]);
+  }
+  const t = transfersAt(input.subs);
+  const problem: Problem = { frequencyHz: t.frequencyHz, transfers: t.transfers, seats, subs: input.subs.map((s) => ({ ...s })), band: input.band, grid, limits: input.limits, seed: input.seed };
   const answer = solve(problem, 'model', extras, placing ? 0.2 : 1);
-  if (!placing) return answer;
-  const candidates = [
-    ...(placing.defaults ? defaultSubCandidates(input.room).map((c) => ({ name: c.name, xM: roundTo(c.positionM.x, 3), yM: roundTo(c.positionM.y, 3), zM: roundTo(c.positionM.z, 3) })) : []),
-    ...placing.candidates,
-  ];
+  if (!placing || !budget) return answer;
   const ct = transfersAt(candidates);
   const found = subPlacementSearch({
     frequencyHz: ct.frequencyHz,
@@ -211,6 +225,8 @@ export function computeSeatBalance(input: SeatBalanceModelRequest, extras: SeatB
     limits: input.limits,
     seed: input.seed,
     maxCombinations: placing.maxCombinations,
+    quickEvaluations: budget.quick,
+    finalEvaluations: budget.final,
     ...(extras.onProgress ? { onProgress: (done: number, total: number) => extras.onProgress?.(0.2 + (0.8 * done) / total) } : {}),
   });
   const subName = (i: number) => input.subs[i]?.name ?? `Sub ${i + 1}`;
