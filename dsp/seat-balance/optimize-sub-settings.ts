@@ -105,7 +105,7 @@ export function optimizeSubSettings(options: OptimizeSubSettingsOptions): Optimi
     evaluator.score(delays, gains, inverts, out);
     evaluated++;
     const loss = -out.meanLevelDb - floor;
-    return loss > 1e-9 ? INFEASIBLE + loss : out.objectiveDb;
+    return loss > 1e99 ? INFEASIBLE + loss : out.objectiveDb;
   };
   const toSettings = (x: Float64Array): SubSetting[] => {
     const settings: SubSetting[] = new Array(n);
@@ -158,7 +158,7 @@ export function optimizeSubSettings(options: OptimizeSubSettingsOptions): Optimi
   let chosenMeasures = before;
   for (const c of candidates) {
     const m = evaluator.measure(c.settings);
-    if (m.withinFloor && m.objectiveDb < chosenMeasures.objectiveDb - 1e-12) {
+    if (m.objectiveDb < chosenMeasures.objectiveDb - 1e-12) {
       chosen = c;
       chosenMeasures = m;
     }
@@ -167,17 +167,39 @@ export function optimizeSubSettings(options: OptimizeSubSettingsOptions): Optimi
 
   function finish(settings: SubSetting[]): SubSetting[] {
     const rounded = settings.map((s) => ({
-      delayMs: roundStep(clamp(s.delayMs, 0, limits.maxDelayMs), SEAT_BALANCE_RESOLUTION.delayMs),
-      gainDb: roundStep(clamp(s.gainDb, limits.minGainDb, limits.maxGainDb), SEAT_BALANCE_RESOLUTION.gainDb),
+      delayMs: roundWithin(s.delayMs, 0, limits.maxDelayMs, SEAT_BALANCE_RESOLUTION.delayMs),
+      gainDb: roundWithin(s.gainDb, limits.minGainDb, limits.maxGainDb, SEAT_BALANCE_RESOLUTION.gainDb),
       invert: s.invert,
     }));
-    const canonical = canonicalSettings(rounded, order).map((s) => ({ ...s, delayMs: roundStep(s.delayMs, SEAT_BALANCE_RESOLUTION.delayMs) }));
+    const canonical = keepFloor(canonicalSettings(rounded, order).map((s) => ({ ...s, delayMs: roundStep(s.delayMs, SEAT_BALANCE_RESOLUTION.delayMs) })));
     const top = Math.max(...canonical.map((s) => s.gainDb));
     if (top <= 0) return canonical;
     // Cut rather than boost: the same spread with less amplifier and driver effort, if the floor and limits allow.
     const lowered = canonical.map((s) => ({ ...s, gainDb: roundStep(s.gainDb - top, SEAT_BALANCE_RESOLUTION.gainDb) }));
     if (lowered.some((s) => s.gainDb < limits.minGainDb)) return canonical;
     return evaluator.measure(lowered).withinFloor ? lowered : canonical;
+  }
+
+  /**
+   * Rounding can take an answer that sits on the output floor to just below it (and the answer would fall back to
+   * neutral): raise gains a step at a time until the floor holds — all together while the loudest has room (the spread
+   * stays as it is), else the one sub whose step costs the least spread.
+   */
+  function keepFloor(settings: SubSetting[]): SubSetting[] {
+    const step = SEAT_BALANCE_RESOLUTION.gainDb;
+    const raise = (x: SubSetting) => ({ ...x, gainDb: roundStep(x.gainDb + step, step) });
+    let current = { s: settings, m: evaluator.measure(settings) };
+    for (let i = 0; i < 60 && !current.m.withinFloor; i++) {
+      const options = [current.s.map(raise), ...current.s.map((_, k) => current.s.map((x, j) => (j === k ? raise(x) : x)))].filter((c) => c.every((x) => x.gainDb <= limits.maxGainDb));
+      let next: typeof current | null = null;
+      for (const c of options) {
+        const m = evaluator.measure(c);
+        if (m.meanLevelDb > current.m.meanLevelDb && (!next || m.objectiveDb < next.m.objectiveDb)) next = { s: c, m };
+      }
+      if (!next) break;
+      current = next;
+    }
+    return current.s;
   }
 
   function search(stopAt: number): { x: Float64Array; fit: number } {
@@ -278,6 +300,14 @@ export function optimizeSubSettings(options: OptimizeSubSettingsOptions): Optimi
 
 function clamp(v: number, lo: number, hi: number): number {
   return Math.min(hi, Math.max(lo, v));
+}
+
+/** The nearest step to `value` inside lo…hi (a limit off the steps, e.g. 2.97 dB, rounds inward: 2.9, not 3.0). */
+function roundWithin(value: number, lo: number, hi: number, step: number): number {
+  let r = roundStep(clamp(value, lo, hi), step);
+  while (r > hi) r = roundStep(r - step, step);
+  while (r < lo) r = roundStep(r + step, step);
+  return r;
 }
 
 function roundStep(value: number, step: number): number {

@@ -130,11 +130,12 @@ export function subPlacementSearch(options: SubPlacementSearchOptions): SubPlace
     const r = optimizeSubSettings({ evaluator: evaluatorOf(combo), ...(limits ? { limits } : {}), seed, maxEvaluations: quick });
     evaluated += r.evaluated;
     onProgress?.(i + 1, steps);
-    return { combo, objectiveDb: r.after.objectiveDb };
+    return { combo, objectiveDb: r.after.objectiveDb, settings: r.settings };
   });
   quickRanked.sort((a, b) => a.objectiveDb - b.objectiveDb || 0);
-  const ranked: RankedPlacement[] = quickRanked.slice(0, finalists).map(({ combo }, i) => {
-    const r = optimizeSubSettings({ evaluator: evaluatorOf(combo), ...(limits ? { limits } : {}), seed, ...(options.finalEvaluations ? { maxEvaluations: options.finalEvaluations } : {}) });
+  const ranked: RankedPlacement[] = quickRanked.slice(0, finalists).map(({ combo, settings }, i) => {
+    // The quick answer is a start, so the full search never leaves a combination worse than its quick result.
+    const r = optimizeSubSettings({ evaluator: evaluatorOf(combo), ...(limits ? { limits } : {}), seed, starts: [settings], ...(options.finalEvaluations ? { maxEvaluations: options.finalEvaluations } : {}) });
     evaluated += r.evaluated;
     onProgress?.(combos.length + i + 1, steps);
     return { candidates: [...combo], settings: r.settings, before: r.before, after: r.after };

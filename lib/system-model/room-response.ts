@@ -7,6 +7,7 @@ import { logFrequencyGridHz, modePressureAt, modePressureMap, nodeAlignedCellCou
 import { ROOM_LIMITS } from '@/lib/validations/compute-common';
 import type { RoomResponseRequest } from '@/lib/validations/compute-room';
 import type { SystemDocument } from '@/lib/validations/system';
+import { systemChannelSettings } from './channel-settings';
 import { mlpSeat, toPointM } from './geometry';
 import { positionsOutsideRoom } from './room-bounds';
 import { roundAllTo, roundAllToSignificant, roundTo, roundToSignificant } from './rounding';
@@ -41,7 +42,8 @@ export interface RoomResponseOptions {
 }
 
 /**
- * Body of POST /api/v1/room-response: every seat, every sub with its gain (and count), delay and polarity, the
+ * Body of POST /api/v1/room-response: every seat, every sub with its gain (and count), processor delay (the channel
+ * settings': distance alignment plus its own delay) and polarity, the
  * map at the MLP's ear height, and the front-wall notch of each sub and main speaker (its distance to the front wall, y)
  * inside the room. Null when there is no sub.
  */
@@ -55,11 +57,15 @@ export function roomResponseRequestFromDocument(doc: SystemDocument, options: Ro
     ...doc.speakers.filter((s, i) => ['L', 'C', 'R'].includes(s.channel) && !outside.has(`speakers.${i}`)).map((s) => ({ name: s.channel, distanceM: s.yM })),
   ].filter((q) => q.distanceM >= 0.01);
   const mapIndices = options.mapIndices;
+  // Each sub's processor delay as the channel settings set it (distance alignment and its own delay), less the
+  // smallest: a delay common to every sub changes no level.
+  const cs = systemChannelSettings(doc).subs.map((c) => c.delayMs);
+  const subDelaysMs = cs.map((d) => roundTo(d - Math.min(...cs), 2));
   return {
     room: { ...doc.room },
     grid: { startHz: options.startHz ?? 15, stopHz: options.stopHz ?? 200, pointsPerOctave: options.pointsPerOctave ?? 48 },
     seats: doc.seats.map((s) => ({ name: s.name, xM: s.xM, yM: s.yM, zM: s.zM })),
-    subs: doc.subs.map((s) => ({ name: s.name, xM: s.xM, yM: s.yM, zM: s.zM, gainDb: Math.max(-30, Math.min(30, s.gainDb + 20 * Math.log10(s.count))), delayMs: s.delayMs, invert: s.invert })),
+    subs: doc.subs.map((s, i) => ({ name: s.name, xM: s.xM, yM: s.yM, zM: s.zM, gainDb: Math.max(-30, Math.min(30, s.gainDb + 20 * Math.log10(s.count))), delayMs: Math.min(100, subDelaysMs[i] as number), invert: s.invert })),
     spread: { startHz: 20, stopHz: 120 },
     ...(mapIndices ? { map: { indices: mapIndices, zM: Math.min(ear, doc.room.heightM), columns: 40, rows: 50 } } : {}),
     quarterWave: front,

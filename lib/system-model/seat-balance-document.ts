@@ -7,10 +7,11 @@
 import { logFrequencyGridHz, modalTransfers, seatBalanceEvaluator, type SubSetting } from '@/dsp';
 import { SEAT_BALANCE_LIMITS, seatBalanceModelRequestSchema, type SeatBalanceModelRequest } from '@/lib/validations/compute-seat-balance';
 import type { SystemDocument } from '@/lib/validations/system';
+import { systemChannelSettings } from './channel-settings';
 import { toPointM } from './geometry';
 import { positionsOutsideRoom } from './room-bounds';
 import { roundTo, roundToSignificant } from './rounding';
-import { withFixedGainsDb, type SeatBalanceAnswer, type SeatBalanceExtras, type SeatBalanceSummary } from './seat-balance';
+import { withFixedPath, type SeatBalanceAnswer, type SeatBalanceExtras, type SeatBalanceSummary } from './seat-balance';
 
 /** The Modes tab's grid and spread band (roomResponseRequestFromDocument): Seat balance measures on the same points. */
 export const SYSTEM_SEAT_BALANCE_GRID = { startHz: 15, stopHz: 200, pointsPerOctave: 48 } as const;
@@ -18,8 +19,19 @@ export const SYSTEM_SEAT_BALANCE_BAND = { startHz: 20, stopHz: 120 } as const;
 
 /** Why a System cannot be balanced, or its request with the extras (present settings, box counts). */
 export type SeatBalanceDocumentRequest =
-  | { ok: true; request: SeatBalanceModelRequest; extras: Required<Pick<SeatBalanceExtras, 'present' | 'fixedGainDb'>> }
+  | { ok: true; request: SeatBalanceModelRequest; extras: Required<Pick<SeatBalanceExtras, 'present' | 'fixedGainDb' | 'fixedDelayMs'>> }
   | { ok: false; reason: string };
+
+/**
+ * The part of each sub's processor delay that is distance alignment (the channel settings' delay less the sub's own
+ * delay), the smallest made 0: the processor applies it whatever Seat balance says, so it is part of each sub's path.
+ */
+export function subAlignmentDelaysMs(doc: SystemDocument): number[] {
+  const cs = systemChannelSettings(doc);
+  const fixed = doc.subs.map((s, i) => (cs.subs[i]?.delayMs ?? 0) - s.delayMs);
+  const least = Math.min(...fixed);
+  return fixed.map((d) => d - least);
+}
 
 /** The request for a System's subs and seats (the limits and placement are the caller's to add). */
 export function seatBalanceRequestFromDocument(doc: SystemDocument, options: { placementCount?: number; seed?: number } = {}): SeatBalanceDocumentRequest {
@@ -44,6 +56,7 @@ export function seatBalanceRequestFromDocument(doc: SystemDocument, options: { p
     extras: {
       present: doc.subs.map((s) => ({ delayMs: s.delayMs, gainDb: s.gainDb, invert: s.invert })),
       fixedGainDb: doc.subs.map((s) => 20 * Math.log10(s.count)),
+      fixedDelayMs: subAlignmentDelaysMs(doc),
     },
   };
 }
@@ -54,23 +67,30 @@ export function seatBalanceRequestFromDocument(doc: SystemDocument, options: { p
  * level at the seats (one gain offset for all subs) and, where it can, each sub's present polarity (inverting every
  * sub together changes no seat's level). None of that changes the seat-to-seat spread.
  */
-export function applySeatBalanceToDocument(doc: SystemDocument, answer: Pick<SeatBalanceAnswer, 'subs' | 'after' | 'present'>): SystemDocument {
+export function applySeatBalanceToDocument(
+  doc: SystemDocument,
+  answer: Pick<SeatBalanceAnswer, 'subs' | 'after' | 'present'>,
+  options: { delaysIncludeAlignment?: boolean } = {},
+): SystemDocument {
   if (answer.subs.length !== doc.subs.length) return doc;
   const present = answer.present;
-  const levelOffsetDb = present ? present.meanLevelDb - answer.after.meanLevelDb : 0;
+  // Offsets common to every sub are rounded first, so the subs' relative delays and gains stay exactly the answer's.
+  const levelOffsetDb = roundTo(present ? present.meanLevelDb - answer.after.meanLevelDb : 0, 1);
   const matches = answer.subs.filter((s, i) => s.invert === doc.subs[i]!.invert).length;
   const flipAll = matches * 2 < answer.subs.length;
   const mean = (v: number[]) => v.reduce((a, x) => a + x, 0) / v.length;
-  const base = Math.max(0, mean(doc.subs.map((s) => s.delayMs)) - mean(answer.subs.map((s) => s.delayMs)));
-  const top = Math.max(...answer.subs.map((s) => s.delayMs));
-  const shift = Math.min(base, 100 - top);
+  // From measurements the answer's delays are the whole processor delay: the distance alignment comes off.
+  const alignment = options.delaysIncludeAlignment ? subAlignmentDelaysMs(doc) : doc.subs.map(() => 0);
+  const own = answer.subs.map((s, i) => s.delayMs - (alignment[i] as number));
+  const keepMean = mean(doc.subs.map((s) => s.delayMs)) - mean(own);
+  const shift = roundTo(Math.min(Math.max(keepMean, -Math.min(...own)), 100 - Math.max(...own)), 2);
   return {
     ...doc,
     subs: doc.subs.map((sub, i) => {
       const a = answer.subs[i] as SubSetting;
       return {
         ...sub,
-        delayMs: roundTo(a.delayMs + shift, 2),
+        delayMs: Math.max(0, roundTo((own[i] as number) + shift, 2)),
         gainDb: roundTo(Math.min(30, Math.max(-30, a.gainDb + levelOffsetDb)), 1),
         invert: flipAll ? !a.invert : a.invert,
       };
@@ -86,7 +106,7 @@ export function seatBalanceStateFromDocument(doc: SystemDocument): { before: Sea
   const grid = request.grid ?? SYSTEM_SEAT_BALANCE_GRID;
   const frequencyHz = logFrequencyGridHz(grid);
   const t = modalTransfers({ room: request.room, sourcesM: request.subs.map(toPointM), receiversM: request.seats.map(toPointM), frequencyHz, rt60S: request.room.rt60S, temperatureC: request.room.temperatureC, maxModeHz: 1.5 * grid.stopHz });
-  const transfers = withFixedGainsDb(t.transfers, extras.fixedGainDb);
+  const transfers = withFixedPath(t.frequencyHz, t.transfers, extras.fixedGainDb, extras.fixedDelayMs);
   const ev = seatBalanceEvaluator({ frequencyHz: t.frequencyHz, transfers, startHz: request.band.startHz, stopHz: request.band.stopHz, maxOutputLossDb: request.limits.maxOutputLossDb });
   const summary = (settings: readonly SubSetting[]): SeatBalanceSummary => {
     const m = ev.measure(settings);
@@ -129,6 +149,7 @@ export function seatBalanceMeasuredRequestFromDocument(doc: SystemDocument, meas
     }
   }
   if (doc.subs.length === 0 || doc.seats.length < 2) return { ok: false, reason: 'Seat balance needs a sub and at least two seats.', missing, withoutPhase };
+  const processorDelays = systemChannelSettings(doc).subs.map((c) => c.delayMs);
   if (missing.length || withoutPhase.length) {
     const parts = [
       missing.length ? `${missing.length} sub-and-seat pair${missing.length === 1 ? ' has' : 's have'} no measurement` : '',
@@ -140,7 +161,8 @@ export function seatBalanceMeasuredRequestFromDocument(doc: SystemDocument, meas
     ok: true,
     body: {
       seats: doc.seats.map((s) => ({ name: s.name })),
-      subs: doc.subs.map((s) => ({ name: s.name, present: { delayMs: s.delayMs, gainDb: s.gainDb, invert: s.invert } })),
+      // The files hold no processing: the present settings are the whole processor delay (alignment and own).
+      subs: doc.subs.map((s, i) => ({ name: s.name, present: { delayMs: roundTo((processorDelays[i] as number) - Math.min(...processorDelays), 2), gainDb: s.gainDb, invert: s.invert } })),
       measurements: picked.map(({ sub, seat, measurementId }) => ({ sub, seat, measurementId })),
       band: { ...SYSTEM_SEAT_BALANCE_BAND },
       grid: { ...SYSTEM_SEAT_BALANCE_GRID },

@@ -81,6 +81,11 @@ export interface SeatBalanceExtras {
   present?: readonly SubSetting[];
   /** A fixed level per sub, dB (20·log10 of a System sub's count of boxes). */
   fixedGainDb?: readonly number[];
+  /**
+   * A fixed delay per sub that the processor applies anyway, ms (a System sub's distance alignment): part of each sub's
+   * path, so the answer's delays are the sub's own delays on top of it.
+   */
+  fixedDelayMs?: readonly number[];
   onProgress?: (fraction: number) => void;
 }
 
@@ -97,13 +102,28 @@ const summary = (m: SeatBalanceMeasures): SeatBalanceSummary => ({
 const gridOf = (r: { band: { startHz: number; stopHz: number }; grid?: { startHz: number; stopHz: number; pointsPerOctave: number } | undefined }) =>
   r.grid ?? { startHz: r.band.startHz, stopHz: r.band.stopHz, pointsPerOctave: 48 };
 
-/** transfers[sub][seat] with each sub's fixed level (dB; a System sub's 20·log10(count)) applied. */
-export function withFixedGainsDb(transfers: readonly (readonly SeatTransfer[])[], fixedGainDb: readonly number[] | undefined): SeatTransfer[][] {
+/**
+ * transfers[sub][seat] with each sub's fixed level (dB; a System sub's 20·log10(count)) and fixed delay (ms; its
+ * distance alignment) applied: H·10^(g/20)·e^(−jωτ).
+ */
+export function withFixedPath(frequencyHz: ArrayLike<number>, transfers: readonly (readonly SeatTransfer[])[], fixedGainDb?: readonly number[], fixedDelayMs?: readonly number[]): SeatTransfer[][] {
   return transfers.map((row, s) => {
     const gainDb = fixedGainDb?.[s] ?? 0;
-    if (gainDb === 0) return [...row];
+    const delayMs = fixedDelayMs?.[s] ?? 0;
+    if (gainDb === 0 && delayMs === 0) return [...row];
     const a = Math.pow(10, gainDb / 20);
-    return row.map((t) => ({ re: Float64Array.from(t.re, (v) => v * a), im: Float64Array.from(t.im, (v) => v * a) }));
+    const rot = Array.from(frequencyHz, (f) => (-2 * Math.PI * f * delayMs) / 1000);
+    return row.map((t) => {
+      const re = new Float64Array(t.re.length);
+      const im = new Float64Array(t.re.length);
+      for (let i = 0; i < re.length; i++) {
+        const c = a * Math.cos(rot[i] as number);
+        const d = a * Math.sin(rot[i] as number);
+        re[i] = (t.re[i] as number) * c - (t.im[i] as number) * d;
+        im[i] = (t.re[i] as number) * d + (t.im[i] as number) * c;
+      }
+      return { re, im };
+    });
   });
 }
 
@@ -147,7 +167,7 @@ interface Problem {
 
 /** Optimises one problem and shapes the answer (curves relative to the neutral settings' mean level). */
 function solve(p: Problem, source: SeatBalanceAnswer['source'], extras: SeatBalanceExtras, progressShare = 1): SeatBalanceAnswer {
-  const transfers = withFixedGainsDb(p.transfers, extras.fixedGainDb);
+  const transfers = withFixedPath(p.frequencyHz, p.transfers, extras.fixedGainDb, extras.fixedDelayMs);
   const evaluator: SeatBalanceEvaluator = seatBalanceEvaluator({ frequencyHz: p.frequencyHz, transfers, startHz: p.band.startHz, stopHz: p.band.stopHz, seatWeights: p.seats.map((s) => s.weight), maxOutputLossDb: p.limits.maxOutputLossDb });
   const searchLimits = { maxDelayMs: p.limits.maxDelayMs, minGainDb: p.limits.minGainDb, maxGainDb: p.limits.maxGainDb, allowInvert: p.limits.allowInvert };
   const r = optimizeSubSettings({

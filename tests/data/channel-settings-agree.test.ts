@@ -27,16 +27,18 @@ async function layoutOverRoute(body: unknown): Promise<Json> {
 }
 
 describe('channel settings: Layout, the Settings sheet, its CSV and the API agree number by number', () => {
-  it('the tester’s Juniper Lane figures: L 3.78 m / 0.92 ms, C 2.01 ms / −0.9 dB, SL 5.29 ms / −4.4 dB, subs 4.10 m / 0 ms', () => {
+  it('the tester’s Juniper Lane figures: L 3.78 m / 0.92 ms, C 2.01 ms / −0.9 dB, SL 5.29 ms / −4.4 dB, subs 4.10 m / 0 ms and 2.46 m / 4.77 ms', () => {
     const cs = systemChannelSettings(CASES[0]!.doc);
     const doc = CASES[0]!.doc;
     const by = (ch: string) => cs.mains[doc.speakers.findIndex((s) => s.channel === ch)]!;
     expect(by('L')).toEqual({ distanceM: 3.78, delayMs: 0.92, trimDb: 0 });
     expect(by('C')).toEqual({ distanceM: 3.41, delayMs: 2.01, trimDb: -0.9 });
     expect(by('SL')).toEqual({ distanceM: 2.29, delayMs: 5.29, trimDb: -4.4 });
+    // By hand: the right-wall sub (4.6, 2.8, 0.3) is √(2.15² + 0.9² + 0.8²) = 2.464 m from the MLP (2.45, 3.7, 1.1),
+    // the corner sub 4.1015 m; aligned to the farther, (4.1015 − 2.4643) m / 343.2 m/s = 4.77 ms.
     expect(cs.subs).toEqual([
       { distanceM: 4.1, delayMs: 0, gainDb: 0 },
-      { distanceM: 4.1, delayMs: 0, gainDb: 0 },
+      { distanceM: 2.46, delayMs: 4.77, gainDb: 0 },
     ]);
   });
 

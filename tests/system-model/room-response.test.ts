@@ -7,7 +7,7 @@ const C20 = 331.3 * Math.sqrt(1 + 20 / 273.15);
 const sig = (v: number, digits: number) => Number(v.toPrecision(digits));
 
 describe('roomResponseRequestFromDocument: every seat and sub as the document says', () => {
-  it('seats, subs with gain + 20·log10(units), delay and polarity; the front-wall distance of each sub and of L, C, R', () => {
+  it('seats, subs with gain + 20·log10(units), processor delay (distance alignment + own) and polarity; the front-wall distance of each sub and of L, C, R', () => {
     const doc = withSub(testSystem(), 1, { delayMs: 1.5, invert: true, gainDb: -2 });
     const req = roomResponseRequestFromDocument(doc)!;
     expect(req.room).toEqual(doc.room);
@@ -16,8 +16,10 @@ describe('roomResponseRequestFromDocument: every seat and sub as the document sa
       { name: 'Centre chair', xM: 3, yM: 5, zM: 1.2 },
       { name: 'Side chair', xM: 4, yM: 5, zM: 1.2 },
     ]);
-    expect(req.subs[0]).toEqual({ name: 'Sub A', xM: 3, yM: 1, zM: 1.2, gainDb: 20 * Math.log10(2), delayMs: 0, invert: false });
-    expect(req.subs[1]).toEqual({ name: 'Sub B', xM: 0, yM: 1, zM: 1.2, gainDb: -2, delayMs: 1.5, invert: true });
+    // By hand: Sub A is 4 m from the MLP, Sub B 5 m; the processor delays A by 1 m / 343.215 m/s = 2.91 ms (20 °C),
+    // B has its own 1.5 ms: relative to the smaller, A 1.41 ms and B 0.
+    expect(req.subs[0]).toEqual({ name: 'Sub A', xM: 3, yM: 1, zM: 1.2, gainDb: 20 * Math.log10(2), delayMs: 1.41, invert: false });
+    expect(req.subs[1]).toEqual({ name: 'Sub B', xM: 0, yM: 1, zM: 1.2, gainDb: -2, delayMs: 0, invert: true });
     expect(req.spread).toEqual({ startHz: 20, stopHz: 120 });
     expect(req.map).toBeUndefined();
     expect(req.quarterWave).toEqual([
