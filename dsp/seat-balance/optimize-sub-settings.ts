@@ -105,7 +105,7 @@ export function optimizeSubSettings(options: OptimizeSubSettingsOptions): Optimi
     evaluator.score(delays, gains, inverts, out);
     evaluated++;
     const loss = -out.meanLevelDb - floor;
-    return loss > 1e99 ? INFEASIBLE + loss : out.objectiveDb;
+    return loss > 1e-9 ? INFEASIBLE + loss : out.objectiveDb;
   };
   const toSettings = (x: Float64Array): SubSetting[] => {
     const settings: SubSetting[] = new Array(n);
@@ -158,7 +158,7 @@ export function optimizeSubSettings(options: OptimizeSubSettingsOptions): Optimi
   let chosenMeasures = before;
   for (const c of candidates) {
     const m = evaluator.measure(c.settings);
-    if (m.objectiveDb < chosenMeasures.objectiveDb - 1e-12) {
+    if (m.withinFloor && m.objectiveDb < chosenMeasures.objectiveDb - 1e-12) {
       chosen = c;
       chosenMeasures = m;
     }
