@@ -95,6 +95,7 @@ const MATRIX: Record<string, { expect: Expect; build: Builder }> = {
   'POST /api/v1/timing': { expect: open(200), build: () => documentedExample('/api/v1/timing') },
   'POST /api/v1/room-modes': { expect: open(200), build: () => documentedExample('/api/v1/room-modes') },
   'POST /api/v1/room-response': { expect: open(200), build: () => documentedExample('/api/v1/room-response') },
+  'POST /api/v1/seat-balance': { expect: open(200), build: () => documentedExample('/api/v1/seat-balance') },
   'POST /api/v1/layout': { expect: open(200), build: () => documentedExample('/api/v1/layout') },
   'POST /api/v1/headroom': { expect: open(200), build: () => documentedExample('/api/v1/headroom') },
   'POST /api/v1/measured/predict': { expect: open(200), build: () => documentedExample('/api/v1/measured/predict') },

@@ -12,6 +12,7 @@ import { blendRequestSchema, crossoverSweepRequestSchema, timingRequestSchema } 
 import { headroomRequestSchema } from '@/lib/validations/compute-headroom';
 import { layoutRequestSchema } from '@/lib/validations/compute-layout';
 import { roomModesRequestSchema, roomResponseRequestSchema } from '@/lib/validations/compute-room';
+import { seatBalanceMeasuredRequestSchema, seatBalanceModelRequestSchema } from '@/lib/validations/compute-seat-balance';
 import { lessonCreateSchema, lessonUpdateSchema, stepCreateSchema, stepReorderSchema, stepUpdateSchema } from '@/lib/validations/lesson';
 import { copySchema, revisionNoteUpdateSchema, revisionRestoreSchema, systemCreateSchema, systemDuplicateSchema, systemRenameSchema, systemUpdateSchema } from '@/lib/validations/library';
 import { measurementUploadFieldsSchema, predictRequestSchema } from '@/lib/validations/measurement';
@@ -109,6 +110,8 @@ const JSON_ROUTES: JsonRoute[] = [
   compute('/api/v1/timing', timingRequestSchema),
   compute('/api/v1/room-modes', roomModesRequestSchema),
   compute('/api/v1/room-response', roomResponseRequestSchema),
+  // A body with `measurements` is read by the measured schema, any other by the model's.
+  compute('/api/v1/seat-balance', seatBalanceModelRequestSchema.or(seatBalanceMeasuredRequestSchema)),
   compute('/api/v1/layout', layoutRequestSchema),
   compute('/api/v1/headroom', headroomRequestSchema),
   compute('/api/v1/measured/predict', predictRequestSchema, 2 * KB * KB),
