@@ -72,8 +72,7 @@ export { wrapDeg } from './internal/angles';
 
 export { SEAT_BALANCE_DEFAULT_LIMITS, SEAT_BALANCE_RESOLUTION, type SubSetting, type SeatBalanceLimits, type SeatBalanceMeasures } from './seat-balance/seat-balance-types';
 export { seatBalanceEvaluator, type SeatTransfer, type SeatBalanceEvaluator } from './seat-balance/seat-balance-evaluator';
-export { optimizeSubSettings, type OptimizeSubSettingsResult } from './seat-balance/optimize-sub-settings';
-export { subPlacementSearch, combinationCount, type RankedPlacement, type SubPlacementSearchResult } from './seat-balance/sub-placement-search';
-export { defaultSubCandidates, type SubCandidate } from './seat-balance/default-sub-candidates';
+export { optimizeSubSettings } from './seat-balance/optimize-sub-settings';
+export { subPlacementSearch, combinationCount } from './seat-balance/sub-placement-search';
+export { defaultSubCandidates } from './seat-balance/default-sub-candidates';
 export { measuredSeatTransfer } from './seat-balance/measured-seat-transfer';
-export { seededRandom } from './internal/seeded-random';
