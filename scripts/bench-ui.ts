@@ -3,13 +3,16 @@
  * (BENCH_URL, default http://127.0.0.1:3000). Prints; asserts nothing.
  *  1. the editor's first-load JavaScript, gzipped (every script the page loads, compressed with zlib);
  *  2. editing the crossover and seeing the Blend plot updated: median and p95 over 30 edits;
- *  3. the Presenter view's sweep frame rate (scripts/bench-ui-sweep.ts, when present).
+ *  3. Seat balance in its Web Worker, from Run to the answer: the demo System and 4 subs × 8 seats
+ *     (scripts/lib/seat-balance-ui-bench.ts);
+ *  4. the Presenter view's sweep frame rate (scripts/bench-ui-sweep.ts, when present).
  */
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { chromium } from '@playwright/test';
+import { benchSeatBalanceUi, type SeatBalanceUiFigure } from './lib/seat-balance-ui-bench';
 
 const base = (process.env.BENCH_URL ?? 'http://127.0.0.1:3000').replace(/\/$/, '');
 const args = ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--disable-quic', '--no-first-run'];
@@ -24,6 +27,7 @@ export interface UiFigures {
   crossoverEditMedianMs: number;
   crossoverEditP95Ms: number;
   edits: number;
+  seatBalance: SeatBalanceUiFigure[];
 }
 
 export async function benchUi(): Promise<UiFigures> {
@@ -79,6 +83,7 @@ export async function benchUi(): Promise<UiFigures> {
       crossoverEditMedianMs: quantile(times, 0.5),
       crossoverEditP95Ms: quantile(times, 0.95),
       edits,
+      seatBalance: await benchSeatBalanceUi(browser, base),
     };
   } finally {
     await browser.close();
@@ -90,6 +95,7 @@ if (require.main === module) {
     .then((f) => {
       console.log(`editor first-load JavaScript (gzip): ${f.firstLoadJsGzipKb.toFixed(1)} kB   (target ≤ 250 kB)`);
       console.log(`crossover edit → plot updated over ${f.edits} edits: median ${f.crossoverEditMedianMs.toFixed(1)} ms, p95 ${f.crossoverEditP95Ms.toFixed(1)} ms   (target p95 ≤ 100 ms)`);
+      for (const s of f.seatBalance) console.log(`Seat balance in the browser's worker, ${s.label}${s.placement ? ', with the placement search' : ''}: ${(s.elapsedMs / 1000).toFixed(2)} s, ${s.evaluated} settings evaluated`);
       const sweep = path.join(__dirname, 'bench-ui-sweep.ts');
       if (existsSync(sweep)) spawnSync(path.join(__dirname, '..', 'node_modules', '.bin', 'tsx'), [sweep], { stdio: 'inherit', env: process.env });
     })

@@ -6,6 +6,7 @@ export const PANELS = [
   { id: 'blend', label: 'Blend' },
   { id: 'timing', label: 'Timing' },
   { id: 'modes', label: 'Modes' },
+  { id: 'seat-balance', label: 'Seat balance' },
   { id: 'layout', label: 'Layout' },
   { id: 'headroom', label: 'Headroom' },
   { id: 'measured', label: 'Measured' },

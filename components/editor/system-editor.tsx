@@ -28,6 +28,7 @@ const loadingPanel = () => (
 );
 const TimingPanel = dynamic(() => import('@/components/timing/timing-panel').then((m) => m.TimingPanel), { loading: loadingPanel });
 const ModesPanel = dynamic(() => import('@/components/modes/modes-panel').then((m) => m.ModesPanel), { loading: loadingPanel });
+const SeatBalancePanel = dynamic(() => import('@/components/seat-balance/seat-balance-panel').then((m) => m.SeatBalancePanel), { loading: loadingPanel });
 const LayoutPanel = dynamic(() => import('@/components/layout/layout-panel').then((m) => m.LayoutPanel), { loading: loadingPanel });
 const HeadroomPanel = dynamic(() => import('@/components/headroom/headroom-panel').then((m) => m.HeadroomPanel), { loading: loadingPanel });
 const MeasuredPanel = dynamic(() => import('@/components/measured/measured-panel').then((m) => m.MeasuredPanel), { loading: loadingPanel });
@@ -50,7 +51,7 @@ interface Props {
   signedIn: boolean;
 }
 
-/** The System editor: one document behind five panels; anonymous work lives in the URL. */
+/** The System editor: one document behind its panels; anonymous work lives in the URL. */
 export function SystemEditor({ saved, signedIn }: Props) {
   const [doc, setDoc] = useState<SystemDocument>(() => saved?.document ?? newSystemDocument());
   const [name, setName] = useState(saved?.name ?? 'Untitled System');
@@ -85,7 +86,7 @@ export function SystemEditor({ saved, signedIn }: Props) {
   const blocking = panel === 'blend' || panel === 'timing' || panel === 'headroom' ? outsideForMlpGeometry(doc, outside) : [];
   const signInToSave = useMemo(() => (signedIn || saved ? null : signInToSaveHref({ doc, name, panel })), [signedIn, saved, doc, name, panel]);
 
-  const ActivePanel = { blend: BlendPanel, timing: TimingPanel, modes: ModesPanel, layout: LayoutPanel, headroom: HeadroomPanel, measured: MeasuredPanel }[panel];
+  const ActivePanel = { blend: BlendPanel, timing: TimingPanel, modes: ModesPanel, 'seat-balance': SeatBalancePanel, layout: LayoutPanel, headroom: HeadroomPanel, measured: MeasuredPanel }[panel];
 
   return (
     <SystemContext.Provider value={value}>

@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { computeSettingsSheet, SETTING_DECIMALS } from '@/lib/system-model/settings-sheet';
 import { formatLength } from '@/lib/units';
 import type { SystemDocument } from '@/lib/validations/system';
+import { SeatBalanceSection } from './seat-balance-section';
 
 interface Props {
   name: string;
@@ -205,6 +206,8 @@ export function SettingsSheet({ name, revision, revisionNote, savedAt, savedBy, 
           <p className="text-sm text-ink-soft">No subwoofers in this System.</p>
         )}
       </section>
+
+      <SeatBalanceSection sheet={sheet} />
 
       <section aria-labelledby="sheet-modes" className="sheet-block">
         <h2 id="sheet-modes" className="mb-2 text-base font-semibold">

@@ -1,7 +1,7 @@
 'use client';
 
 import { useId, useMemo, useState } from 'react';
-import { formatHzReadout, formatNumber, subTraceStyle } from '@/components/charts';
+import { formatHzReadout, formatNumber, formatSigned, subTraceStyle } from '@/components/charts';
 import { slopeShortName } from '@/components/blend/slope-select';
 import { MainChannelSelect } from '@/components/system/main-channel-select';
 import { useSystem } from '@/components/system/system-context';
@@ -66,6 +66,10 @@ export function TimingPanel() {
                 <NumberField label="Into room (y)" length units={units} value={s.yM} min={0} max={doc.room.lengthM} step={0.05} digits={2} disabled={readOnly} onChange={(v) => setSub(k, { yM: v })} testId={`timing-sub-${k}-y`} />
               </div>
               <DistanceField label="Distance set on the processor" doc={doc} item={s} units={units} disabled={readOnly} error={fieldError(error, `subs.${k}.distanceM`)} onOverride={(m) => setSub(k, { distanceOverrideM: m })} testId={`timing-sub-${k}-distance`} />
+              <p className="num text-xs text-ink-soft">
+                Own delay <span data-testid={`timing-sub-${k}-own-delay`}>{formatNumber(s.delayMs, 2)} ms</span> · gain <span data-testid={`timing-sub-${k}-gain`}>{formatSigned(s.gainDb, 'dB')}</span> ·{' '}
+                <span data-testid={`timing-sub-${k}-polarity`}>{s.invert ? 'inverted' : 'normal'}</span> polarity <span className="font-sans">(distance alignment is added to the delay)</span>
+              </p>
             </fieldset>
           ))}
           <p className="text-xs text-ink-faint">
@@ -116,6 +120,11 @@ export function TimingPanel() {
                 ))}
               </div>
 
+              {data.subs.length >= 2 ? (
+                <p className="text-xs text-ink-soft" data-testid="timing-seat-balance-note">
+                  Moving one sub&apos;s delay or polarity alone changes how alike the seats sound (see Seat balance); shifting every sub&apos;s delay by the same amount keeps it. The all-subs advice may move a sub on its own, so check Seat balance after applying it.
+                </p>
+              ) : null}
               {data.group ? (
                 <AdviceCard
                   title={

@@ -3,15 +3,28 @@
  * (`computeSettingsSheet`, computed from the document: no request and nothing written back), and its CSV export.
  * Distances, delays, trims and sub gains are `systemChannelSettings` — the one definition Layout, the exports and the
  * API share, already rounded (0.01 m, 0.01 ms, 0.1 dB); the room summary calls dsp/ (roomModes,
- * schroederFrequencyHz). No mathematics of its own.
+ * schroederFrequencyHz). The seat-to-seat spread is seatBalanceStateFromDocument's (Seat balance's own measure, on the
+ * Modes tab's grid). No mathematics of its own.
  */
 import { roomModes, schroederFrequencyHz, SETTING_RESOLUTION, type ModeKind } from '@/dsp';
 import type { Slope, SystemDocument } from '@/lib/validations/system';
 import { systemChannelSettings } from './channel-settings';
 import { mlpSeat, profileById } from './geometry';
+import type { SeatBalanceSummary } from './seat-balance';
+import { seatBalanceStateFromDocument } from './seat-balance-document';
 
 /** Decimals each setting is rounded to (and shown and exported with): delay 2, trim and gain 1, distance 2. */
 export const SETTING_DECIMALS = { delayMs: 2, trimDb: 1, distanceM: 2 } as const satisfies Record<keyof typeof SETTING_RESOLUTION, number>;
+
+/** Decimals of the seat-to-seat spread figures on the sheet and in its CSV (as Seat balance rounds them). */
+export const SPREAD_DECIMALS = { meanSpreadDb: 2, maxSpreadDb: 2, maxSpreadHz: 1, meanLevelDb: 2 } as const satisfies Record<keyof SeatBalanceSummary, number>;
+
+/** The seat-to-seat spread over the band with every sub neutral (own delay 0 ms, 0 dB, normal; distance alignment kept) and with the System's settings. */
+interface SheetSeatBalance {
+  band: { startHz: number; stopHz: number };
+  neutral: SeatBalanceSummary;
+  system: SeatBalanceSummary;
+}
 
 export interface SheetChannel {
   id: string;
@@ -73,6 +86,8 @@ export interface SettingsSheet {
   /** The lowest axial mode along each dimension. */
   firstAxialHz: { length: number | null; width: number | null; height: number | null };
   notes: string;
+  /** Null when Seat balance cannot measure the System (no sub, fewer than two seats, a position outside the room). */
+  seatBalance: SheetSeatBalance | null;
 }
 
 /** "Linkwitz–Riley 4th order (24 dB/oct)". */
@@ -131,7 +146,13 @@ export function computeSettingsSheet(doc: SystemDocument): SettingsSheet {
     firstModes: modes.slice(0, 12).map((m) => ({ frequencyHz: m.frequencyHz, indices: m.indices, kind: m.kind })),
     firstAxialHz: { length: firstAxial(0), width: firstAxial(1), height: firstAxial(2) },
     notes: doc.notes,
+    seatBalance: seatBalanceOf(doc),
   };
+}
+
+function seatBalanceOf(doc: SystemDocument): SheetSeatBalance | null {
+  const state = seatBalanceStateFromDocument(doc);
+  return state ? { band: state.band, neutral: state.before, system: state.present } : null;
 }
 
 /** A setting written with the decimals it was rounded to ("0.90", "-4.4"): a number, never a formula. */
@@ -141,16 +162,25 @@ class Setting {
 const setting = (x: number, decimals: number) => new Setting(x.toFixed(decimals));
 
 /**
- * One CSV row per channel and sub, with units in the column names (RFC 4180 quoting). Distances, delays, trims and
- * gains are the sheet's (systemChannelSettings), written with the decimals they were rounded to.
+ * One CSV row per channel and sub, then the seat-to-seat spread (all subs neutral, and with the System's settings), with
+ * units in the column names (RFC 4180 quoting). Distances, delays, trims and gains are the sheet's
+ * (systemChannelSettings), written with the decimals they were rounded to; the spread rows are the sheet's too.
  */
 export function settingsSheetCsv(name: string, revision: number, doc: SystemDocument): string {
   const sheet = computeSettingsSheet(doc);
   const d = SETTING_DECIMALS;
-  const header = ['system', 'revision', 'kind', 'id', 'label', 'profile', 'distanceM', 'distanceSource', 'delayMs', 'trimDb', 'gainDb', 'polarity', 'crossoverHz', 'filter', 'slope', 'count'];
+  const header = ['system', 'revision', 'kind', 'id', 'label', 'profile', 'distanceM', 'distanceSource', 'delayMs', 'trimDb', 'gainDb', 'polarity', 'crossoverHz', 'filter', 'slope', 'count', 'ownDelayMs', 'bandHz', 'meanSpreadDb', 'maxSpreadDb', 'maxSpreadHz', 'meanLevelDb'];
+  const noSpread = ['', '', '', '', ''];
+  const sb = sheet.seatBalance;
+  const spread = (id: string, label: string, m: SeatBalanceSummary) => {
+    const band = sb ? `${sb.band.startHz}-${sb.band.stopHz}` : '';
+    const p = SPREAD_DECIMALS;
+    return [name, revision, 'seat-spread', id, label, '', '', '', '', '', '', '', '', '', '', '', '', band, setting(m.meanSpreadDb, p.meanSpreadDb), setting(m.maxSpreadDb, p.maxSpreadDb), setting(m.maxSpreadHz, p.maxSpreadHz), setting(m.meanLevelDb, p.meanLevelDb)];
+  };
   const rows: (string | number | Setting)[][] = [
-    ...sheet.channels.map((c) => [name, revision, 'channel', c.id, c.channel, c.profileName, setting(c.distanceM, d.distanceM), c.distanceSource, setting(c.delayMs, d.delayMs), setting(c.trimDb, d.trimDb), '', 'normal', c.highpassHz, 'highpass', c.slope, 1]),
-    ...sheet.subs.map((s) => [name, revision, 'sub', s.id, s.name, s.profileName, setting(s.distanceM, d.distanceM), s.distanceSource, setting(s.delayMs, d.delayMs), '', setting(s.gainDb, d.trimDb), s.polarity, s.lowpassHz, 'lowpass', s.slope, s.count]),
+    ...sheet.channels.map((c) => [name, revision, 'channel', c.id, c.channel, c.profileName, setting(c.distanceM, d.distanceM), c.distanceSource, setting(c.delayMs, d.delayMs), setting(c.trimDb, d.trimDb), '', 'normal', c.highpassHz, 'highpass', c.slope, 1, '', ...noSpread]),
+    ...sheet.subs.map((s) => [name, revision, 'sub', s.id, s.name, s.profileName, setting(s.distanceM, d.distanceM), s.distanceSource, setting(s.delayMs, d.delayMs), '', setting(s.gainDb, d.trimDb), s.polarity, s.lowpassHz, 'lowpass', s.slope, s.count, setting(s.ownDelayMs, d.delayMs), ...noSpread]),
+    ...(sb ? [spread('neutral', 'every sub own delay 0 ms, 0 dB, normal', sb.neutral), spread('system', 'the System settings', sb.system)] : []),
   ];
   const cell = (v: string | number | Setting) => {
     const s = v instanceof Setting ? v.text : String(v);

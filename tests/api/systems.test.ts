@@ -272,7 +272,7 @@ describe('the Library list, soft delete and restore', () => {
 });
 
 describe('downloads', () => {
-  it('JSON is the document with its name and revision; CSV is the Settings sheet, one row per channel and sub', async () => {
+  it('JSON is the document with its name and revision; CSV is the Settings sheet, one row per channel and sub, then the seat-to-seat spread', async () => {
     const team = await makeTeam('download');
     const s = await createSystem(team, 'Juniper, "quoted" (invented)', juniperLaneDocument());
     const j = await team.clients.viewer.get(`/api/v1/systems/${s.id}/export?format=json`);
@@ -281,9 +281,11 @@ describe('downloads', () => {
     const c = await team.clients.viewer.get(`/api/v1/systems/${s.id}/export?format=csv`);
     expect(c.headers.get('content-type')).toMatch(/text\/csv/);
     const lines = c.text.trim().split('\r\n');
-    expect(lines[0]).toBe('system,revision,kind,id,label,profile,distanceM,distanceSource,delayMs,trimDb,gainDb,polarity,crossoverHz,filter,slope,count');
+    expect(lines[0]).toBe('system,revision,kind,id,label,profile,distanceM,distanceSource,delayMs,trimDb,gainDb,polarity,crossoverHz,filter,slope,count,ownDelayMs,bandHz,meanSpreadDb,maxSpreadDb,maxSpreadHz,meanLevelDb');
     const doc = juniperLaneDocument();
-    expect(lines).toHaveLength(1 + doc.speakers.length + doc.subs.length);
+    // Then the seat-to-seat spread, all subs neutral and with the System's settings.
+    expect(lines).toHaveLength(1 + doc.speakers.length + doc.subs.length + 2);
+    expect(lines.slice(-2).map((l) => l.match(/^"[^"]*(?:""[^"]*)*",1,([a-z-]+),([a-z]+),/)?.slice(1))).toEqual([['seat-spread', 'neutral'], ['seat-spread', 'system']]);
     expect(lines[1]).toMatch(/^"Juniper, ""quoted"" \(invented\)",1,channel,l,L,/);
     expect((await team.clients.viewer.get(`/api/v1/systems/${s.id}/export?format=pdf`)).status).toBe(400);
   }, 120_000);
