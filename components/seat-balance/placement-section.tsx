@@ -24,7 +24,7 @@ export function PlacementSection({ placements, room, seats, subs, presentSpreadD
         {placements.capped
           ? `Too many combinations to rank them all: ${placements.rankedCombinations} of the ${placements.totalCombinations} were ranked (a fixed sample), so a better one may exist.`
           : `All ${placements.totalCombinations} combinations of ${placements.candidates.length} candidate spots were ranked, each with its own balanced settings.`}{' '}
-        Moving subs is building work: listen and measure at the new spots before you commit.
+        Moving subs is building work: listen and measure at the new spots before you commit. The settings beside each combination are for choosing; once the subs are moved on Layout, run Seat balance again: the processor’s distance alignment changes with them.
       </p>
       <div className="grid gap-4 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
         <PlacementPlan room={room} seats={seats} subs={subs} placements={placements} shown={3} />
