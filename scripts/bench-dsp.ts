@@ -3,6 +3,7 @@
 // (process.cpuUsage over the same calls; on a shared machine it excludes time spent waiting for a core). The same measurements run twice: under tsx (this
 // process) and, when esbuild is installed, as one bundled ES module under plain node (how production code runs).
 // When python3 with scipy is present, the same two-way blend is timed through scipy.signal.freqs + numpy.
+// Seat balance (scripts/lib/seat-balance-bench.ts) runs last, under tsx only: its searches take seconds, not µs.
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { loadavg, tmpdir } from 'node:os';
@@ -24,6 +25,7 @@ import {
   type SystemSource,
   type ResponseCurves,
 } from '../dsp';
+import { printSeatBalanceBench } from './lib/seat-balance-bench';
 
 interface Figures {
   blendAll: Timing;
@@ -217,4 +219,5 @@ if (process.env.SEAMLINE_BENCH_CHILD === '1') {
   console.log(`    roomModes + modalTransfers (all pairs in one call):           ${cell((f) => f.modesBatch)}   target ≤ 20 ms`);
   console.log(`    roomModes + 12 × modalTransfer:                               ${cell((f) => f.modesPairwise)}`);
   if (!bundled) console.log('  (bundled run skipped: node_modules/.bin/esbuild not found or failed)');
+  printSeatBalanceBench();
 }
