@@ -1,6 +1,6 @@
 import { LN_POWER_TO_DB } from '../internal/angles';
 import { sinCos } from '../internal/fast-math';
-import { assertFinite, assertNonNegative, assertPositive, positiveFrequencies } from '../internal/guards';
+import { assertFinite, assertIntegerInRange, assertNonNegative, assertPositive, positiveFrequencies } from '../internal/guards';
 import type { SeatBalanceMeasures, SubSetting } from './seat-balance-types';
 
 /** One sub → seat transfer function on the evaluator's grid (complex pressure, any consistent unit). */
@@ -38,6 +38,11 @@ export interface SeatBalanceEvaluator {
   readonly maxOutputLossDb: number;
   /** Every measure of `settings` (one per sub). */
   measure(settings: readonly SubSetting[]): SeatBalanceMeasures;
+  /**
+   * The same problem on every `stride`-th point of the band (a coarser, cheaper measure for a global search to find
+   * the right valley in; the answer is always measured on the full band).
+   */
+  coarse(stride: number): SeatBalanceEvaluator;
   /** The objective and level only, from packed settings (delays ms, gains dB, inverted 0/1), into `out`. */
   score(delaysMs: Float64Array, gainsDb: Float64Array, inverts: Uint8Array, out: SeatBalanceScore): void;
 }
@@ -224,5 +229,19 @@ export function seatBalanceEvaluator(options: SeatBalanceEvaluatorOptions): Seat
     };
   };
 
-  return { subCount, seatCount, bandHz, maxOutputLossDb, measure, score };
+  const coarse = (stride: number): SeatBalanceEvaluator => {
+    assertIntegerInRange('stride', stride, 1, Math.max(1, nB));
+    const keep = band.filter((_, b) => b % stride === 0);
+    const pick = (a: ArrayLike<number>) => keep.map((i) => a[i] as number);
+    return seatBalanceEvaluator({
+      frequencyHz: pick(f),
+      transfers: transfers.map((row) => row.map((t) => ({ re: pick(t.re), im: pick(t.im) }))),
+      startHz,
+      stopHz,
+      ...(options.seatWeights ? { seatWeights: options.seatWeights } : {}),
+      maxOutputLossDb,
+    });
+  };
+
+  return { subCount, seatCount, bandHz, maxOutputLossDb, measure, score, coarse };
 }
