@@ -5,6 +5,7 @@
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { defaultSubCandidates, logFrequencyGridHz, modalTransfers, optimizeSubSettings, seatBalanceEvaluator, subPlacementSearch } from '../../dsp';
+import { placementEvaluations, searchEvaluations } from '../../lib/system-model/seat-balance-work';
 
 /** The fixture's "Four-by-eight theater (invented)": subs at the four wall midpoints, two rows of four seats. */
 const problem = {
@@ -66,17 +67,18 @@ export function printSeatBalanceBench(runs = 3): void {
   const { evaluator } = evaluatorFor(problem.subs);
   const setupMs = performance.now() - t0;
   const times: number[] = [];
-  let result = optimizeSubSettings({ evaluator, seed: 1 });
+  const maxEvaluations = searchEvaluations(problem.subs.length, problem.seats.length, evaluator.bandHz.length);
+  let result = optimizeSubSettings({ evaluator, seed: 1, maxEvaluations });
   for (let k = 0; k < runs; k++) {
     const t = performance.now();
-    result = optimizeSubSettings({ evaluator, seed: 1 });
+    result = optimizeSubSettings({ evaluator, seed: 1, maxEvaluations });
     times.push(performance.now() - t);
   }
   const oursMs = median(times);
   console.log(`  Seat balance, ${problem.subs.length} subs × ${problem.seats.length} seats, ${band.startHz}–${band.stopHz} Hz at 48 points/octave (${evaluator.bandHz.length} points), per-sub delay, gain, polarity:`);
   console.log(`    modal sums + evaluator set-up:                                ${fmtS(setupMs)}`);
   console.log(
-    `    optimizeSubSettings (seed 1, default budget), median of ${runs}: ${fmtS(oursMs)}, ${result.evaluated} evaluations, ${((oursMs * 1000) / result.evaluated).toFixed(1)} µs each → ` +
+    `    optimizeSubSettings (seed 1, the API's budget), median of ${runs}: ${fmtS(oursMs)}, ${result.evaluated} evaluations, ${((oursMs * 1000) / result.evaluated).toFixed(1)} µs each → ` +
       `mean spread ${result.before.objectiveDb.toFixed(3)} → ${result.after.objectiveDb.toFixed(3)} dB, level ${result.after.meanLevelDb.toFixed(2)} dB`,
   );
 
@@ -84,11 +86,14 @@ export function printSeatBalanceBench(runs = 3): void {
   const { transfers: candidateTransfers } = evaluatorFor(candidates.map((c) => c.positionM));
   let lastTenth = -1;
   const tp = performance.now();
+  // The budgets POST /api/v1/seat-balance and the panel use for this size.
+  const budget = placementEvaluations(4, problem.seats.length, evaluator.bandHz.length, 70);
   const placement = subPlacementSearch({
     frequencyHz: grid,
     candidateTransfers,
     count: 4,
     ...band,
+    ...(budget ? { quickEvaluations: budget.quick, finalEvaluations: budget.final } : {}),
     onProgress: (done, total) => {
       const tenth = Math.floor((10 * done) / total);
       if (tenth === lastTenth) return;

@@ -77,11 +77,12 @@ describe('seatBalanceEvaluator: the objective is the mean over the band of loude
         assertInDelta(m.meanLevelDb, o.meanLevelDb, 1e-9, 'meanLevelDb');
         assertInDelta(m.objectiveDb, o.meanSpreadDb, 1e-9, 'objectiveDb (equal weights)');
         expect(m.withinFloor).toBe(o.meanLevelDb >= -3);
-        // score() is the same objective and level, packed.
+        // score() is the same objective and level, packed; its phasors come from an interpolated sine table (error
+        // below 3e-7 of the amplitude, so well under 1e-4 dB here): the search's measure, while answers use measure().
         const out = { objectiveDb: 0, meanLevelDb: 0 };
         ev.score(Float64Array.from(settings, (s) => s.delayMs), Float64Array.from(settings, (s) => s.gainDb), Uint8Array.from(settings, (s) => (s.invert ? 1 : 0)), out);
-        assertInDelta(out.objectiveDb, o.meanSpreadDb, 1e-9, 'score objective');
-        assertInDelta(out.meanLevelDb, o.meanLevelDb, 1e-9, 'score level');
+        assertInDelta(out.objectiveDb, o.meanSpreadDb, 1e-4, 'score objective');
+        assertInDelta(out.meanLevelDb, o.meanLevelDb, 1e-4, 'score level');
       }),
       { numRuns: 25, seed: 15 },
     );
