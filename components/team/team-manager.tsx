@@ -37,8 +37,8 @@ export function TeamManager({ userId }: { userId: string }) {
   if (!workspaces.data) return <p role="status">Loading workspaces…</p>;
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[260px_1fr]">
-      <aside className="flex flex-col gap-2">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[260px_minmax(0,1fr)]">
+      <aside className="flex min-w-0 flex-col gap-2">
         <h2 className="text-sm font-semibold uppercase tracking-wide text-ink-faint">Workspaces</h2>
         <ul className="flex flex-col gap-1">
           {list.map((w) => (
@@ -47,7 +47,7 @@ export function TeamManager({ userId }: { userId: string }) {
                 type="button"
                 aria-current={w.id === current?.id ? 'true' : undefined}
                 onClick={() => setSelected(w.id)}
-                className={`w-full rounded-md px-3 py-2 text-left text-sm ${w.id === current?.id ? 'bg-white font-semibold shadow-sm' : 'hover:bg-white'}`}
+                className={`w-full rounded-md px-3 py-2 text-left text-sm wrap-anywhere ${w.id === current?.id ? 'bg-white font-semibold shadow-sm' : 'hover:bg-white'}`}
               >
                 {w.name}
                 <span className="block text-xs font-normal text-ink-faint">
@@ -75,7 +75,7 @@ export function TeamManager({ userId }: { userId: string }) {
       </aside>
 
       {current ? (
-        <section className="flex flex-col gap-5">
+        <section className="flex min-w-0 flex-col gap-5">
           <div>
             <h1 className="text-2xl font-semibold">{current.name}</h1>
             <p className="text-sm text-ink-soft">Your role: {current.role}. Owners manage members; editors create and change Systems; viewers read.</p>
