@@ -153,7 +153,8 @@ export function optimizeSubSettings(options: OptimizeSubSettingsOptions): Optimi
   let bestFit = fitness(best);
   if (n > 1 && budget > 1) {
     // Independent restarts, each a global stage and a local one: the landscape has many valleys of similar depth.
-    const restarts = Math.max(1, Math.min(3, Math.floor(budget / 2000)));
+    // With the coarse stage three restarts reach far enough; on the full band (two subs) four shorter ones do.
+    const restarts = Math.max(1, Math.min(stride > 1 ? 3 : 4, Math.floor(budget / 2000)));
     const per = Math.floor(budget / restarts);
     for (let r = 0; r < restarts; r++) {
       const found = search(work + per);
@@ -224,7 +225,7 @@ export function optimizeSubSettings(options: OptimizeSubSettingsOptions): Optimi
     const startAt = work;
     // Global stage: differential evolution over the box, seeded with the neutral settings and the starts.
     const population = Math.min(64, Math.max(16, 8 * dims));
-    const globalBudget = startAt + Math.floor((stopAt - startAt) * 0.7);
+    const globalBudget = startAt + Math.floor((stopAt - startAt) * (stride > 1 ? 0.7 : 0.6));
     const xs: Float64Array[] = [];
     const fits: number[] = [];
     const seeds = [fromSettings(neutral), ...starts];
