@@ -30,11 +30,12 @@ export function BalancePlots({ answer }: { answer: SeatBalanceAnswer }) {
     ...(answer.spread.presentDb ? [{ id: 'present', label: 'Present', values: answer.spread.presentDb, ...traceStyles.sub }] : []),
     { id: 'after', label: 'Recommended', values: answer.spread.afterDb, ...traceStyles.sum },
   ];
+  const measured = answer.source === 'measured';
   const shared = { frequencyHz: answer.frequencyHz, minHz: answer.band.startHz, maxHz: answer.band.stopHz, cursorHz, onCursorHz: setCursorHz, yAxisChars: 4 };
   return (
     <section aria-labelledby="sb-plots" className="flex min-w-0 flex-col gap-3">
       <h3 id="sb-plots" className="text-base font-semibold">
-        The seats’ bass
+        The seats’ bass, {measured ? 'measured at the seats' : 'model'}
       </h3>
       <fieldset className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm">
         <legend className="sr-only">Settings shown at the seats</legend>
@@ -45,8 +46,12 @@ export function BalancePlots({ answer }: { answer: SeatBalanceAnswer }) {
         ))}
       </fieldset>
       <FrequencyPlot
-        title="Level at each seat"
-        description="Predicted level of the subs at each seat by modal summation; 0 dB is the seats' mean level with every sub neutral."
+        title={measured ? 'Level at each seat, measured at the seats' : 'Level at each seat, model'}
+        description={
+          measured
+            ? "Level of the subs at each seat from the stored measurements, with the settings applied to them; 0 dB is the seats' mean level with every sub neutral."
+            : "Predicted level of the subs at each seat by modal summation; 0 dB is the seats' mean level with every sub neutral."
+        }
         quantity="magnitude"
         yLabel="Level re before"
         yDomain={yDomain}
@@ -55,8 +60,8 @@ export function BalancePlots({ answer }: { answer: SeatBalanceAnswer }) {
         {...shared}
         aspect={0.42}
       />
-      <h4 className="text-sm font-semibold">Seat-to-seat spread (loudest − quietest seat)</h4>
-      <FrequencyPlot title="Seat-to-seat spread before, with the present settings and recommended" quantity="custom" yLabel="Spread" yUnit="dB" traces={spreadTraces} {...shared} aspect={0.3} />
+      <h4 className="text-sm font-semibold">Seat-to-seat spread (loudest − quietest seat), {measured ? 'measured at the seats' : 'model'}</h4>
+      <FrequencyPlot title={`Seat-to-seat spread before, with the present settings and recommended (${measured ? 'measured at the seats' : 'model'})`} quantity="custom" yLabel="Spread" yUnit="dB" traces={spreadTraces} {...shared} aspect={0.3} />
     </section>
   );
 }

@@ -39,22 +39,24 @@ function Card({ title, meaning, s, testId, strong }: { title: string; meaning: s
 /** The measures before, now and recommended, what was minimised, the limits, and how long the search took. */
 export function BalanceSummary({ answer, elapsedMs }: { answer: SeatBalanceAnswer; elapsedMs: number }) {
   const band = `${formatHzReadout(answer.band.startHz)} to ${formatHzReadout(answer.band.stopHz)}`;
+  const measured = answer.source === 'measured';
   return (
     <section aria-labelledby="sb-summary" className="flex flex-col gap-3">
       <h3 id="sb-summary" className="text-base font-semibold">
-        Seat-to-seat spread, {band}
+        Seat-to-seat spread, {band}, {measured ? 'measured at the seats' : 'model'}
       </h3>
       <div className="grid gap-3 sm:grid-cols-3">
         {CARDS.map((c) => {
           const s = answer[c.key];
-          return s ? <Card key={c.key} title={c.title} meaning={c.meaning} s={s} testId={`sb-${c.key}`} strong={c.key === 'after'} /> : null;
+          const meaning = measured && c.key === 'before' ? 'the files as measured: every sub at 0 ms, 0 dB, normal polarity in the processor' : c.meaning;
+          return s ? <Card key={c.key} title={c.title} meaning={meaning} s={s} testId={`sb-${c.key}`} strong={c.key === 'after'} /> : null;
         })}
       </div>
       <p className="text-sm" data-testid="sb-objective">
         What is made small: the mean seat-to-seat spread from {band} — at each frequency the loudest seat minus the quietest, averaged over the band. {limitsText(answer.limits)}
       </p>
       <p className="num text-xs text-ink-soft" data-testid="sb-run-stats" data-elapsed-ms={Math.round(elapsedMs)} data-evaluated={answer.evaluated}>
-        Took {formatNumber(elapsedMs / 1000, 1)} s in this browser; {answer.evaluated.toLocaleString('en-US')} candidate settings evaluated.
+        Took {formatNumber(elapsedMs / 1000, 1)} s {measured ? 'on the server' : 'in this browser'}; {answer.evaluated.toLocaleString('en-US')} candidate settings evaluated.
       </p>
     </section>
   );

@@ -18,10 +18,12 @@ interface LimitsFormProps {
   /** Messages by request path ("limits.maxDelayMs", "placement.count") from the request schema. */
   errors: ReadonlyMap<string, string>;
   disabled: boolean;
+  /** When set, positions cannot be ranked (a measured run): this says why, in place of the option. */
+  placementNote?: string | null;
 }
 
 /** The box the search stays in, and whether to rank positions too. Every value is checked by the request's schema. */
-export function LimitsForm({ limits, onLimits, placement, onPlacement, maxCount, errors, disabled }: LimitsFormProps) {
+export function LimitsForm({ limits, onLimits, placement, onPlacement, maxCount, errors, disabled, placementNote = null }: LimitsFormProps) {
   const set = (patch: Partial<SeatBalanceLimits>) => onLimits({ ...limits, ...patch });
   return (
     <form className="flex flex-col gap-3" aria-label="Seat balance limits" onSubmit={(e) => e.preventDefault()}>
@@ -51,11 +53,15 @@ export function LimitsForm({ limits, onLimits, placement, onPlacement, maxCount,
       </label>
       <fieldset className="flex flex-col gap-2 rounded-md border border-line bg-white p-3">
         <legend className="px-1 text-sm font-medium">Positions</legend>
-        <label className="inline-flex items-center gap-2 text-sm">
-          <input type="checkbox" checked={placement.enabled} disabled={disabled} onChange={(e) => onPlacement({ ...placement, enabled: e.target.checked })} className="accent-mains" data-testid="sb-rank-positions" />
-          Also rank positions
-        </label>
-        {placement.enabled ? (
+        {placementNote ? (
+          <p className="text-sm text-ink-soft">{placementNote}</p>
+        ) : (
+          <label className="inline-flex items-center gap-2 text-sm">
+            <input type="checkbox" checked={placement.enabled} disabled={disabled} onChange={(e) => onPlacement({ ...placement, enabled: e.target.checked })} className="accent-mains" data-testid="sb-rank-positions" />
+            Also rank positions
+          </label>
+        )}
+        {placement.enabled && !placementNote ? (
           <NumberField
             label="Subs to place"
             value={placement.count}

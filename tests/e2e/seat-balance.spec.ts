@@ -142,3 +142,65 @@ test('Seat balance with an answer at 390 px: nothing scrolls sideways, and axe f
   expect(widths.scroll, `page ${widths.scroll} px wide in a ${widths.client} px window`).toBeLessThanOrEqual(widths.client);
   expect(await seriousViolations(page, 'Seat balance with an answer', '[role=tabpanel]')).toEqual([]);
 });
+
+test('Seat balance from measurements on a copy of the demo System: what is missing, then the files of the workspace, a measured answer, Apply', async ({ page }) => {
+  test.setTimeout(240_000);
+  await signIn(page);
+  await page.getByRole('link', { name: 'Juniper Lane screening room' }).first().click();
+  await page.waitForURL(/\/systems\/[^/?]+/, { timeout: 60_000 });
+  const demoId = new URL(page.url()).pathname.split('/')[2];
+  const copy = await page.request.post(`/api/v1/systems/${demoId}/duplicate`, { data: { name: 'Seat balance measured test copy (invented)' } });
+  expect(copy.status()).toBe(201);
+  const copyId = ((await copy.json()) as { id: string }).id;
+  try {
+    await page.goto(`/systems/${copyId}`);
+    await openSeatBalance(page);
+    await page.getByTestId('sb-source-measured').check();
+    // The demo's invented files were uploaded for the original System: the copy has none of its own.
+    await expect(page.getByTestId('sb-measured-reason')).toContainText('no measurement', { timeout: 60_000 });
+    const pairs = page.getByTestId('sb-measured-pairs');
+    await expect(pairs.locator('tbody tr')).toHaveCount(2);
+    await expect(pairs).toContainText('Sub front left');
+    await expect(pairs).toContainText('Row 1 centre (MLP)');
+    await expect(pairs).toContainText('missing');
+    expect(await seriousViolations(page, 'Seat balance from measurements, files missing', '[role=tabpanel]')).toEqual([]);
+
+    await page.getByTestId('sb-measured-scope').selectOption('workspace');
+    await page.getByTestId('sb-run').click();
+    const progress = page.getByRole('progressbar', { name: 'Seat balance progress' });
+    await expect(progress).toBeVisible();
+    await expect(page.getByTestId('sb-after-mean')).toBeVisible({ timeout: 180_000 });
+    await expect(progress).toHaveCount(0);
+    await expect(page.getByRole('heading', { name: /Seat-to-seat spread, .*measured at the seats/ })).toBeVisible();
+    await expect(page.getByRole('heading', { name: /The seats’ bass, measured at the seats/ })).toBeVisible();
+    const presentDb = await read(page.getByTestId('sb-present-mean'));
+    const afterDb = await read(page.getByTestId('sb-after-mean'));
+    expect(afterDb, `recommended ${afterDb} dB against present ${presentDb} dB, measured`).toBeLessThan(presentDb);
+    await page.getByTestId('sb-measured-used').locator('summary').click();
+    await expect(page.getByTestId('sb-measured-used').locator('li')).toHaveCount(6);
+    await expect(page.getByTestId('sb-measured-used')).toContainText('Sub right wall alone (invented)');
+    expect(await seriousViolations(page, 'Seat balance from measurements, answer', '[role=tabpanel]')).toEqual([]);
+
+    // Apply on the copy (not saved): Timing shows each sub's delay, gain and polarity as the table gave them.
+    const recommended = [];
+    for (let k = 0; k < 2; k++) recommended.push({ delayMs: await read(page.getByTestId(`sb-rec-delay-${k}`)), gainDb: await read(page.getByTestId(`sb-rec-gain-${k}`)) });
+    await page.getByTestId('sb-apply').click();
+    await expect(page.getByText('Applied to the System')).toBeVisible();
+    await page.getByRole('tab', { name: 'Timing' }).click();
+    await expect(page.getByTestId('timing-arrivals')).toBeVisible({ timeout: 60_000 });
+    for (let k = 0; k < 2; k++) {
+      expect(await read(page.getByTestId(`timing-sub-${k}-own-delay`))).toBe(recommended[k]!.delayMs);
+      expect(await read(page.getByTestId(`timing-sub-${k}-gain`))).toBe(recommended[k]!.gainDb);
+    }
+  } finally {
+    expect((await page.request.delete(`/api/v1/systems/${copyId}`)).status()).toBe(200);
+  }
+});
+
+test('Seat balance from measurements needs a signed-in, saved System: the switch is disabled with the reason', async ({ page }) => {
+  await page.goto(`/systems/new?panel=seat-balance&s=${encodeDocument(juniperLaneDocument())}`);
+  await openSeatBalance(page);
+  await expect(page.getByTestId('sb-source-measured')).toBeDisabled();
+  await expect(page.getByTestId('sb-source-reason')).toContainText('Sign in');
+  await expect(page.getByTestId('sb-source-model')).toBeChecked();
+});
