@@ -157,7 +157,7 @@ export function MeasuredPanel({ shared }: { shared?: { items: SharedMeasurement[
       ) : null}
       {readOnly && !shared ? <Notice kind="info">You are a viewer of this System: you can look at the measurements and the prediction, but not change settings or upload.</Notice> : null}
 
-      <div className="grid gap-4 xl:grid-cols-[minmax(320px,400px)_1fr]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 xl:grid-cols-[minmax(320px,400px)_minmax(0,1fr)]">
         <div className="flex min-w-0 flex-col gap-4">
           {shared ? null : (
           <MeasurementUpload

@@ -85,7 +85,7 @@ export function PredictedBlend({ items, mainsId, subId, onPick, subTarget, onSub
     );
   }
 
-  const select = 'rounded-md border border-line bg-white px-2 py-1.5 text-sm font-normal text-ink';
+  const select = 'w-full min-w-0 max-w-full rounded-md border border-line bg-white px-2 py-1.5 text-sm font-normal text-ink';
   return (
     <section aria-labelledby="predict-title" className="flex flex-col gap-3 rounded-lg border border-line bg-white p-3" data-testid="predicted-blend">
       <div className="flex flex-wrap items-center justify-between gap-2">
@@ -94,7 +94,7 @@ export function PredictedBlend({ items, mainsId, subId, onPick, subTarget, onSub
         </h3>
         <ChartExportButtons svgRef={magRef} filename="measured-predicted-blend" subject="prediction" />
       </div>
-      <div className="grid gap-3 sm:grid-cols-3">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-3 sm:grid-cols-3">
         {(['mains', 'sub'] as const).map((which) => {
           const picked = which === 'mains' ? mainsId : subId;
           return (
