@@ -1,7 +1,7 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { ApiError, apiFetch } from '@/lib/client/api';
 import { REVISION_NOTE_MAX } from '@/lib/validations/library';
 import type { SystemDocument } from '@/lib/validations/system';
@@ -32,17 +32,26 @@ export function useSaveSystem({ saved, doc, name, panel }: SaveOptions) {
   const [saveState, setSaveState] = useState<SaveState>({ kind: 'idle' });
   // The optional note of the next save ("moved subs to the front corners"); kept until a save succeeds.
   const [note, setNote] = useState('');
+  const creating = useRef(false);
+  // Arriving at the created System (or another) ends the create: a later "save as new" may create again.
+  useEffect(() => {
+    creating.current = false;
+  }, [saved?.id]);
   const noteProblem = note.trim().length > REVISION_NOTE_MAX ? `The note is ${note.trim().length} characters; at most ${REVISION_NOTE_MAX}. Shorten it to save.` : null;
   const dirty = saved ? savedForm(name, doc) !== lastSaved : false;
 
   async function saveNew(asName: string) {
     if (noteProblem) return setSaveState({ kind: 'error', message: noteProblem });
+    // One create per editor: a second click (or call) before the first answers must not make a second System.
+    if (creating.current) return;
+    creating.current = true;
     setSaveState({ kind: 'saving' });
     try {
       const created = await apiFetch<{ id: string }>('/api/v1/systems', { method: 'POST', json: { name: asName, document: doc, ...(note.trim() ? { note } : {}) } });
       setSaveState({ kind: 'saved', at: Date.now() });
       router.push(`/systems/${created.id}?panel=${panel}`);
     } catch (e) {
+      creating.current = false;
       setSaveState({ kind: 'error', message: e instanceof ApiError ? e.message : SAVE_FAILED });
     }
   }

@@ -28,7 +28,8 @@ async function saveAndFindInLibrary(page: Page, name: string) {
   await page.waitForURL(/\/systems\/[0-9a-f-]{36}/, { timeout: 120_000 });
   await expect(page.getByLabel('System name')).toHaveValue(name);
   await page.goto('/library');
-  await expect(page.getByTestId('library-row').filter({ hasText: name })).toBeVisible({ timeout: 60_000 });
+  // Visible rows only: the router may keep an earlier Library page, hidden, beside the new one.
+  await expect(page.getByTestId('library-row').filter({ hasText: name, visible: true })).toBeVisible({ timeout: 60_000 });
 }
 
 test('Sign in to save: back in the editor with the same name, crossover and room; Save puts it in the Library', async ({ page }) => {
