@@ -11,6 +11,13 @@ export type { FilterFamily, FilterSpec, FilterShape, RolloffSpec, RolloffChain, 
 export { butterworthQ } from './filters/butterworth-q';
 export { filterSections, rolloffSections } from './filters/analog-sections';
 export { filterResponse, rolloffResponse, secondOrderSectionResponse } from './filters/filter-response';
+export { BIQUAD_CONVENTION, type Biquad, type EqFilter, type AllpassFilter, type CrossoverFilter, type ProcessorFilter } from './filters/filter-types';
+export { eqSection, eqSections, EQ_LIMITS } from './filters/eq-sections';
+export { SAMPLE_RATE_LIMITS_HZ, COMMON_SAMPLE_RATES_HZ } from './filters/sample-rate';
+export { analogSectionToBiquad, crossoverBiquads } from './filters/bilinear-transform';
+export { eqBiquad, allpassBiquad } from './filters/cookbook-biquads';
+export { biquadsResponse, isStableBiquad } from './filters/biquad-response';
+export { processorFilters, processorFilterBiquads, MAX_PROCESSOR_FILTERS, DEVIATION_FLOOR_DB, type ProcessorSection, type DigitalDeviation, type ProcessorFiltersResult } from './filters/processor-filters';
 
 export { SILENCE_DB, type PathSpec, type ResponseCurves, type BlendResult } from './blend/blend-types';
 export { blendResponse } from './blend/blend-response';

@@ -1,10 +1,15 @@
 import type { AnalogSection } from '../filters/filter-types';
 
 // A product of analog sections packed for fast evaluation: stride 3 = [kindCode, 1/ω0 (s/rad), 1/Q].
-// kindCode: 0 low-pass 1st order, 1 high-pass 1st, 2 low-pass 2nd, 3 high-pass 2nd.
+// kindCode: 0 low-pass 1st order, 1 high-pass 1st, 2 low-pass 2nd, 3 high-pass 2nd, 4 general 1st (own numerator),
+// 5 general 2nd (own numerator); a general section's numerator [n0, n1, n2] sits at the same index in `numerators`.
 export interface SectionPlan {
   /** Stride 3 = [kindCode, 1/ω0 (s/rad), 1/Q]. */
   readonly kernel: Float64Array;
+  /** Stride 3, the general sections' numerators [n0, n1, n2] (powers of s/ω0); zeros for the other kinds. */
+  readonly numerators: Float64Array;
+  /** True when any section is general (the evaluation then keeps a numerator product). */
+  readonly hasGeneral: boolean;
   readonly count: number;
   /** Linear gain including polarity sign. */
   readonly gain: number;
@@ -12,11 +17,13 @@ export interface SectionPlan {
   readonly numeratorPower: number;
 }
 
-const CODES: Record<AnalogSection['kind'], number> = { lowpass1: 0, highpass1: 1, lowpass2: 2, highpass2: 3 };
+const CODES: Record<AnalogSection['kind'], number> = { lowpass1: 0, highpass1: 1, lowpass2: 2, highpass2: 3, general1: 4, general2: 5 };
 
 export function compileSections(sections: readonly AnalogSection[], gain: number): SectionPlan {
   const kernel = new Float64Array(sections.length * 3);
+  const numerators = new Float64Array(sections.length * 3);
   let numeratorPower = 0;
+  let hasGeneral = false;
   sections.forEach((s, i) => {
     const code = CODES[s.kind];
     kernel[3 * i] = code;
@@ -24,8 +31,15 @@ export function compileSections(sections: readonly AnalogSection[], gain: number
     kernel[3 * i + 2] = 1 / s.q;
     if (code === 1) numeratorPower += 1;
     else if (code === 3) numeratorPower += 2;
+    else if (code >= 4) {
+      hasGeneral = true;
+      const [n0, n1, n2] = s.numerator ?? [1, 0, 0];
+      numerators[3 * i] = n0;
+      numerators[3 * i + 1] = n1;
+      numerators[3 * i + 2] = code === 4 ? 0 : n2;
+    }
   });
-  return { kernel, count: sections.length, gain, numeratorPower };
+  return { kernel, numerators, hasGeneral, count: sections.length, gain, numeratorPower };
 }
 
 /** Where {@link evaluatePlanOnGrid} writes: H and H′/H at each grid point (each array at least as long as the grid). */
@@ -39,10 +53,60 @@ export interface PlanValues {
 }
 
 /**
- * Evaluates a plan at every ω of a grid (rad/s): H = gain · j^m · ω^m/… / Π d(ω) and H′/H by the product rule
- * (H′ = dH/dω). The one evaluation of a product of analog sections in dsp/; allocates nothing.
+ * Evaluates a plan at every ω of a grid (rad/s): H = gain · j^m · ω^m/… · Π N(ω) / Π d(ω) and H′/H by the product
+ * rule (H′ = dH/dω). The one evaluation of a product of analog sections in dsp/; allocates nothing.
  */
 export function evaluatePlanOnGrid(plan: SectionPlan, omega: ArrayLike<number>, out: PlanValues): void {
+  evaluateDenominators(plan, omega, out);
+  if (plan.hasGeneral) applyNumerators(plan, omega, out);
+}
+
+/**
+ * Multiplies the general sections' numerators into H (and adds N′/N to H′/H): N = (n0 − n2·u²) + j·n1·u, u = ω/ω0.
+ * A numerator that vanishes (a perfect notch) leaves H′/H as the denominators gave it.
+ */
+function applyNumerators(plan: SectionPlan, omega: ArrayLike<number>, out: PlanValues): void {
+  const k = plan.kernel;
+  const nu = plan.numerators;
+  const kn = plan.count * 3;
+  const { re, im, dRe, dIm } = out;
+  for (let i = 0; i < omega.length; i++) {
+    const w = omega[i] as number;
+    let qr = 1;
+    let qi = 0;
+    let sr = 0; // Σ N′/N
+    let si = 0;
+    for (let j = 0; j < kn; j += 3) {
+      if ((k[j] as number) < 4) continue;
+      const iw = k[j + 1] as number;
+      const u = w * iw;
+      const n0 = nu[j] as number;
+      const n1 = nu[j + 1] as number;
+      const n2 = nu[j + 2] as number;
+      const nr = n0 - n2 * u * u;
+      const ni = n1 * u;
+      const dnr = -2 * n2 * u * iw;
+      const dni = n1 * iw;
+      const t = qr * nr - qi * ni;
+      qi = qr * ni + qi * nr;
+      qr = t;
+      const p = nr * nr + ni * ni;
+      if (p > 0) {
+        sr += (dnr * nr + dni * ni) / p;
+        si += (dni * nr - dnr * ni) / p;
+      }
+    }
+    const hr = re[i] as number;
+    const hi = im[i] as number;
+    re[i] = hr * qr - hi * qi;
+    im[i] = hr * qi + hi * qr;
+    dRe[i] = (dRe[i] as number) + sr;
+    dIm[i] = (dIm[i] as number) + si;
+  }
+}
+
+/** The crossover/roll-off part of a plan (every denominator, the j^m·ω^m numerators of high-passes) into out. */
+function evaluateDenominators(plan: SectionPlan, omega: ArrayLike<number>, out: PlanValues): void {
   const k = plan.kernel;
   const kn = plan.count * 3;
   const gain = plan.gain;
@@ -64,7 +128,7 @@ export function evaluatePlanOnGrid(plan: SectionPlan, omega: ArrayLike<number>, 
       let di: number;
       let ddr: number;
       let ddi: number;
-      if (code < 2) {
+      if (code < 2 || code === 4) {
         dr = 1;
         di = u;
         ddr = 0;

@@ -20,16 +20,27 @@ function sectionOracle(section: AnalogSection, omega: number): Complex {
       return one.div(one.add(x.div(section.q)).add(x.mul(x)));
     case 'highpass2':
       return x.mul(x).div(one.add(x.div(section.q)).add(x.mul(x)));
+    case 'general1': {
+      const [n0, n1] = section.numerator ?? [1, 0, 0];
+      return new Complex(n0, 0).add(x.mul(n1)).div(one.add(x));
+    }
+    case 'general2': {
+      const [n0, n1, n2] = section.numerator ?? [1, 0, 0];
+      return new Complex(n0, 0).add(x.mul(n1)).add(x.mul(x).mul(n2)).div(one.add(x.div(section.q)).add(x.mul(x)));
+    }
   }
 }
 
 const productOracle = (sections: readonly AnalogSection[], gain: number, omega: number): Complex =>
   sections.reduce((h, s) => h.mul(sectionOracle(s, omega)), new Complex(gain, 0));
 
+const coefficient = fc.double({ min: 0.05, max: 4, noNaN: true, noDefaultInfinity: true });
 const arbSection: fc.Arbitrary<AnalogSection> = fc.record({
-  kind: fc.constantFrom('lowpass1' as const, 'highpass1' as const, 'lowpass2' as const, 'highpass2' as const),
+  kind: fc.constantFrom('lowpass1' as const, 'highpass1' as const, 'lowpass2' as const, 'highpass2' as const, 'general1' as const, 'general2' as const),
   cornerHz: fc.double({ min: 15, max: 400, noNaN: true, noDefaultInfinity: true }),
   q: fc.double({ min: 0.3, max: 3, noNaN: true, noDefaultInfinity: true }),
+  // Used by the general kinds only (shelves, peaking and all-pass sections): a numerator without zeros on the jω axis.
+  numerator: fc.tuple(coefficient, coefficient, coefficient),
 });
 
 const omegaGrid = Float64Array.from({ length: 61 }, (_, i) => 2 * Math.PI * 5 * Math.pow(2, i / 8));
