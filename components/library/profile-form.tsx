@@ -20,6 +20,7 @@ export const EMPTY_PROFILE: ProfileFields = {
   ratedPowerW: 100,
   impedanceOhm: 8,
   notes: '',
+  voicingOptions: [],
 };
 
 interface Props {

@@ -19,8 +19,8 @@ function rolloffText(p: ProfileItem): string {
 }
 
 function fieldsOf(p: ProfileItem): ProfileFields {
-  const { name, kind, lowRolloff, highRolloff, sensitivityDb, sensitivityReference, ratedPowerW, impedanceOhm, notes } = p;
-  return { name, kind, lowRolloff, highRolloff, sensitivityDb, sensitivityReference, ratedPowerW, impedanceOhm, notes };
+  const { name, kind, lowRolloff, highRolloff, sensitivityDb, sensitivityReference, ratedPowerW, impedanceOhm, notes, voicingOptions } = p;
+  return { name, kind, lowRolloff, highRolloff, sensitivityDb, sensitivityReference, ratedPowerW, impedanceOhm, notes, voicingOptions: voicingOptions ?? [] };
 }
 
 /** The Library's Speaker profiles: a table by workspace, with create, edit and delete for editors. */

@@ -16,6 +16,7 @@ export const DEMO_PROFILES: SpeakerProfile[] = [
     ratedPowerW: 120,
     impedanceOhm: 8,
     notes: 'Invented sealed two-way bookshelf for the demo.',
+    voicingOptions: [],
   },
   {
     id: 'quillon-t8',
@@ -28,6 +29,7 @@ export const DEMO_PROFILES: SpeakerProfile[] = [
     ratedPowerW: 250,
     impedanceOhm: 6,
     notes: 'Invented vented floor-standing speaker for the demo.',
+    voicingOptions: [],
   },
   {
     id: 'marrow-s12',
@@ -40,6 +42,7 @@ export const DEMO_PROFILES: SpeakerProfile[] = [
     ratedPowerW: 500,
     impedanceOhm: 4,
     notes: 'Invented 12-inch sealed subwoofer with its own amplifier (rated power is the built-in amplifier).',
+    voicingOptions: [],
   },
   {
     id: 'marrow-v15',
@@ -52,6 +55,7 @@ export const DEMO_PROFILES: SpeakerProfile[] = [
     ratedPowerW: 1000,
     impedanceOhm: 4,
     notes: 'Invented 15-inch vented subwoofer with its own amplifier.',
+    voicingOptions: [],
   },
 ];
 

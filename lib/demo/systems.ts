@@ -12,6 +12,7 @@ function speakers(profileId: string, amplifierPowerW: number, list: SpeakerSeed[
     distanceOverrideM: null,
     trimDb: 0,
     amplifierPowerW,
+    voicing: {},
     ...s,
   }));
 }
@@ -45,8 +46,8 @@ export function juniperLaneDocument(): SystemDocument {
       { channel: 'TRR', xM: 3.5, yM: 5.0, zM: 2.65 },
     ]),
     subs: [
-      { id: 'sub1', name: 'Sub front left', xM: 0.3, yM: 0.3, zM: 0.3, profileId: 'marrow-s12', delayMs: 0, gainDb: 0, invert: false, distanceOverrideM: null, amplifierPowerW: 500, count: 1 },
-      { id: 'sub2', name: 'Sub right wall', xM: 4.6, yM: 2.8, zM: 0.3, profileId: 'marrow-s12', delayMs: 0, gainDb: 0, invert: false, distanceOverrideM: null, amplifierPowerW: 500, count: 1 },
+      { id: 'sub1', name: 'Sub front left', xM: 0.3, yM: 0.3, zM: 0.3, profileId: 'marrow-s12', delayMs: 0, gainDb: 0, invert: false, distanceOverrideM: null, amplifierPowerW: 500, count: 1, voicing: {}, eq: [] },
+      { id: 'sub2', name: 'Sub right wall', xM: 4.6, yM: 2.8, zM: 0.3, profileId: 'marrow-s12', delayMs: 0, gainDb: 0, invert: false, distanceOverrideM: null, amplifierPowerW: 500, count: 1, voicing: {}, eq: [] },
     ],
     bassManagement: {
       crossoverHz: 80,
@@ -55,6 +56,7 @@ export function juniperLaneDocument(): SystemDocument {
       lfeLowpassHz: 120,
       lfeGainDb: 10,
       mainsDelayMs: 0,
+      sampleRateHz: 48000,
     },
     profiles: [demoProfile('quillon-b6'), demoProfile('marrow-s12')],
     notes: 'Invented demo room for Larkspur AV (fictional). One sub in the front-left corner, the other on the right wall 2.8 m from the front (where the client wanted it); first row of three seats at 3.7 m.',
@@ -75,7 +77,7 @@ export function lindenStreetDocument(): SystemDocument {
       { channel: 'R', xM: 3.25, yM: 1.0, zM: 1.0 },
     ]),
     subs: [
-      { id: 'sub1', name: 'Sub', xM: 1.2, yM: 0.35, zM: 0.3, profileId: 'marrow-v15', delayMs: 0, gainDb: -2, invert: false, distanceOverrideM: null, amplifierPowerW: 1000, count: 1 },
+      { id: 'sub1', name: 'Sub', xM: 1.2, yM: 0.35, zM: 0.3, profileId: 'marrow-v15', delayMs: 0, gainDb: -2, invert: false, distanceOverrideM: null, amplifierPowerW: 1000, count: 1, voicing: {}, eq: [] },
     ],
     bassManagement: {
       crossoverHz: 60,
@@ -84,6 +86,7 @@ export function lindenStreetDocument(): SystemDocument {
       lfeLowpassHz: 120,
       lfeGainDb: 10,
       mainsDelayMs: 0,
+      sampleRateHz: 48000,
     },
     profiles: [demoProfile('quillon-t8'), demoProfile('marrow-v15')],
     notes: 'Invented two-channel den. Towers on an equilateral triangle with the chair.',

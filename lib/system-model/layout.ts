@@ -276,6 +276,7 @@ export function applyLayoutToDocument(doc: SystemDocument, templateId: LayoutNam
       distanceOverrideM: null,
       trimDb: 0,
       amplifierPowerW: model?.amplifierPowerW ?? 100,
+      voicing: {},
     };
   });
   return { doc: { ...doc, layout: templateId, speakers, profiles }, added, removed, moved };

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { documentPositions, refineInsideRoom } from '@/lib/system-model/room-bounds';
 import { num, uuidField } from './common';
+import { eqFilterSchema, peakingFilterSchema } from './eq-filter';
 import { filterFamilySchema, refineSlopeOrder } from './slope';
 
 /**
@@ -31,6 +32,34 @@ export const highRolloffSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('lowpass'), cornerHz: num(30, 2000, '', 'cornerHz'), q: num(0.3, 3, '', 'q') }),
 ]);
 
+/** One position of a voicing switch (e.g. "−2 dB", "0", "+2 dB"): the filters the speaker runs in that position (none = flat). */
+export const voicingPositionSchema = z.object({
+  id: idSchema,
+  name: z.string().trim().min(1, 'name is required').max(40),
+  filters: z.array(eqFilterSchema).max(4),
+});
+
+/**
+ * A switch on the speaker's back panel (a treble shelf, a "near a wall" low shelf…) with its positions; the first
+ * position is the one a speaker has until someone picks another.
+ */
+export const voicingOptionSchema = z
+  .object({
+    id: idSchema,
+    name: z.string().trim().min(1, 'name is required').max(60),
+    positions: z.array(voicingPositionSchema).min(2, 'a switch needs at least two positions').max(6),
+  })
+  .superRefine((o, ctx) => {
+    const seen = new Set<string>();
+    o.positions.forEach((p, i) => {
+      if (seen.has(p.id)) ctx.addIssue({ code: 'custom', path: ['positions', i, 'id'], message: `duplicate id "${p.id}"` });
+      seen.add(p.id);
+    });
+  });
+
+/** The position chosen for each of a profile's voicing switches, by switch id; a switch not listed is in its first position. */
+export const voicingChoiceSchema = z.record(idSchema, idSchema);
+
 export const speakerProfileSchema = z.object({
   id: idSchema,
   /** Set when the profile was copied from a Library profile. */
@@ -44,6 +73,8 @@ export const speakerProfileSchema = z.object({
   ratedPowerW: num(1, 20000, '', 'ratedPowerW'),
   impedanceOhm: num(1, 64, '', 'impedanceOhm'),
   notes: z.string().max(2000).default(''),
+  /** The back-panel switches the speaker offers (Voicing options). */
+  voicingOptions: z.array(voicingOptionSchema).max(4).default([]),
 });
 
 const point = {
@@ -75,6 +106,8 @@ export const speakerSchema = z.object({
   distanceOverrideM: num(0.1, 100, '', 'distanceOverrideM').nullable(),
   trimDb: num(-30, 30, '', 'trimDb'),
   amplifierPowerW: num(1, 20000, '', 'amplifierPowerW'),
+  /** The position of each of its profile's voicing switches. */
+  voicing: voicingChoiceSchema.default({}),
 });
 
 export const subSchema = z.object({
@@ -88,6 +121,10 @@ export const subSchema = z.object({
   distanceOverrideM: num(0.1, 100, '', 'distanceOverrideM').nullable(),
   amplifierPowerW: num(1, 20000, '', 'amplifierPowerW'),
   count: z.number().int().min(1).max(8).default(1),
+  /** The position of each of its profile's voicing switches. */
+  voicing: voicingChoiceSchema.default({}),
+  /** The processor's EQ on this sub's output (peaking filters, at most 10), e.g. from the EQ designer. */
+  eq: z.array(peakingFilterSchema).max(10).default([]),
 });
 
 export const bassManagementSchema = z.object({
@@ -99,6 +136,8 @@ export const bassManagementSchema = z.object({
   lfeGainDb: num(0, 15, '', 'lfeGainDb'),
   /** Delay added to the mains (only positive delays: either the sub or the mains is delayed). */
   mainsDelayMs: num(0, 100, '', 'mainsDelayMs'),
+  /** The processor's sample rate, for its digital filters (Processor filters). */
+  sampleRateHz: num(8000, 384000, 'Hz', 'sampleRateHz').default(48000),
 });
 
 export const roomSchema = z.object({

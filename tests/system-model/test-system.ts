@@ -20,6 +20,7 @@ export const TEST_MAIN: SpeakerProfile = {
   ratedPowerW: 150,
   impedanceOhm: 8,
   notes: 'Invented for the tests.',
+  voicingOptions: [],
 };
 
 export const TEST_SUB: SpeakerProfile = {
@@ -33,6 +34,7 @@ export const TEST_SUB: SpeakerProfile = {
   ratedPowerW: 400,
   impedanceOhm: 4,
   notes: 'Invented for the tests.',
+  voicingOptions: [],
 };
 
 const speaker = (channel: Speaker['channel'], xM: number, yM: number): Speaker => ({
@@ -46,6 +48,7 @@ const speaker = (channel: Speaker['channel'], xM: number, yM: number): Speaker =
   distanceOverrideM: null,
   trimDb: 0,
   amplifierPowerW: 100,
+  voicing: {},
 });
 
 const sub = (id: string, name: string, xM: number, count: number): Sub => ({
@@ -61,6 +64,8 @@ const sub = (id: string, name: string, xM: number, count: number): Sub => ({
   distanceOverrideM: null,
   amplifierPowerW: 300,
   count,
+  voicing: {},
+  eq: [],
 });
 
 /** A fresh copy of the test System every call, so a test can never change another's. */
@@ -83,6 +88,7 @@ export function testSystem(): SystemDocument {
       lfeLowpassHz: 120,
       lfeGainDb: 10,
       mainsDelayMs: 0,
+      sampleRateHz: 48000,
     },
     profiles: [structuredClone(TEST_MAIN), structuredClone(TEST_SUB)],
     notes: 'Invented test System.',
