@@ -81,6 +81,8 @@ describe('applyLayoutToDocument: a layout template applied', () => {
       distanceOverrideM: null,
       trimDb: 0,
       amplifierPowerW: 100,
+      // A new channel starts with every voicing switch in its first position.
+      voicing: {},
     });
   });
 
