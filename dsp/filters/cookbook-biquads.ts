@@ -19,7 +19,7 @@ function normalised(b0: number, b1: number, b2: number, a0: number, a1: number, 
 
 /**
  * A peaking filter or a shelf as the cookbook's biquad at `sampleRateHz`.
- * @example eqBiquad({ kind: 'peaking', centerHz: 1000, gainDb: 6, q: 1 }, 48000).b1 // −1.8915… (= a1)
+ * @example eqBiquad({ kind: 'peaking', centerHz: 1000, gainDb: 6, q: 1 }, 48000).b1 // −1.8953… (= a1)
  */
 export function eqBiquad(filter: EqFilter, sampleRateHz: number, name = 'filter'): Biquad {
   assertSampleRate(sampleRateHz);
