@@ -29,6 +29,9 @@ function polynomialAt(c0: number, c1: number, c2: number, cos1: number, sin1: nu
 export function biquadsResponse(sections: readonly Biquad[], sampleRateHz: number, frequencyHz: Float64Array | readonly number[]): ComplexResponse {
   assertSampleRate(sampleRateHz);
   const f = positiveFrequencies('frequencyHz', frequencyHz);
+  f.forEach((x, i) => {
+    if (x >= sampleRateHz / 2) throw new RangeError(`frequencyHz[${i}] must be below the Nyquist frequency, ${sampleRateHz / 2} Hz (got ${x})`);
+  });
   const n = f.length;
   const re = new Float64Array(n);
   const im = new Float64Array(n);
