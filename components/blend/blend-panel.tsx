@@ -9,6 +9,7 @@ import { useBlend } from '@/lib/hooks/use-blend';
 import { blendRequestFromDocument } from '@/lib/system-model/blend';
 import { fromFirstArrival } from '@/lib/system-model/first-arrival';
 import { blendMainSpeaker } from '@/lib/system-model/system-from-document';
+import { pathsVoicingLine } from '@/lib/system-model/voicing';
 import { BlendPlots } from './blend-plots';
 import { BlendReadouts } from './blend-readouts';
 import { BlendSettings } from './blend-settings';
@@ -48,6 +49,7 @@ export function BlendPanel() {
   const { data, error, pending } = useBlend(request ? { temperatureC: request.temperatureC, grid: request.grid, paths: request.paths, crossoverHz: request.crossoverHz } : null);
 
   const bm = doc.bassManagement;
+  const voicing = speaker ? pathsVoicingLine(doc, speaker) : null;
   const toggle = (traceId: string) =>
     setHidden((h) => {
       const next = new Set(h);
@@ -99,6 +101,12 @@ export function BlendPanel() {
               ))}
             </div>
           </div>
+          {voicing ? (
+            <p className="-mt-2 text-xs text-ink-soft max-lg:order-1" data-testid="blend-voicing-line">
+              <span className="font-medium">Voicing:</span> {voicing.text}
+              {voicing.staleCount > 0 ? <span className="text-warn-strong">{`${voicing.text ? ' · ' : ''}${voicing.staleCount} switch choice${voicing.staleCount === 1 ? '' : 's'} no longer on the profile (first position used)`}</span> : null}
+            </p>
+          ) : null}
 
           {unplaced && error ? (
             <div className="max-lg:order-1">

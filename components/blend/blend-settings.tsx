@@ -4,8 +4,10 @@ import { useId } from 'react';
 import { subTraceStyle } from '@/components/charts';
 import { MainChannelSelect } from '@/components/system/main-channel-select';
 import { useSystem } from '@/components/system/system-context';
+import { VoicingPicker } from '@/components/system/voicing-picker';
 import { NumberField } from '@/components/ui/number-field';
 import type { ApiError } from '@/lib/client/api';
+import { profileById } from '@/lib/system-model/geometry';
 import type { Slope, SystemDocument } from '@/lib/validations/system';
 import { SlopeSelect } from './slope-select';
 
@@ -15,14 +17,16 @@ function pathError(error: ApiError | undefined, pathIndex: number, field: string
 }
 
 /**
- * Blend's settings: the main channel shown, the crossover and its slopes, the mains delay, and each sub's
- * delay, gain and polarity, with the API's errors beside the control at fault.
+ * Blend's settings: the main channel shown (and its voicing switches), the crossover and its slopes, the mains delay, and
+ * each sub's delay, gain, polarity and voicing switches, with the API's errors beside the control at fault.
  */
 export function BlendSettings({ channel, onChannel, error, nearestM }: { channel: string; onChannel: (channel: string) => void; error: ApiError | undefined; nearestM: number | null }) {
   const { doc, update, readOnly } = useSystem();
   const id = useId();
   const bm = doc.bassManagement;
   const setBm = (patch: Partial<SystemDocument['bassManagement']>) => update((d) => ({ ...d, bassManagement: { ...d.bassManagement, ...patch } }));
+  const speaker = doc.speakers.find((s) => s.channel === channel);
+  const setSpeakerVoicing = (voicing: Record<string, string>) => update((d) => ({ ...d, speakers: d.speakers.map((s) => (s.id === speaker?.id ? { ...s, voicing } : s)) }));
   const setSub = (k: number, patch: Partial<SystemDocument['subs'][number]>) => update((d) => ({ ...d, subs: d.subs.map((s, i) => (i === k ? { ...s, ...patch } : s)) }));
 
   // Errors the API names: paths.0 is the mains, paths.k (k ≥ 1) sub k − 1.
@@ -33,6 +37,7 @@ export function BlendSettings({ channel, onChannel, error, nearestM }: { channel
   return (
     <form className="flex flex-col gap-4" aria-label="Blend settings" onSubmit={(e) => e.preventDefault()}>
       <MainChannelSelect id={`${id}-channel`} label="Main channel shown" value={channel} speakers={doc.speakers} onChange={onChannel} testId="blend-channel" />
+      {speaker ? <VoicingPicker profile={profileById(doc, speaker.profileId)} choice={speaker.voicing} disabled={readOnly} onChange={setSpeakerVoicing} testId="blend-mains-voicing" /> : null}
       <NumberField
         label="Crossover frequency"
         unit="Hz"
@@ -61,6 +66,7 @@ export function BlendSettings({ channel, onChannel, error, nearestM }: { channel
             Invert polarity
           </label>
           {pathError(error, k + 1, 'invert') ? <p className="text-xs text-fail">{pathError(error, k + 1, 'invert')}</p> : null}
+          <VoicingPicker profile={profileById(doc, s.profileId)} choice={s.voicing} disabled={readOnly} onChange={(voicing) => setSub(k, { voicing })} testId={`sub-${k}-voicing`} />
         </fieldset>
       ))}
       <p className="text-xs text-ink-faint">

@@ -2,9 +2,10 @@
 
 import { outsideMessage } from '@/components/system/outside-room-notice';
 import { useSystem } from '@/components/system/system-context';
+import { VoicingPicker } from '@/components/system/voicing-picker';
 import { Button } from '@/components/ui/button';
 import { NumberField } from '@/components/ui/number-field';
-import { distanceToSeatM, mlpSeat } from '@/lib/system-model/geometry';
+import { distanceToSeatM, mlpSeat, profileById } from '@/lib/system-model/geometry';
 import type { OutsidePosition } from '@/lib/system-model/room-bounds';
 import { DistanceOverride } from './distance-override';
 
@@ -88,6 +89,7 @@ export function ItemEditor({ selected, onSelect, outside }: { selected: string |
             </div>
           ) : null}
           <DistanceOverride value={s.distanceOverrideM} defaultM={distanceToSeatM({ ...doc, speakers: [], subs: [] }, { ...s, distanceOverrideM: null })} onChange={(v) => set({ distanceOverrideM: v })} />
+          <VoicingPicker profile={profileById(doc, s.profileId)} choice={s.voicing} disabled={readOnly} onChange={(voicing) => set({ voicing })} testId="speaker-voicing" />
         </>
       );
     }
@@ -100,6 +102,7 @@ export function ItemEditor({ selected, onSelect, outside }: { selected: string |
         <>
           {positionFields('sub', index, s, set, 'z — acoustic centre height')}
           <DistanceOverride value={s.distanceOverrideM} defaultM={distanceToSeatM({ ...doc, speakers: [], subs: [] }, { ...s, distanceOverrideM: null })} onChange={(v) => set({ distanceOverrideM: v })} />
+          <VoicingPicker profile={profileById(doc, s.profileId)} choice={s.voicing} disabled={readOnly} onChange={(voicing) => set({ voicing })} testId="sub-voicing" />
           <p className="text-xs text-ink-soft">Sub positions decide which modes are excited: see Modes for the seat responses.</p>
         </>
       );

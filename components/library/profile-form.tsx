@@ -3,12 +3,12 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch, type FieldPath } from 'react-hook-form';
 import { parseNumberText } from '@/lib/number-input';
-import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/client/api';
 import { profileFieldsSchema, type ProfileFields } from '@/lib/validations/profile';
+import { VoicingFields, type ProfileFormValues } from './voicing-fields';
 
-type FormInput = z.input<typeof profileFieldsSchema>;
+type FormInput = ProfileFormValues;
 
 export const EMPTY_PROFILE: ProfileFields = {
   name: '',
@@ -40,8 +40,9 @@ export function ProfileForm({ initial, workspaces, onSubmit, onCancel, submitLab
     handleSubmit,
     control,
     setError,
+    getValues,
     formState: { errors, isSubmitting },
-  } = useForm<FormInput & { workspaceId?: string }, unknown, ProfileFields>({
+  } = useForm<FormInput, unknown, ProfileFields>({
     resolver: zodResolver(profileFieldsSchema),
     // Checked as it is typed (a required name left empty says so at once), not only on Save.
     mode: 'onChange',
@@ -176,6 +177,8 @@ export function ProfileForm({ initial, workspaces, onSubmit, onCancel, submitLab
         {field('ratedPowerW', 'Rated power', 'W', { min: 1, max: 20000 })}
         {field('impedanceOhm', 'Impedance', 'Ω', { min: 1, max: 64 })}
       </div>
+
+      <VoicingFields control={control} register={register} getValues={getValues} err={err} num={num} />
 
       <div className="flex flex-col gap-1">
         <label htmlFor="profile-notes" className="text-sm font-medium">

@@ -70,6 +70,11 @@ export function ProfilesSection({ workspaces }: { workspaces: { id: string; name
                   <td className="px-3 py-2.5">
                     <span className="font-medium">{p.name}</span>
                     {p.notes ? <span className="mt-0.5 block max-w-md text-xs text-ink-faint">{p.notes}</span> : null}
+                    {p.voicingOptions?.length ? (
+                      <span className="mt-0.5 block max-w-md text-xs text-ink-soft" data-testid="profile-switches">
+                        Switches: {p.voicingOptions.map((o) => o.name).join(' · ')}
+                      </span>
+                    ) : null}
                   </td>
                   <td className="px-3 py-2.5">
                     <span className={`rounded px-1.5 py-0.5 text-xs font-medium text-white ${p.kind === 'main' ? 'bg-mains' : 'bg-sub'}`}>{p.kind === 'main' ? 'Main' : 'Sub'}</span>

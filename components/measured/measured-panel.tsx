@@ -114,6 +114,9 @@ export function MeasuredPanel({ shared }: { shared?: { items: SharedMeasurement[
             Bring measurements of the mains and the subs at a seat, each taken alone with no crossover in the processor (so they hold the speakers&apos; own roll-off, the distance
             and the room). Seamline applies this System&apos;s crossover, delays, gains and polarity to them and predicts the blend at that seat.
           </p>
+          <p className="max-w-3xl text-xs text-ink-faint" data-testid="measured-filters-note">
+            Each sub&apos;s processor EQ is applied too; the speakers&apos; voicing switches are not, since they were already set in the speakers when you measured.
+          </p>
         </div>
         <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
           Smoothing

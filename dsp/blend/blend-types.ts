@@ -1,12 +1,17 @@
-import type { FilterSpec, RolloffChain } from '../filters/filter-types';
+import type { EqFilter, FilterSpec, RolloffChain } from '../filters/filter-types';
 import type { BlendGrid } from './blend-kernel';
 
-/** One signal path: crossover filter × natural roll-off(s) × gain × polarity × delay (delayMs + distanceM / c). */
+/** One signal path: crossover filter × natural roll-off(s) × EQ × gain × polarity × delay (delayMs + distanceM / c). */
 export interface PathSpec {
   readonly name: string;
   readonly filter: FilterSpec;
   /** The speaker's natural roll-off, or several applied together (a sub: [low roll-off, upper roll-off]). */
   readonly rolloff?: RolloffChain;
+  /**
+   * EQ on this path (the cookbook's peaking filters and shelves as analog prototypes, at most MAX_PATH_EQ_FILTERS):
+   * the speaker's voicing-switch filters and the processor's EQ on this output, applied together. Absent or empty: none.
+   */
+  readonly eq?: readonly EqFilter[];
   readonly gainDb: number;
   /** Processor delay, ms, ≥ 0. */
   readonly delayMs: number;

@@ -13,7 +13,10 @@ export interface ApplyPathOptions {
   readonly magnitudeDb: Float64Array | readonly number[];
   /** Measured phase; when absent the minimum phase is estimated (and phaseEstimated is true). */
   readonly phaseDeg?: Float64Array | readonly number[];
-  /** Crossover filter, gain, delayMs and polarity to apply. The roll-off is ignored (the measurement holds it). */
+  /**
+   * Crossover filter, EQ, gain, delayMs and polarity to apply. The roll-off is ignored (the measurement holds it); the
+   * caller passes only the EQ the measurement does not hold (the processor's, not a speaker's voicing switch).
+   */
   readonly path: PathSpec;
   readonly temperatureC: number;
   /** Also add the air path distanceM / c (default false: the measurement already holds the distance). */
@@ -32,7 +35,7 @@ export interface ProcessedMeasurement {
 }
 
 /**
- * Applies a path's crossover filter, gain, delay and polarity to a measured complex response (product of the
+ * Applies a path's crossover filter, EQ, gain, delay and polarity to a measured complex response (product of the
  * measurement and the analog filter, times e^(−jωτ)); missing phase is estimated as minimum phase.
  * @example applyPathToMeasured({ frequencyHz, magnitudeDb, path: sub, temperatureC: 20 }).phaseEstimated // true
  */

@@ -1,5 +1,5 @@
 import type { PathSpec } from '../blend/blend-types';
-import type { FilterShape, RolloffChain } from '../filters/filter-types';
+import type { EqFilter, FilterShape, RolloffChain } from '../filters/filter-types';
 import { withoutCommonDelayMs } from '../timing/remove-common-delay';
 
 /** One source of the system as it sounds at the seat: its air path, its processor delay, level and polarity. */
@@ -14,6 +14,8 @@ export interface SystemSource {
   readonly invert: boolean;
   /** The speaker's natural roll-off(s): a main's low roll-off; a sub's [low, upper] roll-offs. */
   readonly rolloff?: RolloffChain;
+  /** The EQ this source runs: its speaker's voicing-switch filters and, for a sub, the processor's EQ on its output. */
+  readonly eq?: readonly EqFilter[];
 }
 
 /** Bass management: the crossover point and the two slopes. */
@@ -31,8 +33,8 @@ export interface SystemModel extends CrossoverSetting {
 }
 
 /**
- * The paths of a system: the main channel (high-pass at the crossover × its roll-off) first, then every sub (low-pass
- * at the crossover × its roll-offs), each with its gain, polarity, processor delay and air path. Every evaluation of
+ * The paths of a system: the main channel (high-pass at the crossover × its roll-off × its EQ) first, then every sub
+ * (low-pass at the crossover × its roll-offs × its EQ), each with its gain, polarity, processor delay and air path. Every evaluation of
  * a System — Blend, the Crossover sweep, Timing, Lessons, Measured — sums exactly these.
  * @example systemPaths(model).length // 1 + model.subs.length
  */
@@ -42,6 +44,7 @@ export function systemPaths(model: SystemModel): PathSpec[] {
     name: s.name,
     filter,
     ...(s.rolloff !== undefined ? { rolloff: s.rolloff } : {}),
+    ...(s.eq !== undefined && s.eq.length > 0 ? { eq: s.eq } : {}),
     gainDb: s.gainDb,
     delayMs: s.delayMs,
     invert: s.invert,

@@ -5,6 +5,9 @@ const slopeNote = "family 'butterworth' (order 1–8) or 'linkwitz-riley' (order
 const rolloffNote =
   "natural roll-off: { kind: 'none' } | { kind: 'sealed', cornerHz, q } (2nd-order high-pass) | { kind: 'vented', cornerHz } (4th-order) | { kind: 'lowpass', cornerHz, q } (a sub's upper roll-off), or an array of up to 4 of them applied together; q 0.2–10, cornerHz 1–2000 (lowpass 10–24 000)";
 
+const eqNote =
+  "EQ: up to 26 filters applied together — { kind: 'peaking', centerHz, gainDb, q } or { kind: 'low-shelf' | 'high-shelf', cornerHz, gainDb, q? | slope? } (Audio EQ Cookbook analog prototypes; gain ±24 dB, Q 0.1–20, shelf slope 0.1–1, default 1): a speaker's voicing-switch filters and the processor's EQ on that output (default none)";
+
 const FLATNESS_TEXT = FLATNESS_DEFINITION.text;
 
 /** The one flatness measure, as every answer that says "flatness" means it (dsp assessBlend). */
@@ -31,13 +34,15 @@ const systemFields = (crossoverText: string): ApiField[] => [
   { name: 'mains.delayMs', type: 'number', unit: 'ms', description: 'Processor delay on the main channel now, 0…1000 (default 0).' },
   { name: 'mains.gainDb', type: 'number', unit: 'dB', description: 'Main channel level at the seat relative to level-matched, −60…60 (default 0).' },
   { name: 'mains.rolloff', type: 'object | array', description: "The main speaker's natural roll-off: { kind: 'none' } | { kind: 'sealed', cornerHz, q } | { kind: 'vented', cornerHz }, or a chain of up to 4 (default none)." },
-  { name: 'subs[]', type: 'array', required: true, description: '1–8 subs, every one of the system, each { name, distanceM, delayMs?, gainDb?, invert?, rolloff? }.' },
+  { name: 'mains.eq', type: 'array', description: `The main channel's ${eqNote}.` },
+  { name: 'subs[]', type: 'array', required: true, description: '1–8 subs, every one of the system, each { name, distanceM, delayMs?, gainDb?, invert?, rolloff?, eq? }.' },
   { name: 'subs[].name', type: 'string', required: true, description: '1–60 characters, echoed in the answer.' },
   { name: 'subs[].distanceM', type: 'number', unit: 'm', required: true, description: 'Sub to the main listening position, 0…200.' },
   { name: 'subs[].delayMs', type: 'number', unit: 'ms', description: 'Processor delay on this sub now, 0…1000 (default 0).' },
   { name: 'subs[].gainDb', type: 'number', unit: 'dB', description: 'This sub\'s level at the seat, −60…60 (default 0).' },
   { name: 'subs[].invert', type: 'boolean', description: 'Polarity inverted now (default false).' },
   { name: 'subs[].rolloff', type: 'object | array', description: `The sub's ${rolloffNote} (default none).` },
+  { name: 'subs[].eq', type: 'array', description: `This sub's ${eqNote}.` },
 ];
 
 export const BLEND_DOCS: ApiRouteDoc[] = [
@@ -45,7 +50,7 @@ export const BLEND_DOCS: ApiRouteDoc[] = [
     id: 'blend',
     method: 'POST',
     path: '/api/v1/blend',
-    summary: 'The complex sum of up to 16 paths (crossover filter × natural roll-off × gain × polarity × delay) and its read-outs at the crossover.',
+    summary: 'The complex sum of up to 16 paths (crossover filter × natural roll-off × EQ × gain × polarity × delay) and its read-outs at the crossover.',
     auth: 'none',
     fields: [
       { name: 'temperatureC', type: 'number', unit: '°C', required: true, description: 'Air temperature, −20…50; sets the speed of sound for distanceM.' },
@@ -56,6 +61,7 @@ export const BLEND_DOCS: ApiRouteDoc[] = [
       { name: 'paths[].name', type: 'string', required: true, description: '1–60 characters, echoed in the answer.' },
       { name: 'paths[].filter', type: 'object', required: true, description: `{ family, order, response: 'lowpass' | 'highpass' | 'none', cornerHz 10…24 000 }; ${slopeNote}. 'none' is a straight wire.` },
       { name: 'paths[].rolloff', type: 'object | array', description: `Optional ${rolloffNote}.` },
+      { name: 'paths[].eq', type: 'array', description: `Optional ${eqNote}.` },
       { name: 'paths[].gainDb', type: 'number', unit: 'dB', required: true, description: 'Gain, −60…60.' },
       { name: 'paths[].delayMs', type: 'number', unit: 'ms', required: true, description: 'Processor delay, 0…1000.' },
       { name: 'paths[].invert', type: 'boolean', required: true, description: 'Polarity inverted.' },

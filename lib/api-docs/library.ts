@@ -254,6 +254,12 @@ export const LIBRARY_DOCS: ApiRouteDoc[] = [
       { name: 'ratedPowerW', type: 'number', unit: 'W', required: true, description: '1–20000.' },
       { name: 'impedanceOhm', type: 'number', unit: 'Ω', required: true, description: '1–64.' },
       { name: 'notes', type: 'string', description: 'Up to 2000 characters.' },
+      {
+        name: 'voicingOptions',
+        type: '{ id, name, positions: { id, name, filters: EqFilter[] }[] }[]',
+        description:
+          'Voicing options: the switches on the speaker’s back panel (at most 4), each with 2–6 positions; a position lists at most 4 filters — { kind: "peaking", centerHz, gainDb, q } or { kind: "low-shelf" | "high-shelf", cornerHz, gainDb, q? | slope? } (Audio EQ Cookbook; gain ±24 dB, Q 0.1–20, shelf slope 0.1–1, default 1). A System picks a position per speaker (speakers[].voicing / subs[].voicing: { switchId: positionId }); a switch not picked is in its first position. Default [].',
+      },
       { name: 'workspaceId', type: 'uuid', description: 'Default: the caller’s personal workspace.' },
     ],
     answer: [{ name: '(profile)', type: 'Profile', description: 'As listed, with id, createdByName and times.' }],

@@ -116,7 +116,7 @@ export const MEASURED_DOCS: ApiRouteDoc[] = [
       { name: 'temperatureC', type: 'number', unit: '°C', required: true, description: '−20…50 (the speed of sound of the delay scan).' },
       { name: 'crossoverHz', type: 'number', unit: 'Hz', required: true, description: '20…300: the corner of both filters.' },
       { name: 'mainsHighpass, subLowpass', type: '{ family, order }', required: true, description: 'Butterworth orders 1–8 or Linkwitz–Riley 2, 4, 8.' },
-      { name: 'mains, sub', type: '{ curve, gainDb, delayMs, invert, name? }', required: true, description: `The processor settings to apply (gain dB, delay ms ≥ 0, polarity) and the curve: ${curveFields} The measurement is taken as holding the speaker’s own roll-off and the distance, so neither is added.` },
+      { name: 'mains, sub', type: '{ curve, gainDb, delayMs, invert, eq?, name? }', required: true, description: `The processor settings to apply (gain dB, delay ms ≥ 0, polarity, and eq: the processor's EQ on that output, up to 26 peaking or shelf filters as on /api/v1/blend) and the curve: ${curveFields} The measurement is taken as holding the speaker’s own roll-off, its voicing switches and the distance, so none of them is added.` },
       { name: 'smoothingFraction', type: 'integer', description: '0 (none, default) or N of 1/N octave (1…48) for every returned magnitude.' },
       { name: 'pointsPerOctave', type: 'integer', description: '6…96 (default 48): the shared grid both curves are resampled to.' },
       { name: 'maxDelayMs', type: 'number', unit: 'ms', description: '1…50 (default 20): the widest delay the search tries on either side.' },

@@ -45,7 +45,7 @@ export interface PredictAnswer {
   phaseEstimated: boolean;
   /** Each measurement on the shared grid, as measured (nothing applied). */
   measured: PredictTrace[];
-  /** Each measurement with the System's filter, gain, delay and polarity applied. */
+  /** Each measurement with the System's filter, processor EQ, gain, delay and polarity applied. */
   paths: PredictTrace[];
   /** The two processed paths summed: what the System's settings would give at this seat. */
   predictedSum: { magnitudeDb: number[]; phaseDeg: number[] };
@@ -105,7 +105,9 @@ export function measuredRequestFromDocument(
     mainsHighpass: { ...model.mainsHighpass },
     subLowpass: { ...model.subLowpass },
     mains: { name: model.mains.name, curve: curves.mains, gainDb: model.mains.gainDb, delayMs: model.mains.delayMs, invert: false },
-    sub: { name: target.subIndex === 'all' ? 'All subs' : sub.name, curve: curves.sub, gainDb: sub.gainDb, delayMs: subSource.delayMs, invert: sub.invert },
+    // The sub's processor EQ is applied (measurements are taken without processing), but not the voicing switches:
+    // the switch was in the speaker, in whatever position it had, when it was measured. "All subs" takes the first sub's.
+    sub: { name: target.subIndex === 'all' ? 'All subs' : sub.name, curve: curves.sub, gainDb: sub.gainDb, delayMs: subSource.delayMs, invert: sub.invert, ...(sub.eq.length > 0 ? { eq: [...sub.eq] } : {}) },
     smoothingFraction: options.smoothingFraction ?? 0,
   };
 }
@@ -135,6 +137,7 @@ export function computeMeasured(req: PredictRequest, curves: { mains: CurvePoint
   const mainsPath: PathSpec = {
     name: req.mains.name,
     filter: { family: req.mainsHighpass.family, order: req.mainsHighpass.order, response: 'highpass', cornerHz: req.crossoverHz },
+    ...(req.mains.eq ? { eq: req.mains.eq } : {}),
     gainDb: req.mains.gainDb,
     delayMs: req.mains.delayMs,
     invert: req.mains.invert,
@@ -142,12 +145,13 @@ export function computeMeasured(req: PredictRequest, curves: { mains: CurvePoint
   const subPathSpec: PathSpec = {
     name: req.sub.name,
     filter: { family: req.subLowpass.family, order: req.subLowpass.order, response: 'lowpass', cornerHz: req.crossoverHz },
+    ...(req.sub.eq ? { eq: req.sub.eq } : {}),
     gainDb: req.sub.gainDb,
     delayMs: req.sub.delayMs,
     invert: req.sub.invert,
   };
   const input = (c: typeof m, path: PathSpec): MeasuredPathInput => ({ magnitudeDb: c.magnitudeDb, ...(c.phaseDeg ? { phaseDeg: c.phaseDeg } : {}), path });
-  const wire = (path: PathSpec): PathSpec => ({ ...path, filter: { ...path.filter, response: 'none' }, gainDb: 0, delayMs: 0, invert: false });
+  const wire = (path: PathSpec): PathSpec => ({ ...path, filter: { ...path.filter, response: 'none' }, eq: [], gainDb: 0, delayMs: 0, invert: false });
 
   const predicted = predictMeasuredBlend({ frequencyHz: grid, measured: [input(m, mainsPath), input(s, subPathSpec)], temperatureC: req.temperatureC });
   const asMeasured = predictMeasuredBlend({ frequencyHz: grid, measured: [input(m, wire(mainsPath)), input(s, wire(subPathSpec))], temperatureC: req.temperatureC });

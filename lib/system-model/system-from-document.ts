@@ -9,6 +9,7 @@ import type { SpeakerProfile, Speaker, Sub, SystemDocument } from '@/lib/validat
 import { systemChannelSettings } from './channel-settings';
 import { geometricDistanceM, mlpSeat, profileById } from './geometry';
 import { roundTo } from './rounding';
+import { voicingFilters } from './voicing';
 
 /** The main channel a blend is shown for: the requested one, else L, else the first speaker. */
 export function blendMainSpeaker(doc: SystemDocument, channel?: string): Speaker | undefined {
@@ -42,33 +43,41 @@ export function subLevelMatchDb(doc: SystemDocument, sub: Sub): number {
 
 /**
  * A main channel as the model's source: the air path from its position (what the sound travels), its processor delay
- * from the channel settings (which align the distances the processor is set to), its offset trim, its roll-off. When
- * a measured distance set on the processor differs from the positions, the model hears the difference.
+ * from the channel settings (which align the distances the processor is set to), its offset trim, its roll-off and the
+ * EQ of its voicing switches. When a measured distance set on the processor differs from the positions, the model
+ * hears the difference.
  */
 export function mainsSource(doc: SystemDocument, speaker: Speaker): SystemSource {
   const i = doc.speakers.indexOf(speaker);
   const settings = systemChannelSettings(doc).mains[i];
+  const profile = profileById(doc, speaker.profileId);
   return {
     name: speaker.channel,
     distanceM: geometricDistanceM(speaker, mlpSeat(doc)),
     delayMs: settings?.delayMs ?? 0,
     gainDb: speaker.trimDb,
     invert: false,
-    rolloff: mainsRolloff(profileById(doc, speaker.profileId)),
+    rolloff: mainsRolloff(profile),
+    eq: voicingFilters(profile, speaker.voicing),
   };
 }
 
-/** A sub as the model's source: processor delay and gain from the channel settings, level-matched, both roll-offs. */
+/**
+ * A sub as the model's source: processor delay and gain from the channel settings, level-matched, both roll-offs, and
+ * its EQ: the filters of its voicing switches, then the processor's EQ on its output.
+ */
 export function subSource(doc: SystemDocument, sub: Sub): SystemSource {
   const k = doc.subs.indexOf(sub);
   const settings = systemChannelSettings(doc).subs[k];
+  const profile = profileById(doc, sub.profileId);
   return {
     name: sub.name,
     distanceM: geometricDistanceM(sub, mlpSeat(doc)),
     delayMs: settings?.delayMs ?? 0,
     gainDb: (settings?.gainDb ?? sub.gainDb) + subLevelMatchDb(doc, sub),
     invert: sub.invert,
-    rolloff: subRolloffs(profileById(doc, sub.profileId)),
+    rolloff: subRolloffs(profile),
+    eq: [...voicingFilters(profile, sub.voicing), ...(sub.eq ?? [])],
   };
 }
 

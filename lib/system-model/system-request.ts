@@ -3,7 +3,7 @@
  * processor runs them), both ways: from the model built from the document, and back to the model dsp evaluates.
  * Shared by the Timing and Crossover sweep features so neither imports the other.
  */
-import type { RolloffChain, RolloffSpec, SystemModel } from '@/dsp';
+import type { EqFilter, RolloffChain, RolloffSpec, SystemModel, SystemSource } from '@/dsp';
 import type { TimingRequest } from '@/lib/validations/compute-blend';
 import { roundTo } from './rounding';
 
@@ -13,6 +13,9 @@ export type SystemRequest = Pick<TimingRequest, 'temperatureC' | 'crossoverHz' |
 /** A roll-off chain as the request schema takes it (a plain array). */
 const asChain = (r: RolloffChain): RolloffSpec | RolloffSpec[] => (Array.isArray(r) ? [...r] : (r as RolloffSpec));
 
+/** A source's EQ as the request carries it: a plain array, left out when there is none. */
+const eqOf = (s: SystemSource): { eq?: EqFilter[] } => (s.eq && s.eq.length > 0 ? { eq: [...s.eq] } : {});
+
 /** The system part of a request for a model: distances to 0.1 mm, sub levels within the schema's ±60 dB. */
 export function systemRequestFromModel(model: SystemModel): SystemRequest {
   return {
@@ -20,7 +23,7 @@ export function systemRequestFromModel(model: SystemModel): SystemRequest {
     crossoverHz: model.crossoverHz,
     mainsHighpass: { ...model.mainsHighpass },
     subLowpass: { ...model.subLowpass },
-    mains: { name: model.mains.name, distanceM: roundTo(model.mains.distanceM, 4), delayMs: model.mains.delayMs, gainDb: model.mains.gainDb, rolloff: asChain(model.mains.rolloff ?? { kind: 'none' }) as TimingRequest['mains']['rolloff'] },
+    mains: { name: model.mains.name, distanceM: roundTo(model.mains.distanceM, 4), delayMs: model.mains.delayMs, gainDb: model.mains.gainDb, rolloff: asChain(model.mains.rolloff ?? { kind: 'none' }) as TimingRequest['mains']['rolloff'], ...eqOf(model.mains) },
     subs: model.subs.map((s) => ({
       name: s.name,
       distanceM: roundTo(s.distanceM, 4),
@@ -28,6 +31,7 @@ export function systemRequestFromModel(model: SystemModel): SystemRequest {
       gainDb: Math.max(-60, Math.min(60, s.gainDb)),
       invert: s.invert,
       rolloff: asChain(s.rolloff ?? { kind: 'none' }),
+      ...eqOf(s),
     })),
   };
 }
@@ -39,7 +43,7 @@ export function systemModelFromRequest(req: SystemRequest): SystemModel {
     crossoverHz: req.crossoverHz,
     mainsHighpass: req.mainsHighpass,
     subLowpass: req.subLowpass,
-    mains: { name: req.mains.name, distanceM: req.mains.distanceM, delayMs: req.mains.delayMs, gainDb: req.mains.gainDb, invert: false, rolloff: req.mains.rolloff },
-    subs: req.subs.map((s) => ({ name: s.name, distanceM: s.distanceM, delayMs: s.delayMs, gainDb: s.gainDb, invert: s.invert, rolloff: s.rolloff })),
+    mains: { name: req.mains.name, distanceM: req.mains.distanceM, delayMs: req.mains.delayMs, gainDb: req.mains.gainDb, invert: false, rolloff: req.mains.rolloff, ...(req.mains.eq ? { eq: req.mains.eq } : {}) },
+    subs: req.subs.map((s) => ({ name: s.name, distanceM: s.distanceM, delayMs: s.delayMs, gainDb: s.gainDb, invert: s.invert, rolloff: s.rolloff, ...(s.eq ? { eq: s.eq } : {}) })),
   };
 }

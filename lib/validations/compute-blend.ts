@@ -1,6 +1,8 @@
 import { z } from 'zod';
+import { MAX_PATH_EQ_FILTERS } from '@/dsp';
 import { num } from './common';
 import { COMPUTE_LIMITS, gridSchema, temperatureCSchema } from './compute-common';
+import { eqFilterSchema } from './eq-filter';
 import { filterFamilySchema, refineSlopeOrder } from './slope';
 
 /**
@@ -72,11 +74,14 @@ const gainDbSchema = num(-60, 60, 'dB');
 const delayMsSchema = num(0, 1000, 'ms');
 const distanceMSchema = num(0, 200, 'm');
 const invertSchema = z.boolean({ error: 'must be true or false' });
+/** A path's EQ (Audio EQ Cookbook peaking filters and shelves): a speaker's voicing-switch filters and the processor's EQ on that output. */
+export const pathEqSchema = z.array(eqFilterSchema).max(MAX_PATH_EQ_FILTERS, `must hold at most ${MAX_PATH_EQ_FILTERS} filters`).readonly();
 
 export const blendPathSchema = z.strictObject({
   name: nameSchema,
   filter: filterSpecSchema,
   rolloff: chainOf(rolloffSchema).optional(),
+  eq: pathEqSchema.optional(),
   gainDb: gainDbSchema,
   delayMs: delayMsSchema,
   invert: invertSchema,
@@ -133,6 +138,7 @@ const timingMainsSchema = z.strictObject({
   delayMs: delayMsSchema.default(0),
   gainDb: gainDbSchema.default(0),
   rolloff: chainOf(mainsRolloffSchema).default({ kind: 'none' }),
+  eq: pathEqSchema.optional(),
 });
 
 const timingSubSchema = z.strictObject({
@@ -142,6 +148,7 @@ const timingSubSchema = z.strictObject({
   gainDb: gainDbSchema.default(0),
   invert: invertSchema.default(false),
   rolloff: chainOf(rolloffSchema).default({ kind: 'none' }),
+  eq: pathEqSchema.optional(),
 });
 
 /** The whole system a Timing or Crossover sweep request describes: one main channel and every sub, as the processor runs them. */

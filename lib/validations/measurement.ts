@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { num, uuidField } from './common';
+import { pathEqSchema } from './compute-blend';
 import { temperatureCSchema } from './compute-common';
 import { filterFamilySchema, refineSlopeOrder } from './slope';
 import { MAX_ABS_MAGNITUDE_DB, MAX_ABS_PHASE_DEG, MIN_MEASUREMENT_POINTS } from '@/lib/measurements/parse-measurement';
@@ -60,6 +61,8 @@ const settingsSchema = {
   gainDb: num(-60, 60, 'dB'),
   delayMs: num(0, 1000, 'ms'),
   invert: z.boolean({ error: 'must be true or false' }),
+  /** The processor's EQ on this output, applied to the curve (a speaker's voicing switch is already in a measurement). */
+  eq: pathEqSchema.optional(),
 };
 
 export const predictRequestSchema = z.strictObject({

@@ -74,7 +74,17 @@ export const speakerProfileSchema = z.object({
   impedanceOhm: num(1, 64, '', 'impedanceOhm'),
   notes: z.string().max(2000).default(''),
   /** The back-panel switches the speaker offers (Voicing options). */
-  voicingOptions: z.array(voicingOptionSchema).max(4).default([]),
+  voicingOptions: z
+    .array(voicingOptionSchema)
+    .max(4)
+    .superRefine((options, ctx) => {
+      const seen = new Set<string>();
+      options.forEach((o, i) => {
+        if (seen.has(o.id)) ctx.addIssue({ code: 'custom', path: [i, 'id'], message: `duplicate id "${o.id}"` });
+        seen.add(o.id);
+      });
+    })
+    .default([]),
 });
 
 const point = {
