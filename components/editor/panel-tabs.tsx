@@ -10,6 +10,7 @@ export const PANELS = [
   { id: 'layout', label: 'Layout' },
   { id: 'headroom', label: 'Headroom' },
   { id: 'measured', label: 'Measured' },
+  { id: 'processor-filters', label: 'Processor filters' },
 ] as const;
 
 export type PanelId = (typeof PANELS)[number]['id'];

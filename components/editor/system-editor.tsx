@@ -32,6 +32,7 @@ const SeatBalancePanel = dynamic(() => import('@/components/seat-balance/seat-ba
 const LayoutPanel = dynamic(() => import('@/components/layout/layout-panel').then((m) => m.LayoutPanel), { loading: loadingPanel });
 const HeadroomPanel = dynamic(() => import('@/components/headroom/headroom-panel').then((m) => m.HeadroomPanel), { loading: loadingPanel });
 const MeasuredPanel = dynamic(() => import('@/components/measured/measured-panel').then((m) => m.MeasuredPanel), { loading: loadingPanel });
+const ProcessorFiltersPanel = dynamic(() => import('@/components/processor-filters/processor-filters-panel').then((m) => m.ProcessorFiltersPanel), { loading: loadingPanel });
 const ShareDialog = dynamic(() => import('@/components/share/share-dialog').then((m) => m.ShareDialog));
 const AddToLessonButton = dynamic(() => import('@/components/lessons/add-to-lesson-button').then((m) => m.AddToLessonButton));
 
@@ -86,7 +87,7 @@ export function SystemEditor({ saved, signedIn }: Props) {
   const blocking = panel === 'blend' || panel === 'timing' || panel === 'headroom' ? outsideForMlpGeometry(doc, outside) : [];
   const signInToSave = useMemo(() => (signedIn || saved ? null : signInToSaveHref({ doc, name, panel })), [signedIn, saved, doc, name, panel]);
 
-  const ActivePanel = { blend: BlendPanel, timing: TimingPanel, modes: ModesPanel, 'seat-balance': SeatBalancePanel, layout: LayoutPanel, headroom: HeadroomPanel, measured: MeasuredPanel }[panel];
+  const ActivePanel = { blend: BlendPanel, timing: TimingPanel, modes: ModesPanel, 'seat-balance': SeatBalancePanel, layout: LayoutPanel, headroom: HeadroomPanel, measured: MeasuredPanel, 'processor-filters': ProcessorFiltersPanel }[panel];
 
   return (
     <SystemContext.Provider value={value}>

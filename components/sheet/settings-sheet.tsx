@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { computeSettingsSheet, SETTING_DECIMALS } from '@/lib/system-model/settings-sheet';
 import { formatLength } from '@/lib/units';
 import type { SystemDocument } from '@/lib/validations/system';
+import { ProcessorFiltersSection } from './processor-filters-section';
 import { SeatBalanceSection } from './seat-balance-section';
 
 interface Props {
@@ -208,6 +209,8 @@ export function SettingsSheet({ name, revision, revisionNote, savedAt, savedBy, 
       </section>
 
       <SeatBalanceSection sheet={sheet} />
+
+      <ProcessorFiltersSection sheet={sheet} />
 
       <section aria-labelledby="sheet-modes" className="sheet-block">
         <h2 id="sheet-modes" className="mb-2 text-base font-semibold">

@@ -4,12 +4,14 @@
  * Distances, delays, trims and sub gains are `systemChannelSettings` — the one definition Layout, the exports and the
  * API share, already rounded (0.01 m, 0.01 ms, 0.1 dB); the room summary calls dsp/ (roomModes,
  * schroederFrequencyHz). The seat-to-seat spread is seatBalanceStateFromDocument's (Seat balance's own measure, on the
- * Modes tab's grid). No mathematics of its own.
+ * Modes tab's grid); the processor filters are processorFiltersFromDocument's, grouped as the panel shows them. No
+ * mathematics of its own.
  */
 import { roomModes, schroederFrequencyHz, SETTING_RESOLUTION, type ModeKind } from '@/dsp';
 import type { Slope, SystemDocument } from '@/lib/validations/system';
 import { systemChannelSettings } from './channel-settings';
 import { mlpSeat, profileById } from './geometry';
+import { deviationWords, groupOutputs, LFE_NOTE, numberedSections, processorFiltersFromDocument, type OutputGroup } from './processor-filters';
 import type { SeatBalanceSummary } from './seat-balance';
 import { seatBalanceStateFromDocument } from './seat-balance-document';
 
@@ -69,6 +71,29 @@ export interface SheetMode {
   kind: ModeKind;
 }
 
+/** Outputs that run the same filters, once, with every section at full precision (the panel's numbers). */
+interface SheetFilterGroup {
+  key: string;
+  /** The first output's id (main-<speaker id>, sub-<sub id>, lfe). */
+  id: string;
+  kind: OutputGroup['kind'];
+  labels: string[];
+  filters: { role: string; words: string }[];
+  sections: ReturnType<typeof numberedSections>;
+  /** The digital filters against the analog ones, in words; null when not computed. */
+  deviation: string | null;
+  problem: string | null;
+}
+
+/** Every processor output's biquads at the System's sample rate (processorFiltersFromDocument, as the panel shows them). */
+interface SheetProcessorFilters {
+  sampleRateHz: number;
+  convention: string;
+  groups: SheetFilterGroup[];
+  /** The LFE low-pass's assumed slope, when the System has an LFE output. */
+  lfeNote: string | null;
+}
+
 export interface SettingsSheet {
   layout: string;
   mlpName: string;
@@ -88,6 +113,7 @@ export interface SettingsSheet {
   notes: string;
   /** Null when Seat balance cannot measure the System (no sub, fewer than two seats, a position outside the room). */
   seatBalance: SheetSeatBalance | null;
+  processorFilters: SheetProcessorFilters;
 }
 
 /** "Linkwitz–Riley 4th order (24 dB/oct)". */
@@ -147,7 +173,23 @@ export function computeSettingsSheet(doc: SystemDocument): SettingsSheet {
     firstAxialHz: { length: firstAxial(0), width: firstAxial(1), height: firstAxial(2) },
     notes: doc.notes,
     seatBalance: seatBalanceOf(doc),
+    processorFilters: processorFiltersOf(doc),
   };
+}
+
+function processorFiltersOf(doc: SystemDocument): SheetProcessorFilters {
+  const pf = processorFiltersFromDocument(doc);
+  const groups = groupOutputs(pf.outputs).map(({ key, kind, labels, first }) => ({
+    key,
+    id: first.id,
+    kind,
+    labels,
+    filters: first.filters.map((f) => ({ role: f.role, words: f.words })),
+    sections: numberedSections(first),
+    deviation: first.result ? deviationWords(first.result.deviation) : null,
+    problem: first.problem,
+  }));
+  return { sampleRateHz: pf.sampleRateHz, convention: pf.convention, groups, lfeNote: pf.outputs.some((o) => o.kind === 'lfe') ? LFE_NOTE : null };
 }
 
 function seatBalanceOf(doc: SystemDocument): SheetSeatBalance | null {

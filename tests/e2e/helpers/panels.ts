@@ -8,4 +8,5 @@ export const PANELS = [
   { name: 'Layout', ready: 'status-L' },
   { name: 'Headroom', ready: 'max-spl-L' },
   { name: 'Measured', ready: 'measured-panel' },
+  { name: 'Processor filters', ready: 'pf-convention' },
 ] as const;
