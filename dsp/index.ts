@@ -10,7 +10,7 @@ export { nominalMidbandHz } from './grid/nominal-midband-frequency';
 export type { FilterFamily, FilterSpec, FilterShape, RolloffSpec, RolloffChain, AnalogSection } from './filters/filter-types';
 export { butterworthQ } from './filters/butterworth-q';
 export { filterSections, rolloffSections } from './filters/analog-sections';
-export { filterResponse, rolloffResponse, secondOrderSectionResponse } from './filters/filter-response';
+export { filterResponse, rolloffResponse, secondOrderSectionResponse, sectionsResponse } from './filters/filter-response';
 export { BIQUAD_CONVENTION, type Biquad, type EqFilter, type AllpassFilter, type CrossoverFilter, type ProcessorFilter } from './filters/filter-types';
 export { eqSection, eqSections, EQ_LIMITS } from './filters/eq-sections';
 export { SAMPLE_RATE_LIMITS_HZ, COMMON_SAMPLE_RATES_HZ } from './filters/sample-rate';
@@ -19,8 +19,14 @@ export { eqBiquad, allpassBiquad } from './filters/cookbook-biquads';
 export { biquadsResponse, isStableBiquad } from './filters/biquad-response';
 export { processorFilters, processorFilterBiquads, MAX_PROCESSOR_FILTERS, DEVIATION_FLOOR_DB, type ProcessorSection, type DigitalDeviation, type ProcessorFiltersResult } from './filters/processor-filters';
 
+export { designEq, EQ_DESIGN_DEFAULTS, EQ_DESIGN_LIMITS, type EqDesign } from './eq/design-eq';
+export { MAX_HOUSE_RISE_DB, HOUSE_CURVE_DEFINITION, type EqTarget } from './eq/eq-target';
+export { NULL_DEFINITION } from './eq/find-nulls';
+export { RESIDUAL_DEFINITION } from './eq/eq-residual';
+
 export { SILENCE_DB, type PathSpec, type ResponseCurves, type BlendResult } from './blend/blend-types';
 export { blendResponse } from './blend/blend-response';
+export { MAX_PATH_EQ_FILTERS } from './blend/path-plan';
 export { blendSumResponse } from './blend/blend-sum';
 export { blendGrid, isBlendGrid } from './blend/blend-kernel';
 export { blendMetrics, type BlendMetrics } from './blend/blend-metrics';

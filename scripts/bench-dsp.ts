@@ -25,6 +25,7 @@ import {
   type SystemSource,
   type ResponseCurves,
 } from '../dsp';
+import { printEqDesignBench } from './lib/eq-design-bench';
 import { printSeatBalanceBench } from './lib/seat-balance-bench';
 
 interface Figures {
@@ -219,5 +220,6 @@ if (process.env.SEAMLINE_BENCH_CHILD === '1') {
   console.log(`    roomModes + modalTransfers (all pairs in one call):           ${cell((f) => f.modesBatch)}   target ≤ 20 ms`);
   console.log(`    roomModes + 12 × modalTransfer:                               ${cell((f) => f.modesPairwise)}`);
   if (!bundled) console.log('  (bundled run skipped: node_modules/.bin/esbuild not found or failed)');
+  printEqDesignBench();
   printSeatBalanceBench();
 }

@@ -99,6 +99,8 @@ const MATRIX: Record<string, { expect: Expect; build: Builder }> = {
   'POST /api/v1/layout': { expect: open(200), build: () => documentedExample('/api/v1/layout') },
   'POST /api/v1/headroom': { expect: open(200), build: () => documentedExample('/api/v1/headroom') },
   'POST /api/v1/measured/predict': { expect: open(200), build: () => documentedExample('/api/v1/measured/predict') },
+  'POST /api/v1/processor-filters': { expect: open(200), build: () => documentedExample('/api/v1/processor-filters') },
+  'POST /api/v1/eq-design': { expect: open(200), build: () => documentedExample('/api/v1/eq-design') },
 
   'GET /api/v1/workspaces': { expect: signedIn(200), build: () => ({ path: '/api/v1/workspaces' }) },
   'POST /api/v1/workspaces': { expect: signedIn(201), build: () => ({ path: '/api/v1/workspaces', body: { name: 'Matrix side workspace' } }) },

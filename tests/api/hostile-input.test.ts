@@ -16,6 +16,8 @@ import { seatBalanceMeasuredRequestSchema, seatBalanceModelRequestSchema } from 
 import { lessonCreateSchema, lessonUpdateSchema, stepCreateSchema, stepReorderSchema, stepUpdateSchema } from '@/lib/validations/lesson';
 import { copySchema, revisionNoteUpdateSchema, revisionRestoreSchema, systemCreateSchema, systemDuplicateSchema, systemRenameSchema, systemUpdateSchema } from '@/lib/validations/library';
 import { measurementUploadFieldsSchema, predictRequestSchema } from '@/lib/validations/measurement';
+import { eqDesignCurveRequestSchema, eqDesignMeasuredRequestSchema, eqDesignModelRequestSchema } from '@/lib/validations/compute-eq-design';
+import { processorFiltersRequestSchema } from '@/lib/validations/compute-processor-filters';
 import { profileCreateSchema, profileUpdateSchema } from '@/lib/validations/profile';
 import { invitationCreateSchema, memberUpdateSchema, workspaceCreateSchema } from '@/lib/validations/workspace';
 import { apiRouteFiles } from '../helpers/api-routes';
@@ -115,6 +117,8 @@ const JSON_ROUTES: JsonRoute[] = [
   compute('/api/v1/layout', layoutRequestSchema),
   compute('/api/v1/headroom', headroomRequestSchema),
   compute('/api/v1/measured/predict', predictRequestSchema, 2 * KB * KB),
+  compute('/api/v1/processor-filters', processorFiltersRequestSchema),
+  compute('/api/v1/eq-design', eqDesignCurveRequestSchema.or(eqDesignModelRequestSchema).or(eqDesignMeasuredRequestSchema)),
 
   { method: 'POST', route: '/api/v1/workspaces', path: () => '/api/v1/workspaces', schema: workspaceCreateSchema, limitBytes: 16 * KB, session: true, template: () => ({ name: `Workspace ${MARK}` }) },
   { method: 'PATCH', route: '/api/v1/workspaces/[id]', path: (f) => `/api/v1/workspaces/${f.workspaceId}`, schema: workspaceCreateSchema, limitBytes: 16 * KB, session: true, template: () => ({ name: `Workspace ${MARK}` }) },
