@@ -26,6 +26,7 @@ export { RESIDUAL_DEFINITION } from './eq/eq-residual';
 
 export { SILENCE_DB, type PathSpec, type ResponseCurves, type BlendResult } from './blend/blend-types';
 export { blendResponse } from './blend/blend-response';
+export { pathResponse } from './blend/path-response';
 export { MAX_PATH_EQ_FILTERS } from './blend/path-plan';
 export { blendSumResponse } from './blend/blend-sum';
 export { blendGrid, isBlendGrid } from './blend/blend-kernel';
@@ -56,6 +57,7 @@ export { seatSpreadDb } from './room/seat-spread';
 export { modePressureAt, modePressureMap, nodeAlignedCellCount } from './room/mode-pressure-map';
 export { quarterWaveNotchHz } from './room/quarter-wave-notch';
 export { summedModalResponse } from './room/summed-modal-response';
+export { pathsThroughRoomPower } from './room/paths-through-room';
 
 export { LAYOUT_TEMPLATES, layoutTemplate, type LayoutChannel, type AngleRangeDeg } from './layout/layout-templates';
 export { speakerAngles } from './layout/speaker-angles';

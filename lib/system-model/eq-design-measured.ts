@@ -10,14 +10,14 @@
  *   as measured, magnitude only (phase not needed, nothing added).
  * Several seats are power-averaged.
  */
-import { logFrequencyGridHz, measuredSeatTransfer, resampleCurve } from '@/dsp';
+import { logFrequencyGridHz, measuredSeatTransfer, pathResponse, pathsThroughRoomPower, resampleCurve } from '@/dsp';
 import { invalid } from '@/lib/errors';
 import { eqDesignMeasuredRequestSchema, type EqDesignMeasuredRequest } from '@/lib/validations/compute-eq-design';
 import type { SystemDocument } from '@/lib/validations/system';
 import { systemChannelSettings } from './channel-settings';
 import { mlpSeat } from './geometry';
 import { roundTo, roundToSignificant } from './rounding';
-import { eqDesignAnswer, lowpassResponse, type EqDesignAnswer, type EqDesignDocumentOptions } from './eq-design';
+import { eqDesignAnswer, lowpassLevelDb, subPath, type EqDesignAnswer, type EqDesignDocumentOptions } from './eq-design';
 
 /** The roles that mark a file measured with every sub playing together. */
 const ALL_SUBS_ROLES: readonly string[] = ['subs', 'all subs'];
@@ -118,45 +118,35 @@ export function computeMeasuredEqDesign(request: EqDesignMeasuredRequest, curves
   const n = f.length;
   const seats: string[] = [];
   for (const m of request.measurements) if (!seats.some((s) => key(s) === key(m.seat))) seats.push(m.seat);
-  const lp = request.lowpass ? lowpassResponse(request.lowpass, request.sampleRateHz, f) : null;
   const power = new Float64Array(n);
   const subs = request.subs ?? [];
   const perSub = request.measurements[0]?.sub !== undefined;
+  // Per-sub files hold no processing: each sub's path (dsp's, as Blend hears it: the crossover low-pass, gain,
+  // polarity, delay; its roll-offs are in the file) is applied here; files of all subs together already hold it.
+  const paths = perSub ? subs.map((sub) => pathResponse(subPath(sub, request.lowpass), f)) : [];
   for (const seat of seats) {
     const index = (sub?: string) => request.measurements.findIndex((m) => key(m.seat) === key(seat) && key(m.sub) === key(sub));
-    const seatPower = new Float64Array(n);
+    let seatPower: Float64Array;
     if (!perSub) {
-      const i = index();
-      const r = resampleCurve({ ...curves[i]!, phaseDeg: undefined, targetHz: f });
-      r.magnitudeDb.forEach((db, k) => (seatPower[k] = Math.pow(10, db / 10)));
+      const r = resampleCurve({ ...curves[index()]!, phaseDeg: undefined, targetHz: f });
+      seatPower = r.magnitudeDb.map((db) => Math.pow(10, db / 10));
     } else if (subs.length === 1 && !curves[index(subs[0]!.name)]!.phaseDeg) {
-      // One sub: its magnitude is all there is to sum; gain and the low-pass apply, delay and polarity change nothing.
+      // One sub without phase: its magnitude is all there is; the path's level applies (delay and polarity change nothing).
       const r = resampleCurve({ ...curves[index(subs[0]!.name)]!, phaseDeg: undefined, targetHz: f });
-      r.magnitudeDb.forEach((db, k) => (seatPower[k] = Math.pow(10, (db + 2 * subs[0]!.gainDb) / 10)));
+      seatPower = r.magnitudeDb.map((db, k) => Math.pow(10, (db + (paths[0]!.magnitudeDb[k] as number)) / 10));
     } else {
-      const re = new Float64Array(n);
-      const im = new Float64Array(n);
-      for (const sub of subs) {
+      const transfers = subs.map((sub) => {
         const i = index(sub.name);
         const c = curves[i]!;
         if (!c.phaseDeg) throw invalid(`${path(i)}: ${sub.name} at ${seat} has no phase. Summing several subs needs phase measured from one timing reference; or upload one file per seat with every sub playing (role "all subs") and leave \`sub\` out.`, [{ path: path(i), message: 'has no phase' }]);
-        const t = measuredSeatTransfer({ frequencyHz: c.frequencyHz, magnitudeDb: c.magnitudeDb, phaseDeg: c.phaseDeg, targetHz: f });
-        const a = Math.pow(10, sub.gainDb / 20) * (sub.invert ? -1 : 1);
-        f.forEach((x, k) => {
-          const w = (-2 * Math.PI * x * sub.delayMs) / 1000;
-          const cr = a * Math.cos(w);
-          const ci = a * Math.sin(w);
-          re[k] = (re[k] as number) + (t.re[k] as number) * cr - (t.im[k] as number) * ci;
-          im[k] = (im[k] as number) + (t.re[k] as number) * ci + (t.im[k] as number) * cr;
-        });
-      }
-      re.forEach((r, k) => (seatPower[k] = r * r + (im[k] as number) * (im[k] as number)));
+        return [measuredSeatTransfer({ frequencyHz: c.frequencyHz, magnitudeDb: c.magnitudeDb, phaseDeg: c.phaseDeg, targetHz: f })];
+      });
+      seatPower = pathsThroughRoomPower(transfers, paths)[0]!;
     }
-    // Per-sub files hold no processing: the crossover low-pass is applied here; files of all subs already hold it.
-    seatPower.forEach((p, k) => (power[k] = (power[k] as number) + (p * (perSub && lp ? Math.pow(10, (lp.magnitudeDb[k] as number) / 10) : 1)) / seats.length));
+    seatPower.forEach((p, k) => (power[k] = (power[k] as number) + p / seats.length));
   }
   const where = seats.length === 1 ? `measured at ${seats[0]}` : `measured, power average of ${seats.length} seats`;
   const how = perSub ? (subs.length === 1 && curves.every((c) => !c.phaseDeg) ? 'the sub alone, magnitude' : 'each sub alone with phase, summed with its present settings') : 'every sub playing together';
-  const curve = { frequencyHz: f, magnitudeDb: power.map((p) => 10 * Math.log10(p + 1e-300)), ...(lp && request.followLowpass ? { targetShapeDb: Float64Array.from(lp.magnitudeDb) } : {}) };
+  const curve = { frequencyHz: f, magnitudeDb: power.map((p) => 10 * Math.log10(p + 1e-300)), ...(request.lowpass && request.followLowpass ? { targetShapeDb: lowpassLevelDb(request.lowpass, f) } : {}) };
   return eqDesignAnswer(curve, request, { source: 'measured', input: `${where} (${how})`, seats });
 }

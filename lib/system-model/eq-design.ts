@@ -2,23 +2,11 @@
  * The EQ designer on a System (issue 16): the request for its subs at the MLP or the seats' average on the modal model
  * (`eqDesignRequestFromDocument`), the compute behind POST /api/v1/eq-design for an inline curve or the model
  * (`computeEqDesign`; stored measurements are in eq-design-measured.ts), and the answer written back as the same EQ on
- * every sub output (`applyEqDesignToDocument`). The mathematics is dsp's: modalTransfers for the room, the processor's
- * biquads for the crossover low-pass and any present EQ, roll-offs from the profiles, designEq for the search.
+ * every sub output (`applyEqDesignToDocument`). The mathematics is dsp's: modalTransfers for the room, each sub's path as
+ * Blend hears it (pathResponse: the crossover low-pass, roll-offs, voicing, EQ, gain, polarity, delay), their sum at the
+ * seats (pathsThroughRoomPower), designEq for the search.
  */
-import {
-  biquadsResponse,
-  crossoverBiquads,
-  designEq,
-  eqBiquad,
-  logFrequencyGridHz,
-  modalTransfers,
-  eqSection,
-  rolloffResponse,
-  sectionsResponse,
-  type EqDesign,
-  type EqTarget,
-  type FilterFamily,
-} from '@/dsp';
+import { designEq, logFrequencyGridHz, modalTransfers, pathResponse, pathsThroughRoomPower, type EqDesign, type EqFilter, type EqTarget, type PathSpec } from '@/dsp';
 import type { EqDesignCurveRequest, EqDesignModelRequest } from '@/lib/validations/compute-eq-design';
 import { eqDesignModelRequestSchema } from '@/lib/validations/compute-eq-design';
 import type { SystemDocument } from '@/lib/validations/system';
@@ -96,63 +84,46 @@ export function eqDesignAnswer(curve: { frequencyHz: Float64Array; magnitudeDb: 
   };
 }
 
-/** The crossover low-pass as the processor runs it (pre-warped bilinear biquads at sampleRateHz): complex, on the grid. */
-export function lowpassResponse(lowpass: { family: FilterFamily; order: number; cornerHz: number }, sampleRateHz: number, frequencyHz: Float64Array) {
-  return biquadsResponse(crossoverBiquads({ kind: 'crossover', family: lowpass.family, order: lowpass.order, response: 'lowpass', cornerHz: lowpass.cornerHz }, sampleRateHz, 'lowpass'), sampleRateHz, frequencyHz);
+/** The crossover low-pass as the model hears it (the same analog filter Blend sums), or a wire. */
+function lowpassFilter(lowpass: EqDesignModelRequest['lowpass']): PathSpec['filter'] {
+  return lowpass ? { family: lowpass.family, order: lowpass.order, response: 'lowpass', cornerHz: lowpass.cornerHz } : { family: 'butterworth', order: 1, response: 'none', cornerHz: 1 };
+}
+
+/** The low-pass's level on the grid (the target's shape when followLowpass), dB. */
+export function lowpassLevelDb(lowpass: EqDesignModelRequest['lowpass'], frequencyHz: Float64Array): Float64Array {
+  return pathResponse({ name: 'low-pass', filter: lowpassFilter(lowpass), gainDb: 0, delayMs: 0, invert: false }, frequencyHz).magnitudeDb;
+}
+
+/**
+ * A sub's path as the model runs it (dsp's path, as Blend sums it): the crossover low-pass, `rolloffs` (its own, when the
+ * curve it meets does not hold them already), its voicing and EQ, gain, polarity and processor delay; no air path (the
+ * room's transfer holds it).
+ */
+export function subPath(sub: { name: string; gainDb: number; delayMs: number; invert: boolean; voicing?: readonly EqFilter[]; eq?: readonly EqFilter[] }, lowpass: EqDesignModelRequest['lowpass'], rolloffs: PathSpec['rolloff'] = []): PathSpec {
+  return { name: sub.name, filter: lowpassFilter(lowpass), rolloff: rolloffs, eq: [...(sub.voicing ?? []), ...(sub.eq ?? [])], gainDb: sub.gainDb, delayMs: sub.delayMs, invert: sub.invert };
 }
 
 /** A level in dB of power |p|² (floored far below anything audible). */
 const powerDb = (power: number) => 10 * Math.log10(power + 1e-300);
 
 /**
- * The model's response the designer works on: at each seat the complex sum of every sub's modal transfer (the same
- * modal sum as Modes and Seat balance) × its gain, polarity and processor delay × its roll-offs × its voicing (analog
- * prototypes, as Blend hears them) × any EQ the processor already runs on it, × the crossover low-pass; at one seat, or the power average over the seats. dB re 1 Pa per m³/s. Also the
- * low-pass's level, the target's shape when followLowpass.
+ * The model's response the designer works on: at each seat every sub's modal transfer (the same modal sum as Modes and
+ * Seat balance) times its path (dsp's pathResponse: the crossover low-pass, roll-offs, voicing, any EQ it already runs,
+ * gain, polarity, processor delay), summed by dsp's pathsThroughRoomPower; at one seat, or the power average over the
+ * seats. dB re 1 Pa per m³/s. Also the low-pass's level, the target's shape when followLowpass.
  */
 export function eqDesignModelCurve(r: EqDesignModelRequest): { frequencyHz: Float64Array; magnitudeDb: Float64Array; targetShapeDb?: Float64Array; seats: string[] } {
   const f = logFrequencyGridHz(r.grid);
   const seats = r.at.toLowerCase() === 'average' ? r.seats : r.seats.filter((s) => s.name.toLowerCase() === r.at.toLowerCase());
   const t = modalTransfers({ room: r.room, sourcesM: r.subs.map(toPointM), receiversM: seats.map(toPointM), frequencyHz: f, rt60S: r.room.rt60S, temperatureC: r.room.temperatureC, maxModeHz: 1.5 * r.grid.stopHz });
-  const n = f.length;
-  // Each sub's own path: gain, polarity, delay, roll-offs, EQ.
-  const paths = r.subs.map((sub) => {
-    const a = Math.pow(10, sub.gainDb / 20) * (sub.invert ? -1 : 1);
-    const re = Float64Array.from(f, (x) => a * Math.cos((-2 * Math.PI * x * sub.delayMs) / 1000));
-    const im = Float64Array.from(f, (x) => a * Math.sin((-2 * Math.PI * x * sub.delayMs) / 1000));
-    const parts = [
-      ...(sub.rolloffs.length > 0 ? [rolloffResponse({ rolloff: sub.rolloffs, frequencyHz: f })] : []),
-      ...(sub.voicing.length > 0 ? [sectionsResponse(sub.voicing.map((e, i) => eqSection(e, `voicing[${i}]`)), f)] : []),
-      ...(sub.eq.length > 0 ? [biquadsResponse(sub.eq.map((e, i) => eqBiquad(e, r.sampleRateHz, `eq[${i}]`)), r.sampleRateHz, f)] : []),
-    ];
-    for (const p of parts) {
-      for (let i = 0; i < n; i++) {
-        const x = (re[i] as number) * (p.re[i] as number) - (im[i] as number) * (p.im[i] as number);
-        im[i] = (re[i] as number) * (p.im[i] as number) + (im[i] as number) * (p.re[i] as number);
-        re[i] = x;
-      }
-    }
-    return { re, im };
-  });
-  const lp = r.lowpass ? lowpassResponse(r.lowpass, r.sampleRateHz, f) : null;
-  const power = new Float64Array(n);
-  seats.forEach((_, k) => {
-    for (let i = 0; i < n; i++) {
-      let sr = 0;
-      let si = 0;
-      paths.forEach((p, s) => {
-        const h = t.transfers[s]![k]!;
-        sr += (h.re[i] as number) * (p.re[i] as number) - (h.im[i] as number) * (p.im[i] as number);
-        si += (h.re[i] as number) * (p.im[i] as number) + (h.im[i] as number) * (p.re[i] as number);
-      });
-      const g = lp ? Math.pow(10, (lp.magnitudeDb[i] as number) / 10) : 1;
-      power[i] = (power[i] as number) + ((sr * sr + si * si) * g) / seats.length;
-    }
-  });
+  const paths = r.subs.map((sub) => pathResponse(subPath(sub, r.lowpass, sub.rolloffs), f, r.room.temperatureC));
+  const perSeat = pathsThroughRoomPower(t.transfers, paths);
+  const power = new Float64Array(f.length);
+  for (const p of perSeat) p.forEach((x, i) => (power[i] = (power[i] as number) + x / perSeat.length));
   return {
     frequencyHz: f,
     magnitudeDb: power.map(powerDb),
-    ...(lp && r.followLowpass ? { targetShapeDb: Float64Array.from(lp.magnitudeDb) } : {}),
+    ...(r.lowpass && r.followLowpass ? { targetShapeDb: lowpassLevelDb(r.lowpass, f) } : {}),
     seats: seats.map((s) => s.name),
   };
 }
