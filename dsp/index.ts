@@ -10,7 +10,7 @@ export { nominalMidbandHz } from './grid/nominal-midband-frequency';
 export type { FilterFamily, FilterSpec, FilterShape, RolloffSpec, RolloffChain, AnalogSection } from './filters/filter-types';
 export { butterworthQ } from './filters/butterworth-q';
 export { filterSections, rolloffSections } from './filters/analog-sections';
-export { filterResponse, rolloffResponse, secondOrderSectionResponse, sectionsResponse } from './filters/filter-response';
+export { filterResponse, rolloffResponse, secondOrderSectionResponse } from './filters/filter-response';
 export { BIQUAD_CONVENTION, type Biquad, type EqFilter, type AllpassFilter, type CrossoverFilter, type ProcessorFilter } from './filters/filter-types';
 export { eqSection, eqSections, EQ_LIMITS } from './filters/eq-sections';
 export { SAMPLE_RATE_LIMITS_HZ, COMMON_SAMPLE_RATES_HZ } from './filters/sample-rate';

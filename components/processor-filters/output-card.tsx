@@ -2,7 +2,7 @@
 
 import { Notice } from '@/components/ui/notice';
 import { outputLines, sectionLine } from '@/lib/system-model/processor-filter-exports';
-import { deviationWords, numberedSections, type OutputGroup } from '@/lib/system-model/processor-filters';
+import { deviationWords, groupVoicing, numberedSections, VOICING_NOTE, type OutputGroup } from '@/lib/system-model/processor-filters';
 import { CopyButton } from './copy-button';
 import { DigitalAnalogPlot } from './digital-analog-plot';
 
@@ -16,7 +16,8 @@ function groupTitle(g: OutputGroup): string {
 }
 
 /**
- * One processor output (or several that run the same filters): the filters in words, the sections as a table at full
+ * One processor output (or several that run the same filters): the filters in words (and the speaker's own voicing
+ * switches, which are not processor sections), the sections as a table at full
  * precision with a copy button each and one for the whole output, the deviation from the analog filters in words, and
  * the digital-against-analog plot.
  */
@@ -39,6 +40,12 @@ export function OutputCard({ group, frequencyHz }: { group: OutputGroup; frequen
             </li>
           ))}
         </ol>
+        {groupVoicing(group).map((v) => (
+          <p key={v.text} className="text-xs text-ink-soft wrap-anywhere" data-testid={`pf-voicing-${o.id}`}>
+            {VOICING_NOTE}
+            {v.labels ? ` (${v.labels.join(', ')})` : ''}: {v.text}
+          </p>
+        ))}
       </header>
       {o.problem ? (
         <Notice kind="error" title="Not computed at this sample rate">

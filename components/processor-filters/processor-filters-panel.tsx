@@ -5,7 +5,7 @@ import { useSystem } from '@/components/system/system-context';
 import { Notice } from '@/components/ui/notice';
 import { COEFFICIENT_SIGN_NOTE, groupOutputs, LFE_NOTE, processorFiltersFromDocument } from '@/lib/system-model/processor-filters';
 import { ProcessorFilterDownloads } from './downloads';
-import { EqDesignerSlot } from './eq-designer-slot';
+import { EqDesigner } from './eq-designer';
 import { OutputCard } from './output-card';
 import { SampleRatePicker } from './sample-rate-picker';
 import { SubEqEditor } from './sub-eq-editor';
@@ -13,7 +13,7 @@ import { SubEqEditor } from './sub-eq-editor';
 /**
  * Processor filters: every filter of the finished System as the digital biquads a processor runs at its sample rate —
  * each main channel's high-pass, each sub's low-pass and EQ, the LFE low-pass — with the convention, copy buttons and
- * downloads, the digital filters against their analog prototypes, and each sub's EQ to edit.
+ * downloads, the digital filters against their analog prototypes, each sub's EQ to edit and the EQ designer for the subs.
  */
 export function ProcessorFiltersPanel() {
   const { doc } = useSystem();
@@ -53,7 +53,7 @@ export function ProcessorFiltersPanel() {
         ) : (
           <p className="text-sm text-ink-soft">This System has no subs.</p>
         )}
-        <EqDesignerSlot />
+        <EqDesigner />
       </section>
 
       <section aria-labelledby="pf-outputs" className="flex min-w-0 flex-col gap-3">

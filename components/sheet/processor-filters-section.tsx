@@ -1,4 +1,4 @@
-import { COEFFICIENT_SIGN_NOTE } from '@/lib/system-model/processor-filters';
+import { COEFFICIENT_SIGN_NOTE, VOICING_NOTE } from '@/lib/system-model/processor-filters';
 import type { SettingsSheet } from '@/lib/system-model/settings-sheet';
 
 const COEFFICIENTS = ['b0', 'b1', 'b2', 'a1', 'a2'] as const;
@@ -26,6 +26,12 @@ export function ProcessorFiltersSection({ sheet }: { sheet: SettingsSheet }) {
             {g.kind === 'main' ? `Main channels ${g.labels.join(', ')}` : g.labels.join(', ')}
             <span className="font-normal text-ink-soft"> — {g.filters.map((f) => f.words).join('; ')}</span>
           </h3>
+          {g.voicing.map((v) => (
+            <p key={v.text} className="text-xs text-ink-soft" data-testid={`sheet-pf-voicing-${g.id}`}>
+              {VOICING_NOTE}
+              {v.labels ? ` (${v.labels.join(', ')})` : ''}: {v.text}
+            </p>
+          ))}
           {g.problem ? (
             <p className="text-sm text-fail">Not computed: {g.problem}</p>
           ) : (

@@ -8,7 +8,9 @@
 import { BIQUAD_CONVENTION, logFrequencyGridHz, processorFilters, type DigitalDeviation, type FilterFamily, type ProcessorFilter, type ProcessorFiltersResult, type ProcessorSection } from '@/dsp';
 import type { ProcessorFiltersRequest } from '@/lib/validations/compute-processor-filters';
 import type { Slope, SystemDocument } from '@/lib/validations/system';
+import { profileById } from './geometry';
 import { roundAllTo, roundTo, roundToSignificant } from './rounding';
+import { voicingSummary } from './voicing';
 
 /** What a filter does on an output: part of bass management, or equalisation. */
 export type ProcessorFilterRole = 'crossover' | 'eq';
@@ -30,6 +32,11 @@ export interface ProcessorOutput {
   /** The biquads, responses and deviation; null when a filter cannot run at this sample rate (see `problem`). */
   result: ProcessorFiltersResult | null;
   problem: string | null;
+  /**
+   * The positions of the speaker's own back-panel switches (Voicing options), in words ("Treble: +2 dB · Placement: Near a
+   * wall"); set on the speaker, not in the processor, so not among `filters`. Null without switches (and for the LFE).
+   */
+  voicing: string | null;
 }
 
 export interface SystemProcessorFilters {
@@ -87,18 +94,18 @@ export function filterWords(filter: ProcessorFilter): string {
 
 const filterFrequencyHz = (f: ProcessorFilter) => (f.kind === 'peaking' ? f.centerHz : f.cornerHz);
 
-function output(id: string, kind: ProcessorOutput['kind'], label: string, list: { role: ProcessorFilterRole; filter: ProcessorFilter }[], sampleRateHz: number, frequencyHz: Float64Array): ProcessorOutput {
+function output(id: string, kind: ProcessorOutput['kind'], label: string, list: { role: ProcessorFilterRole; filter: ProcessorFilter }[], sampleRateHz: number, frequencyHz: Float64Array, voicing: string | null = null): ProcessorOutput {
   const filters = list.map((f) => ({ ...f, words: filterWords(f.filter) }));
   const nyquistHz = sampleRateHz / 2;
   const tooHigh = filters.filter((f) => filterFrequencyHz(f.filter) >= nyquistHz);
   if (tooHigh.length) {
     const which = tooHigh.map((f) => f.words).join('; ');
-    return { id, kind, label, filters, result: null, problem: `${which}: at or above the Nyquist frequency (${hz(nyquistHz)} at ${hz(sampleRateHz)}), so no digital filter can run it. Raise the sample rate or lower the filter.` };
+    return { id, kind, label, filters, result: null, problem: `${which}: at or above the Nyquist frequency (${hz(nyquistHz)} at ${hz(sampleRateHz)}), so no digital filter can run it. Raise the sample rate or lower the filter.`, voicing };
   }
   try {
-    return { id, kind, label, filters, result: processorFilters({ sampleRateHz, filters: filters.map((f) => f.filter), frequencyHz }), problem: null };
+    return { id, kind, label, filters, result: processorFilters({ sampleRateHz, filters: filters.map((f) => f.filter), frequencyHz }), problem: null, voicing };
   } catch (error) {
-    if (error instanceof RangeError) return { id, kind, label, filters, result: null, problem: error.message };
+    if (error instanceof RangeError) return { id, kind, label, filters, result: null, problem: error.message, voicing };
     throw error;
   }
 }
@@ -108,7 +115,8 @@ const crossover = (response: 'highpass' | 'lowpass', slope: Slope, cornerHz: num
 /**
  * Every output of the finished System as the processor runs it, at the document's sample rate (or `sampleRateHz`):
  * each main channel's high-pass (crossover at bassManagement.crossoverHz, mainsHighpass slope); each sub's low-pass
- * (subLowpass slope) then its EQ; and, with subs, the LFE input's low-pass (LFE_LOWPASS_SLOPE at lfeLowpassHz).
+ * (subLowpass slope) then its EQ; and, with subs, the LFE input's low-pass (LFE_LOWPASS_SLOPE at lfeLowpassHz). Each
+ * main and sub output also names its speaker's voicing switch positions (`voicing`), which the speaker runs itself.
  */
 export function processorFiltersFromDocument(doc: SystemDocument, options: { sampleRateHz?: number } = {}): SystemProcessorFilters {
   const bm = doc.bassManagement;
@@ -117,9 +125,9 @@ export function processorFiltersFromDocument(doc: SystemDocument, options: { sam
   const highpass = crossover('highpass', bm.mainsHighpass, bm.crossoverHz);
   const lowpass = crossover('lowpass', bm.subLowpass, bm.crossoverHz);
   const outputs: ProcessorOutput[] = [
-    ...doc.speakers.map((s) => output(`main-${s.id}`, 'main', s.channel, [{ role: 'crossover', filter: highpass }], sampleRateHz, frequencyHz)),
+    ...doc.speakers.map((s) => output(`main-${s.id}`, 'main', s.channel, [{ role: 'crossover', filter: highpass }], sampleRateHz, frequencyHz, voicingSummary(profileById(doc, s.profileId), s.voicing))),
     ...doc.subs.map((s) =>
-      output(`sub-${s.id}`, 'sub', s.name, [{ role: 'crossover', filter: lowpass }, ...s.eq.map((filter) => ({ role: 'eq' as const, filter }))], sampleRateHz, frequencyHz),
+      output(`sub-${s.id}`, 'sub', s.name, [{ role: 'crossover', filter: lowpass }, ...s.eq.map((filter) => ({ role: 'eq' as const, filter }))], sampleRateHz, frequencyHz, voicingSummary(profileById(doc, s.profileId), s.voicing)),
     ),
     ...(doc.subs.length ? [output('lfe', 'lfe', 'LFE', [{ role: 'crossover', filter: crossover('lowpass', LFE_LOWPASS_SLOPE, bm.lfeLowpassHz) }], sampleRateHz, frequencyHz)] : []),
   ];
@@ -160,6 +168,21 @@ export function groupOutputs(outputs: readonly ProcessorOutput[]): OutputGroup[]
     } else groups.set(key, { key, kind: o.kind, labels: [o.label], outputs: [o], first: o });
   }
   return [...groups.values()];
+}
+
+/** What the voicing lines of an output card and of the Settings sheet begin with. */
+export const VOICING_NOTE = 'Set on the speaker, not in the processor';
+
+/**
+ * The voicing of a group's outputs, one line per distinct setting: without labels when every output of the group has
+ * the same (or the group has one output), else with the labels of the outputs set alike. Outputs without switches are
+ * left out; none at all gives [].
+ */
+export function groupVoicing(group: Pick<OutputGroup, 'outputs'>): { labels: string[] | null; text: string }[] {
+  const lines = new Map<string, string[]>();
+  for (const o of group.outputs) if (o.voicing !== null) lines.set(o.voicing, [...(lines.get(o.voicing) ?? []), o.label]);
+  const alike = lines.size === 1 && [...lines.values()][0]!.length === group.outputs.length;
+  return [...lines].map(([text, labels]) => ({ labels: alike ? null : labels, text }));
 }
 
 /** The sections of an output numbered within it (1, 2, …), each with its filter's index in `filters`. */

@@ -11,7 +11,7 @@ import { roomModes, schroederFrequencyHz, SETTING_RESOLUTION, type ModeKind } fr
 import type { Slope, SystemDocument } from '@/lib/validations/system';
 import { systemChannelSettings } from './channel-settings';
 import { mlpSeat, profileById } from './geometry';
-import { deviationWords, groupOutputs, LFE_NOTE, numberedSections, processorFiltersFromDocument, type OutputGroup } from './processor-filters';
+import { deviationWords, groupOutputs, groupVoicing, LFE_NOTE, numberedSections, processorFiltersFromDocument, type OutputGroup } from './processor-filters';
 import type { SeatBalanceSummary } from './seat-balance';
 import { seatBalanceStateFromDocument } from './seat-balance-document';
 
@@ -83,6 +83,8 @@ interface SheetFilterGroup {
   /** The digital filters against the analog ones, in words; null when not computed. */
   deviation: string | null;
   problem: string | null;
+  /** The speakers' own switch positions (set on the speaker, not in the processor): groupVoicing's lines. */
+  voicing: { labels: string[] | null; text: string }[];
 }
 
 /** Every processor output's biquads at the System's sample rate (processorFiltersFromDocument, as the panel shows them). */
@@ -179,7 +181,7 @@ export function computeSettingsSheet(doc: SystemDocument): SettingsSheet {
 
 function processorFiltersOf(doc: SystemDocument): SheetProcessorFilters {
   const pf = processorFiltersFromDocument(doc);
-  const groups = groupOutputs(pf.outputs).map(({ key, kind, labels, first }) => ({
+  const groups = groupOutputs(pf.outputs).map(({ key, kind, labels, first, outputs }) => ({
     key,
     id: first.id,
     kind,
@@ -188,6 +190,7 @@ function processorFiltersOf(doc: SystemDocument): SheetProcessorFilters {
     sections: numberedSections(first),
     deviation: first.result ? deviationWords(first.result.deviation) : null,
     problem: first.problem,
+    voicing: groupVoicing({ outputs }),
   }));
   return { sampleRateHz: pf.sampleRateHz, convention: pf.convention, groups, lfeNote: pf.outputs.some((o) => o.kind === 'lfe') ? LFE_NOTE : null };
 }

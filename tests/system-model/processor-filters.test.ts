@@ -1,8 +1,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { crossoverBiquads, eqBiquad, type Biquad } from '@/dsp';
-import { deviationWords, groupOutputs, processorFiltersFromDocument, processorGridHz } from '@/lib/system-model/processor-filters';
-import { testSystem, withSub } from './test-system';
+import { deviationWords, groupOutputs, groupVoicing, processorFiltersFromDocument, processorGridHz } from '@/lib/system-model/processor-filters';
+import type { SpeakerProfile, SystemDocument } from '@/lib/validations/system';
+import { TEST_MAIN, TEST_SUB, testSystem, withSub } from './test-system';
 
 // The System's processor outputs as digital biquads. The invented test System: L, C, R high-passed (Butterworth 2nd
 // order at 80 Hz), Sub A and Sub B low-passed (Linkwitz–Riley 4th order at 80 Hz), LFE low-pass at 120 Hz, 48 kHz.
@@ -126,6 +127,67 @@ describe('groupOutputs: outputs that run the same filters are shown once', () =>
     const apart = groupOutputs(processorFiltersFromDocument(withSub(testSystem(), 1, { eq: [PEAK] })).outputs);
     expect(apart.map((g) => g.labels)).toEqual([['L', 'C', 'R'], ['Sub A'], ['Sub B'], ['LFE']]);
     expect(apart[2]!.first.id).toBe('sub-sub-b');
+  });
+});
+
+// Invented back-panel switches for the voicing checks: a treble shelf on the mains, a boundary shelf on the subs.
+const TREBLE: SpeakerProfile['voicingOptions'][number] = {
+  id: 'treble',
+  name: 'Treble',
+  positions: [
+    { id: 'flat', name: '0 dB', filters: [] },
+    { id: 'up2', name: '+2 dB', filters: [{ kind: 'high-shelf', cornerHz: 3000, gainDb: 2, slope: 1 }] },
+  ],
+};
+const BOUNDARY: SpeakerProfile['voicingOptions'][number] = {
+  id: 'boundary',
+  name: 'Boundary',
+  positions: [
+    { id: 'open', name: 'Open', filters: [] },
+    { id: 'wall', name: 'Near a wall', filters: [{ kind: 'low-shelf', cornerHz: 60, gainDb: -2, slope: 1 }] },
+  ],
+};
+
+function voicedSystem(): SystemDocument {
+  const doc = testSystem();
+  doc.profiles = doc.profiles.map((p) => (p.id === TEST_MAIN.id ? { ...p, voicingOptions: [TREBLE] } : p.id === TEST_SUB.id ? { ...p, voicingOptions: [BOUNDARY] } : p));
+  doc.speakers = doc.speakers.map((s) => (s.channel === 'R' ? { ...s, voicing: { treble: 'up2' } } : s));
+  doc.subs = doc.subs.map((s) => ({ ...s, voicing: { boundary: 'wall' } }));
+  return doc;
+}
+
+describe('the voicing each output’s speaker is set to: listed, never a processor section', () => {
+  it('each main and sub output names its switch positions; the LFE none; the filters and sections are the processor’s alone', () => {
+    const plain = processorFiltersFromDocument(testSystem());
+    expect(plain.outputs.map((o) => o.voicing)).toEqual([null, null, null, null, null, null]);
+    const pf = processorFiltersFromDocument(voicedSystem());
+    expect(pf.outputs.map((o) => [o.label, o.voicing])).toEqual([
+      ['L', 'Treble: 0 dB'],
+      ['C', 'Treble: 0 dB'],
+      ['R', 'Treble: +2 dB'],
+      ['Sub A', 'Boundary: Near a wall'],
+      ['Sub B', 'Boundary: Near a wall'],
+      ['LFE', null],
+    ]);
+    // The voicing shelves are the speaker's: not among the output's filters, not a section.
+    pf.outputs.forEach((o, i) => {
+      expect(o.filters).toEqual(plain.outputs[i]!.filters);
+      expect(o.result!.sections).toEqual(plain.outputs[i]!.result!.sections);
+    });
+  });
+
+  it('groupVoicing: one line for a group set alike, a line per setting (with its labels) when they differ, none without switches', () => {
+    const groups = groupOutputs(processorFiltersFromDocument(voicedSystem()).outputs);
+    expect(groups.map((g) => g.labels)).toEqual([['L', 'C', 'R'], ['Sub A', 'Sub B'], ['LFE']]);
+    expect(groups.map((g) => groupVoicing(g))).toEqual([
+      [
+        { labels: ['L', 'C'], text: 'Treble: 0 dB' },
+        { labels: ['R'], text: 'Treble: +2 dB' },
+      ],
+      [{ labels: null, text: 'Boundary: Near a wall' }],
+      [],
+    ]);
+    expect(groupOutputs(processorFiltersFromDocument(testSystem()).outputs).map((g) => groupVoicing(g))).toEqual([[], [], []]);
   });
 });
 
