@@ -18,7 +18,7 @@ export function ProcessorFiltersSection({ sheet }: { sheet: SettingsSheet }) {
       </h2>
       <p className="text-sm">
         Sample rate <span className="num font-semibold" data-testid="sheet-pf-rate">{pf.sampleRateHz} Hz</span>. Every section in the convention{' '}
-        <span className="num whitespace-nowrap font-semibold">{pf.convention}</span>. {COEFFICIENT_SIGN_NOTE}
+        <span className="num font-semibold wrap-anywhere sm:whitespace-nowrap">{pf.convention}</span>. {COEFFICIENT_SIGN_NOTE}
       </p>
       {pf.groups.map((g) => (
         <div key={g.key} className="sheet-block flex flex-col gap-1 border-t border-line pt-2">

@@ -6,7 +6,8 @@ import { encodeDocument } from '../../lib/client/url-state';
 import { juniperLaneDocument } from '../../lib/demo/systems';
 
 // Processor filters (issue 16) in the browser, on a copy of the invented demo System (deleted after, so the demo stays
-// as seeded): pick 96 kHz, copy a section, download the CSV, save, and find the same sections on the Settings sheet.
+// as seeded): pick 96 kHz, copy a section, download the CSV, design and apply the subs' EQ, save, and find the same
+// sections on the Settings sheet.
 
 async function signIn(page: Page) {
   await page.goto('/sign-in');
@@ -16,7 +17,7 @@ async function signIn(page: Page) {
   await page.waitForURL(/\/library/, { timeout: 60_000 });
 }
 
-test('Processor filters on the Juniper Lane screening room: 96 kHz, a section copied, the CSV downloaded, the same sections on the Settings sheet', async ({ page, context }) => {
+test('Processor filters on the Juniper Lane screening room: 96 kHz, a section copied, the CSV downloaded, the subs’ EQ designed and applied, the same sections on the Settings sheet', async ({ page, context }) => {
   test.setTimeout(240_000);
   await context.grantPermissions(['clipboard-read', 'clipboard-write']);
   await signIn(page);
@@ -59,6 +60,29 @@ test('Processor filters on the Juniper Lane screening room: 96 kHz, a section co
     // 11 mains × 1, 2 subs × 2 (LR4), the LFE × 2.
     expect(csv.filter((l) => l !== '')).toHaveLength(1 + 11 + 4 + 2);
 
+    // The EQ designer on the demo's subs (model at the MLP): the residual after no worse than before, the filters in a
+    // table; Apply writes them to every sub's EQ, and each sub output's sections grow by one per filter.
+    const subSections = page.locator('[data-testid^="pf-section-sub-sub1-"]');
+    await expect(subSections).toHaveCount(2); // LR4 low-pass: two sections, no EQ yet
+    await expect(page.getByTestId('pf-eq-sub1')).toContainText('No EQ on this sub.');
+    await page.getByTestId('eqd-run').click();
+    await expect(page.getByTestId('eqd-residual-after')).toBeVisible({ timeout: 60_000 });
+    await expect(page.getByTestId('eqd-input')).toContainText('model at Row 1 centre');
+    const rmsOf = async (testId: string) => Number(/([\d.]+) dB RMS/.exec((await page.getByTestId(testId).textContent()) ?? '')?.[1]);
+    const beforeRms = await rmsOf('eqd-residual-before');
+    const afterRms = await rmsOf('eqd-residual-after');
+    expect(afterRms).toBeLessThanOrEqual(beforeRms);
+    const filterRows = page.getByTestId('eqd-filters').locator('tbody tr');
+    const n = await filterRows.count();
+    expect(n).toBeGreaterThan(0);
+    await expect(page.getByTestId('eqd-caution')).toContainText('check the Headroom tab after EQ');
+    await page.getByTestId('eqd-apply').click();
+    await expect(page.getByText('Applied to every sub output')).toBeVisible();
+    for (const sub of demo.subs) await expect(page.getByTestId(`pf-eq-${sub.id}`).locator('fieldset')).toHaveCount(n);
+    await expect(subSections).toHaveCount(2 + n);
+    await page.getByTestId('eqd-check').click();
+    await expect(page.getByTestId('eqd-promised')).toBeVisible({ timeout: 60_000 });
+
     expect(await seriousViolations(page, 'Processor filters', '[role=tabpanel]')).toEqual([]);
 
     await page.getByTestId('save-button').click();
@@ -68,6 +92,7 @@ test('Processor filters on the Juniper Lane screening room: 96 kHz, a section co
     const sheetRow = page.getByTestId(`sheet-pf-${mainId}-1`);
     for (const value of [hp!.b0, hp!.b1, hp!.b2, hp!.a1, hp!.a2]) await expect(sheetRow).toContainText(String(value));
     await expect(page.getByTestId('sheet-processor-filters')).toContainText('Low-pass, Linkwitz–Riley 4th order (24 dB/oct), 80 Hz');
+    await expect(page.locator('[data-testid^="sheet-pf-sub-sub1-"]')).toHaveCount(2 + n); // the applied EQ, on the sheet too
   } finally {
     expect((await page.request.delete(`/api/v1/systems/${copyId}`)).status()).toBe(200);
   }
