@@ -3,6 +3,7 @@
 // demo's two front-corner subs through an LR4 low-pass at 80 Hz, 48 kHz) at the MLP and averaged over its three seats,
 // and on seeded synthetic responses (random peaks, dips and a tilt). Median wall time and CPU time per design, in ms.
 import { designEq } from '../../dsp';
+import { seededRandom } from '../../dsp/internal/seeded-random';
 import { eqDesignModelCurve } from '../../lib/system-model/eq-design';
 import { eqDesignModelRequestSchema } from '../../lib/validations/compute-eq-design';
 
@@ -18,21 +19,9 @@ const SUBS = [
   { name: 'Sub front right', xM: 4.6, yM: 0.3, zM: 0.3, rolloffs, delayMs: 0.4 },
 ];
 
-/** Seeded uniform numbers in [0, 1) (mulberry32, common practice), so every run benches the same responses. */
-function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 /** A synthetic response: a tilt plus six resonances and dips of random centre, height and width (dB). */
 function synthetic(frequencyHz: Float64Array, seed: number): Float64Array {
-  const random = seeded(seed);
+  const random = seededRandom(seed);
   const tiltDbPerOctave = 6 * random() - 3;
   const bumps = Array.from({ length: 6 }, () => ({ hz: 20 * Math.pow(6, random()), db: 24 * random() - 12, octaves: 0.05 + 0.4 * random() }));
   return frequencyHz.map((f) => tiltDbPerOctave * Math.log2(f / 50) + bumps.reduce((s, b) => s + b.db * Math.exp(-0.5 * (Math.log2(f / b.hz) / b.octaves) ** 2), 0));
