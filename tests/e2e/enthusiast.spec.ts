@@ -65,7 +65,7 @@ test('save, share, open signed out, revoke, 404; print the Settings sheet', asyn
   for (const panel of ['shared-blend', 'shared-timing', 'shared-modes']) {
     await expect(anon.getByTestId(panel).locator('svg').first()).toBeVisible({ timeout: 30_000 });
   }
-  await expect(anon.getByRole('heading', { name: 'Main channels' })).toBeVisible();
+  await expect(anon.getByRole('heading', { level: 2, name: 'Main channels' })).toBeVisible();
   await expect(anon.getByRole('link', { name: 'Sign in to copy to your Library' })).toBeVisible();
   await anon.screenshot({ path: path.join(OUT, 'shared-page.png'), fullPage: false });
 
