@@ -69,7 +69,7 @@ export function EqDesignerApply({ answer, check, stale, readOnly, subs, applied,
             Apply to every sub
           </Button>
           <p className="text-sm text-ink-soft">
-            Writes {these} as the EQ of {subs.length === 1 ? 'the sub' : `all ${subs.length} subs`}
+            Writes {these} as the EQ of {subs.length === 1 ? 'the sub' : subs.length === 2 ? 'both subs' : `all ${subs.length} subs`}
             {replaced.length ? `, replacing the EQ they run now (${replaced.map((s) => `${s.name}: ${s.eqCount} filter${s.eqCount === 1 ? '' : 's'}`).join(', ')})` : ''}.
           </p>
         </div>
