@@ -39,9 +39,9 @@ export function EqDesignerApply({ answer, check, stale, readOnly, subs, applied,
           <p>This run included the EQ the subs run now, so it is not applied (Apply replaces the subs’ EQ). Untick “Include the EQ the subs run now” to design.</p>
           {applied ? (
             <p className="mt-1" data-testid="eqd-promised">
-              The design applied last promised {formatNumber(applied.after.rmsDb, 2)} dB RMS, {formatNumber(applied.after.maxDb, 2)} dB at most. This check measures from the
-              target level it finds again (the median in the band,{' '}
-              {formatSigned(answer.levelOffsetDb - applied.levelOffsetDb, 'dB', 2)} from the design’s), so its figures can differ a little.
+              The design applied last promised {formatNumber(applied.after.rmsDb, 2)} dB RMS, {formatNumber(applied.after.maxDb, 2)} dB at most; with its EQ on, the subs now
+              measure {formatNumber(answer.residual.before.rmsDb, 2)} dB RMS, {formatNumber(answer.residual.before.maxDb, 2)} dB at most, against the same target
+              {Math.abs(answer.levelOffsetDb - applied.levelOffsetDb) > 0.005 ? ` (${formatSigned(answer.levelOffsetDb - applied.levelOffsetDb, 'dB', 2)} from the design’s level)` : ''}.
             </p>
           ) : null}
         </Notice>

@@ -84,11 +84,12 @@ export function EqDesigner() {
     setApplied(null);
   };
 
-  // The check after Apply: the model with the EQ the subs now run, at the same options.
+  // The check after Apply: the model with the EQ the subs now run, at the same options and against the design's own
+  // target level, so the check's "before" is exactly what the applied EQ achieves.
   const onCheck =
     appliedHere && done?.used === null && reading.ok
       ? () => {
-          const r = eqDesignRequestFromDocument(doc, { ...reading.options, withPresentEq: true });
+          const r = eqDesignRequestFromDocument(doc, { ...reading.options, withPresentEq: true, targetLevelDb: appliedHere.promise.levelOffsetDb });
           setDraft((d) => ({ ...d, source: 'model', withPresentEq: true }));
           if (r.ok) runModel(r.request, true);
         }

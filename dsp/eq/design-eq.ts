@@ -49,6 +49,11 @@ export interface EqDesignOptions {
   readonly sampleRateHz?: number;
   /** A dip this far below the level around it is a null (see findNulls), dB; default 8. */
   readonly nullDepthDb?: number;
+  /**
+   * Where the target sits, in the response's units, dB; default the median of (response − shape) over the band outside
+   * the nulls. Give a design's own levelOffsetDb to measure a curve against that design's target (a check after Apply).
+   */
+  readonly targetLevelDb?: number;
 }
 
 /** The answer of {@link designEq}. */
@@ -157,7 +162,8 @@ export function designEq(options: EqDesignOptions): EqDesign {
   const keep = (i: number) => !inNull(i);
   const kept: number[] = [];
   for (let i = lo; i <= hi; i++) if (keep(i)) kept.push(deviation[i] as number);
-  const levelOffsetDb = median(kept.length > 0 ? kept : Array.from(deviation.subarray(lo, hi + 1)));
+  if (options.targetLevelDb !== undefined && !Number.isFinite(options.targetLevelDb)) throw new RangeError(`targetLevelDb must be a finite number (got ${String(options.targetLevelDb)})`);
+  const levelOffsetDb = options.targetLevelDb ?? median(kept.length > 0 ? kept : Array.from(deviation.subarray(lo, hi + 1)));
   const weights = logShareWeights(f, lo, hi, keep);
   // A filter narrower than two grid steps could hide between the points: Q is held to what the grid resolves.
   let stepOctaves = 0;

@@ -45,6 +45,7 @@ export const EQ_DESIGN_DOCS: ApiRouteDoc[] = [
       { name: 'q', type: '{ min, max }', description: `The filters’ Q range, 0.1–20 (default ${D.q.min}–${D.q.max}).` },
       { name: 'sampleRateHz', type: 'number 8000–384000', unit: 'Hz', description: `The processor’s sample rate (default ${D.sampleRateHz}): the filters are evaluated, and their sections given, as its digital biquads.` },
       { name: 'nullDepthDb', type: 'number 3–40', unit: 'dB', description: `How far a dip must lie below the level around it to count as a null (default ${D.nullDepthDb} dB).` },
+      { name: 'targetLevelDb', type: 'number −500–500', unit: 'dB', description: 'Where the target sits, in the input’s units (default: the median of input − target shape in the band, outside the nulls). Send a design’s levelOffsetDb with the EQ applied to check it against that design’s own target: its residual before is then what the applied EQ achieves.' },
     ],
     answer: [
       { name: 'filters', type: "{ kind: 'peaking', centerHz, gainDb, q }[]", description: 'The filters to set on every sub output (one common EQ), rounded as a processor takes them: 0.1 Hz, 0.1 dB, Q 0.01. Never a gain above maxBoostDb, never a boost reaching a null. Empty when nothing helps.' },

@@ -46,7 +46,7 @@ export interface EqDesignAnswer {
 const EQ_DESIGN_CAUTION = 'Boosting the sub’s low end costs amplifier and driver headroom; check the Headroom tab after EQ, and keep listening levels safe.';
 
 /** The designer's options as the requests carry them. */
-type DesignChoices = Pick<EqDesignModelRequest, 'target' | 'band' | 'maxFilters' | 'maxBoostDb' | 'maxCutDb' | 'q' | 'sampleRateHz' | 'nullDepthDb'>;
+type DesignChoices = Pick<EqDesignModelRequest, 'target' | 'band' | 'maxFilters' | 'maxBoostDb' | 'maxCutDb' | 'q' | 'sampleRateHz' | 'nullDepthDb' | 'targetLevelDb'>;
 
 /** One design, shaped for the answer: curves relative to the target's level, rounded at the edge. */
 export function eqDesignAnswer(curve: { frequencyHz: Float64Array; magnitudeDb: Float64Array; targetShapeDb?: Float64Array | undefined }, r: DesignChoices, meta: Pick<EqDesignAnswer, 'source' | 'input' | 'seats'>): EqDesignAnswer {
@@ -62,6 +62,7 @@ export function eqDesignAnswer(curve: { frequencyHz: Float64Array; magnitudeDb: 
     q: r.q,
     sampleRateHz: r.sampleRateHz,
     nullDepthDb: r.nullDepthDb,
+    ...(r.targetLevelDb !== undefined ? { targetLevelDb: r.targetLevelDb } : {}),
   });
   const rel = (v: Float64Array) => roundAllTo(v.map((x) => x - d.levelOffsetDb), 2);
   const levels = (l: Levels) => ({ rmsDb: roundTo(l.rmsDb, 2), maxDb: roundTo(l.maxDb, 2) });

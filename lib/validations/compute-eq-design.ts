@@ -54,6 +54,8 @@ const designShape = {
   q: qSchema.default({ ...EQ_DESIGN_DEFAULTS.q }),
   sampleRateHz: num(SAMPLE_RATE_LIMITS_HZ.min, SAMPLE_RATE_LIMITS_HZ.max, 'Hz').default(EQ_DESIGN_DEFAULTS.sampleRateHz),
   nullDepthDb: num(EQ_DESIGN_LIMITS.minNullDepthDb, EQ_DESIGN_LIMITS.maxNullDepthDb, 'dB').default(EQ_DESIGN_DEFAULTS.nullDepthDb),
+  /** Where the target sits (the input's units); default the median in the band. A design's levelOffsetDb checks against its target. */
+  targetLevelDb: num(-500, 500, 'dB').optional(),
 };
 
 const gridSchema = z.object({ startHz: num(10, ROOM_LIMITS.maxResponseHz, 'Hz'), stopHz: num(10, ROOM_LIMITS.maxResponseHz, 'Hz'), pointsPerOctave: num(1, 192) });

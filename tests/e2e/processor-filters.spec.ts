@@ -82,6 +82,11 @@ test('Processor filters on the Juniper Lane screening room: 96 kHz, a section co
     await expect(subSections).toHaveCount(2 + n);
     await page.getByTestId('eqd-check').click();
     await expect(page.getByTestId('eqd-promised')).toBeVisible({ timeout: 60_000 });
+    // Proven by applying it: with the EQ on, against the design's own target, the subs measure what the design promised.
+    const check = (await page.getByTestId('eqd-promised').innerText()).replace(/\s+/g, ' ');
+    const m = /promised ([\d.]+) dB RMS.*measure ([\d.]+) dB RMS/.exec(check);
+    expect(m, check).not.toBeNull();
+    expect(Math.abs(Number(m![1]) - Number(m![2]))).toBeLessThanOrEqual(0.05);
 
     expect(await seriousViolations(page, 'Processor filters', '[role=tabpanel]')).toEqual([]);
 

@@ -104,6 +104,16 @@ describe('applyEqDesignToDocument, then the model again', () => {
     expect(Math.abs(residual.maxDb - answer.residual.after.maxDb)).toBeLessThan(0.011);
   });
 
+  it.each<['mlp' | 'average']>([['mlp'], ['average']])('at %s, the check after Apply (the present EQ on, the design’s own target level) reads as its “before” the residual the design promised', (at) => {
+    const doc = testSystem();
+    const answer = computeEqDesign(requestOf(doc, { at }));
+    const check = computeEqDesign(requestOf(applyEqDesignToDocument(doc, answer), { at, withPresentEq: true, targetLevelDb: answer.levelOffsetDb }));
+    expect(check.levelOffsetDb).toBe(answer.levelOffsetDb);
+    // The nulls are found again on the equalised curve; the promise's were found before EQ: a few hundredths may differ.
+    expect(Math.abs(check.residual.before.rmsDb - answer.residual.after.rmsDb)).toBeLessThan(0.05);
+    expect(Math.abs(check.residual.before.maxDb - answer.residual.after.maxDb)).toBeLessThan(0.05);
+  });
+
   it('the invented demo room (Juniper Lane) at the MLP, with a house curve: the same, and the rest of the document untouched', () => {
     const doc = juniperLaneDocument();
     const answer = computeEqDesign(requestOf(doc, { target: { kind: 'house', riseDb: 5, belowHz: 50 } }));
