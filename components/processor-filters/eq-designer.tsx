@@ -9,7 +9,10 @@ import { mlpSeat } from '@/lib/system-model/geometry';
 import { applyEqDesignToDocument, eqDesignRequestFromDocument } from '@/lib/system-model/eq-design';
 import { eqDesignMeasuredRequestFromDocument } from '@/lib/system-model/eq-design-measured';
 import type { EqDesignMeasuredRequest, EqDesignModelRequest } from '@/lib/validations/compute-eq-design';
-import type { Sub } from '@/lib/validations/system';
+import type { PeakingFilterInput } from '@/lib/validations/eq-filter';
+
+/** A sub output's EQ list, as the document holds it. */
+type PeakingList = PeakingFilterInput[];
 import { EqDesignerApply, type EqPromise } from './eq-designer-apply';
 import { defaultEqDesignerDraft, readEqDesignerDraft, type EqDesignerDraft, type EqDesignSource } from './eq-designer-draft';
 import { EqDesignerForm } from './eq-designer-form';
@@ -27,7 +30,7 @@ type Built =
 interface Applied {
   key: string;
   promise: EqPromise;
-  before: { id: string; eq: Sub['eq'] }[];
+  before: { id: string; eq: PeakingList }[];
 }
 
 /**
@@ -53,7 +56,7 @@ export function EqDesigner() {
       return r.ok ? { ok: true, kind: 'model', request: r.request, key: eqDesignKey(r.request) } : r;
     }
     if (!measured.items) return null;
-    // The files are measured with the sub EQ bypassed: the present EQ has no place in a measured run.
+    // The files are measured with the subs' EQ bypassed: the present EQ has no place in a measured run.
     const { at, target, band, maxFilters, maxBoostDb, maxCutDb, q } = reading.options;
     const r = eqDesignMeasuredRequestFromDocument(doc, measured.items, { at, target, band, maxFilters, maxBoostDb, maxCutDb, q });
     return r.ok ? { ok: true, kind: 'measured', request: r.request, used: r.used, key: eqDesignKey(r.request) } : r;

@@ -8,7 +8,7 @@ import { ProcessorFilterDownloads } from './downloads';
 import { EqDesigner } from './eq-designer';
 import { OutputCard } from './output-card';
 import { SampleRatePicker } from './sample-rate-picker';
-import { SubEqEditor } from './sub-eq-editor';
+import { OutputEqEditor } from './output-eq-editor';
 
 /**
  * Processor filters: every filter of the finished System as the digital biquads a processor runs at its sample rate —
@@ -47,7 +47,7 @@ export function ProcessorFiltersPanel() {
         {doc.subs.length ? (
           <div className="grid min-w-0 gap-3 lg:grid-cols-2">
             {doc.subs.map((s, k) => (
-              <SubEqEditor key={s.id} subIndex={k} />
+              <OutputEqEditor key={s.id} subIndex={k} />
             ))}
           </div>
         ) : (

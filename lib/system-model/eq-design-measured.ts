@@ -59,7 +59,7 @@ export function eqDesignMeasuredRequestFromDocument(
   const all = seats.filter((seat) => together(seat.name));
   if (perSub.length === 0 && all.length === 0) {
     const where = at === 'mlp' ? `at the MLP (${seats[0]?.name})` : 'at any seat';
-    return { ok: false, reason: `No usable measurement ${where}. Upload, per seat (seat = the seat's name), one file of each sub alone with phase (role = the sub's name) or one file of every sub playing together with the sub EQ bypassed (role = "all subs").` };
+    return { ok: false, reason: `No usable measurement ${where}. Upload, per seat (seat = the seat's name), one file of each sub alone with phase (role = the sub's name) or one file of every sub playing together with the subs’ EQ bypassed (role = "all subs").` };
   }
   const usePerSub = perSub.length >= all.length;
   const used: { seat: string; sub?: string; name: string }[] = [];

@@ -100,8 +100,8 @@ export function lowpassLevelDb(lowpass: EqDesignModelRequest['lowpass'], frequen
  * curve it meets does not hold them already), its voicing and EQ, gain, polarity and processor delay; no air path (the
  * room's transfer holds it).
  */
-export function subPath(sub: { name: string; gainDb: number; delayMs: number; invert: boolean; voicing?: readonly EqFilter[]; eq?: readonly EqFilter[] }, lowpass: EqDesignModelRequest['lowpass'], rolloffs: PathSpec['rolloff'] = []): PathSpec {
-  return { name: sub.name, filter: lowpassFilter(lowpass), rolloff: rolloffs, eq: [...(sub.voicing ?? []), ...(sub.eq ?? [])], gainDb: sub.gainDb, delayMs: sub.delayMs, invert: sub.invert };
+export function subPath(unit: { name: string; gainDb: number; delayMs: number; invert: boolean; voicing?: readonly EqFilter[]; eq?: readonly EqFilter[] }, lowpass: EqDesignModelRequest['lowpass'], rolloffs: PathSpec['rolloff'] = []): PathSpec {
+  return { name: unit.name, filter: lowpassFilter(lowpass), rolloff: rolloffs, eq: [...(unit.voicing ?? []), ...(unit.eq ?? [])], gainDb: unit.gainDb, delayMs: unit.delayMs, invert: unit.invert };
 }
 
 /** A level in dB of power |p|² (floored far below anything audible). */

@@ -99,6 +99,7 @@ export function measuredRequestFromDocument(
   const sub = doc.subs[k];
   const subSource = model?.subs[k];
   if (!model || !sub || !subSource) return null;
+  const outputEq = doc.subs[k]?.eq ?? [];
   return {
     temperatureC: model.temperatureC,
     crossoverHz: model.crossoverHz,
@@ -107,7 +108,7 @@ export function measuredRequestFromDocument(
     mains: { name: model.mains.name, curve: curves.mains, gainDb: model.mains.gainDb, delayMs: model.mains.delayMs, invert: false },
     // The sub's processor EQ is applied (measurements are taken without processing), but not the voicing switches:
     // the switch was in the speaker, in whatever position it had, when it was measured. "All subs" takes the first sub's.
-    sub: { name: target.subIndex === 'all' ? 'All subs' : sub.name, curve: curves.sub, gainDb: sub.gainDb, delayMs: subSource.delayMs, invert: sub.invert, ...(sub.eq.length > 0 ? { eq: [...sub.eq] } : {}) },
+    sub: { name: target.subIndex === 'all' ? 'All subs' : sub.name, curve: curves.sub, gainDb: sub.gainDb, delayMs: subSource.delayMs, invert: sub.invert, ...(outputEq.length > 0 ? { processorEq: [...outputEq] } : {}) },
     smoothingFraction: options.smoothingFraction ?? 0,
   };
 }
@@ -137,7 +138,7 @@ export function computeMeasured(req: PredictRequest, curves: { mains: CurvePoint
   const mainsPath: PathSpec = {
     name: req.mains.name,
     filter: { family: req.mainsHighpass.family, order: req.mainsHighpass.order, response: 'highpass', cornerHz: req.crossoverHz },
-    ...(req.mains.eq ? { eq: req.mains.eq } : {}),
+    ...(req.mains.processorEq ? { eq: req.mains.processorEq } : {}),
     gainDb: req.mains.gainDb,
     delayMs: req.mains.delayMs,
     invert: req.mains.invert,
@@ -145,7 +146,7 @@ export function computeMeasured(req: PredictRequest, curves: { mains: CurvePoint
   const subPathSpec: PathSpec = {
     name: req.sub.name,
     filter: { family: req.subLowpass.family, order: req.subLowpass.order, response: 'lowpass', cornerHz: req.crossoverHz },
-    ...(req.sub.eq ? { eq: req.sub.eq } : {}),
+    ...(req.sub.processorEq ? { eq: req.sub.processorEq } : {}),
     gainDb: req.sub.gainDb,
     delayMs: req.sub.delayMs,
     invert: req.sub.invert,

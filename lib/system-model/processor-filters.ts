@@ -3,7 +3,7 @@
  * (`processorFiltersFromDocument`), the compute behind POST /api/v1/processor-filters (`computeProcessorFilters`), and
  * the words and grouping the panel and the Settings sheet both show (`processorFiltersSummary`). The mathematics is
  * dsp/filters (bilinear transform pre-warped for the crossovers, the Audio EQ Cookbook for EQ); nothing is written back
- * here: the sub EQ and the sample rate are fields of the document the panel edits directly.
+ * here: each sub output's EQ and the sample rate are fields of the document the panel edits directly.
  */
 import { BIQUAD_CONVENTION, logFrequencyGridHz, processorFilters, type DigitalDeviation, type FilterFamily, type ProcessorFilter, type ProcessorFiltersResult, type ProcessorSection } from '@/dsp';
 import type { ProcessorFiltersRequest } from '@/lib/validations/compute-processor-filters';

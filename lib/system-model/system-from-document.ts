@@ -70,6 +70,8 @@ export function subSource(doc: SystemDocument, sub: Sub): SystemSource {
   const k = doc.subs.indexOf(sub);
   const settings = systemChannelSettings(doc).subs[k];
   const profile = profileById(doc, sub.profileId);
+  // The processor's EQ on this sub's output (defaulted to none by the schema; a hand-built document may leave it out).
+  const outputEq = doc.subs[k]?.eq ?? [];
   return {
     name: sub.name,
     distanceM: geometricDistanceM(sub, mlpSeat(doc)),
@@ -77,7 +79,7 @@ export function subSource(doc: SystemDocument, sub: Sub): SystemSource {
     gainDb: (settings?.gainDb ?? sub.gainDb) + subLevelMatchDb(doc, sub),
     invert: sub.invert,
     rolloff: subRolloffs(profile),
-    eq: [...voicingFilters(profile, sub.voicing), ...(sub.eq ?? [])],
+    eq: [...voicingFilters(profile, sub.voicing), ...outputEq],
   };
 }
 

@@ -74,6 +74,6 @@ export function pathsVoicingLine(doc: SystemDocument, speaker: Speaker): { text:
     if (bits.length > 0) parts.push(`${name} — ${bits.join(' · ')}`);
   };
   add(speaker.channel, speaker.profileId, speaker.voicing, 0);
-  for (const sub of doc.subs) add(sub.name, sub.profileId, sub.voicing, sub.eq.length);
+  for (const s of doc.subs) add(s.name, s.profileId, s.voicing, s.eq.length);
   return parts.length > 0 || staleCount > 0 ? { text: parts.join('; '), staleCount } : null;
 }

@@ -99,7 +99,7 @@ describe('applyEqDesignToDocument, then the model again', () => {
     expect(answer.filters.length).toBeGreaterThan(0);
     expect(answer.residual.after.rmsDb).toBeLessThan(answer.residual.before.rmsDb);
     const { applied, residual } = residualAfterApplying(doc, answer, at);
-    for (const sub of applied.subs) expect(sub.eq).toEqual(answer.filters);
+    for (const s of applied.subs) expect(s.eq).toEqual(answer.filters);
     expect(Math.abs(residual.rmsDb - answer.residual.after.rmsDb)).toBeLessThan(0.011);
     expect(Math.abs(residual.maxDb - answer.residual.after.maxDb)).toBeLessThan(0.011);
   });
@@ -129,7 +129,7 @@ describe('applyEqDesignToDocument, then the model again', () => {
     const answer = computeEqDesign(requestOf(withOld));
     expect(answer).toEqual(computeEqDesign(requestOf(doc)));
     const applied = applyEqDesignToDocument(withOld, answer);
-    for (const sub of applied.subs) expect(sub.eq).toEqual(answer.filters);
+    for (const s of applied.subs) expect(s.eq).toEqual(answer.filters);
     expect(computeEqDesign(requestOf(applied)).filters).toEqual(answer.filters);
   });
 });

@@ -135,8 +135,8 @@ describe('Measured: the sub’s processor EQ is applied to the measured curves, 
   it('the request carries the sub’s EQ and not its voicing, and the schema takes it', () => {
     const doc = withSub(withSpeaker(voiced(), 'L', { voicing: { placement: 'wall' } }), 1, { voicing: { boundary: 'wall' }, eq: [PROCESSOR_CUT] });
     const { body } = predict(doc);
-    expect(body.sub.eq).toEqual([PROCESSOR_CUT]);
-    expect(body.mains.eq).toBeUndefined();
+    expect(body.sub.processorEq).toEqual([PROCESSOR_CUT]);
+    expect(body.mains.processorEq).toBeUndefined();
   });
   it('the processed sub curve is the curve without EQ times the cookbook peaking filter; the measured sum is unchanged', () => {
     const without = predict(voiced()).answer;

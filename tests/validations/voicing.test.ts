@@ -94,8 +94,8 @@ describe('the compute requests’ EQ (POST /api/v1/blend, /timing, /crossover-sw
   });
   it('the predict request’s sub takes the processor’s EQ', () => {
     const curve = { frequencyHz: [20, 40, 80, 160, 320, 640, 1280, 2560], magnitudeDb: [0, 0, 0, 0, 0, 0, 0, 0] };
-    const body = { temperatureC: 20, crossoverHz: 80, mainsHighpass: { family: 'butterworth', order: 2 }, subLowpass: { family: 'linkwitz-riley', order: 4 }, mains: { curve, gainDb: 0, delayMs: 0, invert: false }, sub: { curve, gainDb: 0, delayMs: 0, invert: false, eq: [cut] } };
-    expect(predictRequestSchema.parse(body).sub.eq).toEqual([cut]);
-    expect(pathsOf(predictRequestSchema, { ...body, sub: { ...body.sub, eq: [{ ...cut, q: 50 }] } })).toEqual(['sub.eq.0.q']);
+    const body = { temperatureC: 20, crossoverHz: 80, mainsHighpass: { family: 'butterworth', order: 2 }, subLowpass: { family: 'linkwitz-riley', order: 4 }, mains: { curve, gainDb: 0, delayMs: 0, invert: false }, sub: { curve, gainDb: 0, delayMs: 0, invert: false, processorEq: [cut] } };
+    expect(predictRequestSchema.parse(body).sub.processorEq).toEqual([cut]);
+    expect(pathsOf(predictRequestSchema, { ...body, sub: { ...body.sub, processorEq: [{ ...cut, q: 50 }] } })).toEqual(['sub.processorEq.0.q']);
   });
 });

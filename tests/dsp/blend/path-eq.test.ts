@@ -11,7 +11,7 @@ const FREQUENCY_HZ = logFrequencyGridHz({ startHz: 10, stopHz: 20000, pointsPerO
 // Random EQ may cut up to 6 × 24 dB: up to 1 kHz the low-passed sub stays well above the −300 dB floor of reported levels.
 const RANDOM_HZ = logFrequencyGridHz({ startHz: 10, stopHz: 1000, pointsPerOctave: 12 });
 
-const sub = (eq?: readonly EqFilter[]): PathSpec => ({
+const subPath = (eq?: readonly EqFilter[]): PathSpec => ({
   name: 'sub',
   filter: { family: 'linkwitz-riley', order: 4, response: 'lowpass', cornerHz: 80 },
   rolloff: [{ kind: 'vented', cornerHz: 22 }, { kind: 'lowpass', cornerHz: 160, q: 0.7 }],
@@ -25,8 +25,8 @@ const mains: PathSpec = { name: 'L', filter: { family: 'butterworth', order: 2, 
 
 /** Checks path 1 with `eq` = path 1 without it × Π cookbook prototypes, in level (dB) and phase (deg). */
 function expectPathTimesCookbook(eq: readonly EqFilter[], frequencyHz: Float64Array = FREQUENCY_HZ): void {
-  const withEq = blendResponse({ temperatureC: 20, frequencyHz, paths: [mains, sub(eq)] });
-  const without = blendResponse({ temperatureC: 20, frequencyHz, paths: [mains, sub()] });
+  const withEq = blendResponse({ temperatureC: 20, frequencyHz, paths: [mains, subPath(eq)] });
+  const without = blendResponse({ temperatureC: 20, frequencyHz, paths: [mains, subPath()] });
   frequencyHz.forEach((fHz, i) => {
     const { levelDb, phaseDeg } = cookbookCascade(eq, fHz);
     assertInDelta((withEq.paths[1]!.magnitudeDb[i] as number) - (without.paths[1]!.magnitudeDb[i] as number), levelDb, 1e-9, `EQ level at ${fHz} Hz`);
@@ -65,26 +65,26 @@ describe('PathSpec.eq: the path times the cookbook analog prototypes (complex.js
 
 describe('PathSpec.eq absent or empty', () => {
   it('an empty EQ leaves every path and the sum bit-for-bit unchanged', () => {
-    const a = blendResponse({ temperatureC: 20, frequencyHz: FREQUENCY_HZ, paths: [mains, sub()] });
-    const b = blendResponse({ temperatureC: 20, frequencyHz: FREQUENCY_HZ, paths: [{ ...mains, eq: [] }, sub([])] });
+    const a = blendResponse({ temperatureC: 20, frequencyHz: FREQUENCY_HZ, paths: [mains, subPath()] });
+    const b = blendResponse({ temperatureC: 20, frequencyHz: FREQUENCY_HZ, paths: [{ ...mains, eq: [] }, subPath([])] });
     expect(b.paths[1]!.magnitudeDb).toEqual(a.paths[1]!.magnitudeDb);
     expect(b.paths[1]!.unwrappedPhaseDeg).toEqual(a.paths[1]!.unwrappedPhaseDeg);
     expect(b.paths[1]!.groupDelayMs).toEqual(a.paths[1]!.groupDelayMs);
     expect(b.sum).toEqual(a.sum);
-    const sa = blendSumResponse({ temperatureC: 20, frequencyHz: FREQUENCY_HZ, paths: [mains, sub()] });
-    const sb = blendSumResponse({ temperatureC: 20, frequencyHz: FREQUENCY_HZ, paths: [mains, sub([])] });
+    const sa = blendSumResponse({ temperatureC: 20, frequencyHz: FREQUENCY_HZ, paths: [mains, subPath()] });
+    const sb = blendSumResponse({ temperatureC: 20, frequencyHz: FREQUENCY_HZ, paths: [mains, subPath([])] });
     expect(sb.sum).toEqual(sa.sum);
   });
 });
 
 describe('PathSpec.eq errors name the field', () => {
   it('a bad filter is a RangeError naming paths[k].eq[i]', () => {
-    const bad = sub([{ kind: 'low-shelf', cornerHz: 150, gainDb: -3, slope: 1 }, { kind: 'peaking', centerHz: 40, gainDb: -3, q: 0 }]);
+    const bad = subPath([{ kind: 'low-shelf', cornerHz: 150, gainDb: -3, slope: 1 }, { kind: 'peaking', centerHz: 40, gainDb: -3, q: 0 }]);
     expect(() => blendResponse({ temperatureC: 20, frequencyHz: [80], paths: [mains, bad] })).toThrow(/^paths\[1\]\.eq\[1\]\.q/);
   });
   it(`more than ${MAX_PATH_EQ_FILTERS} filters are refused`, () => {
     const many = Array.from({ length: MAX_PATH_EQ_FILTERS + 1 }, (): EqFilter => ({ kind: 'peaking', centerHz: 50, gainDb: -1, q: 2 }));
-    expect(() => blendResponse({ temperatureC: 20, frequencyHz: [80], paths: [mains, sub(many)] })).toThrow(RangeError);
-    expect(() => blendResponse({ temperatureC: 20, frequencyHz: [80], paths: [mains, sub(many.slice(1))] })).not.toThrow();
+    expect(() => blendResponse({ temperatureC: 20, frequencyHz: [80], paths: [mains, subPath(many)] })).toThrow(RangeError);
+    expect(() => blendResponse({ temperatureC: 20, frequencyHz: [80], paths: [mains, subPath(many.slice(1))] })).not.toThrow();
   });
 });

@@ -8,7 +8,7 @@ import type { PeakingFilterInput } from '@/lib/validations/eq-filter';
 import type { SystemDocument } from '@/lib/validations/system';
 
 /** The document's limits of a sub's EQ (lib/validations/system.ts subSchema, eq-filter.ts). */
-const MAX_SUB_EQ = 10;
+const MAX_OUTPUT_FILTERS = 10;
 const CENTER_HZ = { min: 5, max: 192000 } as const;
 /** A new filter changes nothing until its gain is set. */
 const NEW_FILTER: PeakingFilterInput = { kind: 'peaking', centerHz: 50, gainDb: 0, q: 4 };
@@ -18,11 +18,11 @@ function withEq(doc: SystemDocument, subIndex: number, eq: PeakingFilterInput[])
 }
 
 /** One sub's processor EQ: peaking filters added, edited and removed in the document (at most 10). */
-export function SubEqEditor({ subIndex }: { subIndex: number }) {
+export function OutputEqEditor({ subIndex }: { subIndex: number }) {
   const { doc, update, readOnly } = useSystem();
   const sub = doc.subs[subIndex];
   if (!sub) return null;
-  const eq = sub.eq;
+  const { eq } = sub;
   const set = (next: PeakingFilterInput[]) => update((d) => withEq(d, subIndex, next));
   const edit = (i: number, patch: Partial<PeakingFilterInput>) => update((d) => withEq(d, subIndex, (d.subs[subIndex]?.eq ?? []).map((f, j) => (j === i ? { ...f, ...patch } : f))));
   return (
@@ -30,7 +30,7 @@ export function SubEqEditor({ subIndex }: { subIndex: number }) {
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h4 className="text-sm font-semibold text-sub">{sub.name}</h4>
         {!readOnly ? (
-          <Button variant="secondary" onClick={() => set([...eq, NEW_FILTER])} disabled={eq.length >= MAX_SUB_EQ} data-testid={`pf-eq-add-${sub.id}`}>
+          <Button variant="secondary" onClick={() => set([...eq, NEW_FILTER])} disabled={eq.length >= MAX_OUTPUT_FILTERS} data-testid={`pf-eq-add-${sub.id}`}>
             Add a peaking filter
           </Button>
         ) : null}
