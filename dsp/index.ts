@@ -83,6 +83,9 @@ export { applyPathToMeasured } from './measured/apply-path-to-measured';
 export { predictMeasuredBlend } from './measured/predict-measured-blend';
 export { bestMeasuredAlignment } from './measured/best-measured-alignment';
 export { bandPowerAverageDb } from './measured/band-power-average';
+export { inRoomExtension, EXTENSION_BAND_DEFAULTS } from './measured/in-room-extension';
+export { crossoverAgainstExtension, type CrossoverAgainstExtension } from './measured/crossover-against-extension';
+export { spatialAverageDb } from './measured/spatial-average';
 export { wrapDeg } from './internal/angles';
 
 export { SEAT_BALANCE_DEFAULT_LIMITS, SEAT_BALANCE_RESOLUTION, type SubSetting, type SeatBalanceLimits, type SeatBalanceMeasures } from './seat-balance/seat-balance-types';

@@ -14,6 +14,16 @@ const flatCurve = (withPhase: boolean) => ({
   ...(withPhase ? { phaseDeg: EXAMPLE_HZ.map(() => 0) } : {}),
 });
 
+/**
+ * 1/6-octave points from 20 Hz to 2.56 kHz of an invented sealed mains speaker: a second-order Butterworth high-pass at
+ * 50 Hz (Q 0.707; Small 1972), so its −3 dB point is 50 Hz. `offsetDb` moves the whole curve (a second seat).
+ */
+const SEALED_HZ = Array.from({ length: 43 }, (_, i) => Number((20 * 2 ** (i / 6)).toPrecision(5)));
+const sealedSeat = (offsetDb: number) => ({
+  frequencyHz: SEALED_HZ,
+  magnitudeDb: SEALED_HZ.map((f) => Number((offsetDb + 10 * Math.log10((f / 50) ** 4 / (1 + (f / 50) ** 4))).toFixed(2))),
+});
+
 const summary: ApiField[] = [
   { name: 'id', type: 'uuid', description: 'The measurement.' },
   { name: 'name', type: 'string', description: 'As given, else the file name without its extension.' },
@@ -74,9 +84,14 @@ export const MEASURED_DOCS: ApiRouteDoc[] = [
     fields: [
       { name: 'workspaceId', type: 'uuid', description: 'Only one workspace.' },
       { name: 'systemId', type: 'uuid', description: 'Only those uploaded for one System.' },
+      { name: 'seat', type: 'string', description: 'Only those measured at this seat (1–60 characters; the same text, ignoring case: "row 1 centre (mlp)" finds "Row 1 centre (MLP)").' },
+      { name: 'role', type: 'string', description: 'Only those of this source ("mains", "sub", "L"…; the same text, ignoring case).' },
     ],
     answer: [{ name: 'items', type: 'MeasurementSummary[]', description: 'Each with id, workspaceId, workspaceName, systemId, name, seat, role, pointCount, startHz, stopHz, hasPhase, createdByName, createdAt.' }],
-    examples: [{ title: 'One workspace', request: { query: `?workspaceId=${SYSTEM}` }, status: 200, responseExcerpt: { items: [{ id: ID, name: 'Row 1 centre (MLP): L mains (invented)', role: 'mains', pointCount: 240, hasPhase: true }] } }],
+    examples: [
+      { title: 'One workspace', request: { query: `?workspaceId=${SYSTEM}` }, status: 200, responseExcerpt: { items: [{ id: ID, name: 'Row 1 centre (MLP): L mains (invented)', role: 'mains', pointCount: 240, hasPhase: true }] } },
+      { title: 'The mains at one seat of one System', request: { query: `?systemId=${SYSTEM}&seat=Row%201%20centre%20(MLP)&role=mains` }, status: 200, responseExcerpt: { items: [{ id: ID, seat: 'Row 1 centre (MLP)', role: 'mains' }] } },
+    ],
     notes: [ACCESS],
   },
   {
@@ -116,7 +131,7 @@ export const MEASURED_DOCS: ApiRouteDoc[] = [
       { name: 'temperatureC', type: 'number', unit: '°C', required: true, description: '−20…50 (the speed of sound of the delay scan).' },
       { name: 'crossoverHz', type: 'number', unit: 'Hz', required: true, description: '20…300: the corner of both filters.' },
       { name: 'mainsHighpass, subLowpass', type: '{ family, order }', required: true, description: 'Butterworth orders 1–8 or Linkwitz–Riley 2, 4, 8.' },
-      { name: 'mains, sub', type: '{ curve, gainDb, delayMs, invert, eq?, name? }', required: true, description: `The processor settings to apply (gain dB, delay ms ≥ 0, polarity, and eq: the processor's EQ on that output, up to 26 peaking or shelf filters as on /api/v1/blend) and the curve: ${curveFields} The measurement is taken as holding the speaker’s own roll-off, its voicing switches and the distance, so none of them is added.` },
+      { name: 'mains, sub', type: '{ curve, gainDb, delayMs, invert, processorEq?, name? }', required: true, description: `The processor settings to apply (gain dB, delay ms ≥ 0, polarity, and processorEq: the processor's EQ on that output, up to 26 peaking or shelf filters as on /api/v1/blend) and the curve: ${curveFields} The measurement is taken as holding the speaker’s own roll-off, its voicing switches and the distance, so none of them is added.` },
       { name: 'smoothingFraction', type: 'integer', description: '0 (none, default) or N of 1/N octave (1…48) for every returned magnitude.' },
       { name: 'pointsPerOctave', type: 'integer', description: '6…96 (default 48): the shared grid both curves are resampled to.' },
       { name: 'maxDelayMs', type: 'number', unit: 'ms', description: '1…50 (default 20): the widest delay the search tries on either side.' },
@@ -153,5 +168,49 @@ export const MEASURED_DOCS: ApiRouteDoc[] = [
       },
     ],
     notes: ['Inline points need no session; a measurementId is read with the caller’s rights (401 signed out, 404 outside the workspace).'],
+  },
+  {
+    id: 'measured-extension',
+    method: 'POST',
+    path: '/api/v1/measured/extension',
+    summary: 'How low a source goes in the room: the −3, −6 and −10 dB points below its own mean level over a band, from its curve at one seat or the spatial average of several; and a crossover judged against them.',
+    auth: 'none',
+    fields: [
+      { name: 'curves', type: '({ measurementId, name? } | { frequencyHz[], magnitudeDb[], phaseDeg?, name? })[]', required: true, description: `1–40 curves of the same source, one per seat. ${curveFields} A phase column is accepted and not used. Several curves are power-averaged point by point (the spatial average, 10·log10 of the mean of 10^(L/10); common practice); curves on different grids are first resampled (linear in log-frequency) onto a common 1/96-octave grid over the range they share (at least an octave).` },
+      { name: 'name', type: 'string', description: 'Per curve, 1–60 characters (default: the stored name, else "Seat N").' },
+      { name: 'band', type: '{ startHz, stopHz }', unit: 'Hz', description: '10…24 000 Hz, stopHz at least an octave above startHz (default 200–2000 Hz: above the room’s modes, below the tweeter; common practice). The mean level is the power mean over the band, each point weighted by its share of log-frequency. The band must lie within the data.' },
+      { name: 'crossoverHz', type: 'number', unit: 'Hz', description: '20…300: a crossover to judge against the −3 and −6 dB points.' },
+    ],
+    answer: [
+      { name: 'band', type: '{ startHz, stopHz }', unit: 'Hz', description: 'The band used.' },
+      { name: 'meanLevelDb', type: 'number', unit: 'dB', description: 'The power mean of the analysed curve over the band.' },
+      { name: 'pointsHz', type: '{ minus3, minus6, minus10 }', unit: 'Hz', description: 'Going down from the band, where the curve first falls 3, 6 and 10 dB below the mean (linear in log-frequency between points); null when it does not within the data (the point lies below lowestMeasuredHz).' },
+      { name: 'averagedFrom', type: 'integer', description: 'How many seats’ curves were averaged (1: the curve itself).' },
+      { name: 'names', type: 'string[]', description: 'Each curve’s name, in order.' },
+      { name: 'resampled', type: 'boolean', description: 'True when the curves’ grids differed and each was resampled onto the common grid.' },
+      { name: 'lowestMeasuredHz', type: 'number', unit: 'Hz', description: 'The lowest frequency of the analysed curve (of the range the curves share).' },
+      { name: 'curve', type: '{ frequencyHz[], magnitudeDb[] }', description: 'The analysed curve: the one curve, or the seats’ spatial average.' },
+      { name: 'crossover', type: 'object (with crossoverHz)', description: 'crossoverHz; octavesAboveMinus3 and octavesAboveMinus6 (log2 of crossover ÷ point; negative below it; null when the point is not in the data); verdict: "clear" (at least half an octave above the −3 dB point, or half an octave above the data when the curve never falls 3 dB), "too-close", or "unknown" (the −3 dB point lies below the data, too near to judge); rule (the rule in words; common practice); summary (one sentence).' },
+    ],
+    examples: [
+      {
+        title: 'An invented sealed mains speaker (−3 dB at 50 Hz) at two seats, the second 1 dB quieter, against a crossover at 80 Hz',
+        request: { curves: [{ name: 'Row 1 centre (invented)', ...sealedSeat(0) }, { name: 'Row 1 left (invented)', ...sealedSeat(-1) }], crossoverHz: 80 },
+        status: 200,
+        responseExcerpt: {
+          band: { startHz: 200, stopHz: 2000 },
+          meanLevelDb: -0.473,
+          pointsHz: { minus3: 50.08, minus6: 38.11, minus10: 28.87 },
+          averagedFrom: 2,
+          names: ['Row 1 centre (invented)', 'Row 1 left (invented)'],
+          curve: { frequencyHz: [20], magnitudeDb: [-16.501] },
+          crossover: { crossoverHz: 80, octavesAboveMinus3: 0.676, octavesAboveMinus6: 1.07, verdict: 'clear', rule: 'keep the crossover at least half an octave above the mains’ in-room −3 dB point (common practice)', summary: 'A crossover at 80 Hz sits 0.68 octaves above the in-room −3 dB point (50.1 Hz) and 1.07 octaves above the −6 dB point (38.1 Hz): fine.' },
+        },
+      },
+    ],
+    notes: [
+      'Inline points need no session; a measurementId is read with the caller’s rights (401 signed out, 404 outside the workspace).',
+      '400 naming the field: a band outside the data, curves sharing less than an octave, more than 40 curves, and the inline-curve rules above. The body may be up to 2 MB.',
+    ],
   },
 ];

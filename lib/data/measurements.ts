@@ -1,4 +1,4 @@
-import { Op, type WhereOptions } from 'sequelize';
+import { col, fn, Op, where, type WhereOptions } from 'sequelize';
 import { callerWorkspaces, requireMembership, type Caller } from '@/lib/access';
 import { db } from '@/lib/db';
 import { notFound } from '@/lib/errors';
@@ -72,14 +72,21 @@ async function findRow(id: string, withData: boolean): Promise<Row> {
   return r;
 }
 
-/** Measurements of every workspace the caller belongs to (or of one, or of one System), newest first. */
+/** Measurements of every workspace the caller belongs to (or of one, or of one System; of one seat, one role), newest first. */
 export async function listMeasurements(caller: Caller, query: MeasurementListQuery): Promise<{ items: AppMeasurementSummary[] }> {
   const workspaces = await callerWorkspaces(caller);
   let ids = [...workspaces.keys()];
   if (query.workspaceId) ids = ids.filter((id) => id === query.workspaceId);
   if (!ids.length) return { items: [] };
-  const where: WhereOptions = { workspaceId: { [Op.in]: ids }, ...(query.systemId ? { systemId: query.systemId } : {}) };
-  const rows = (await Measurement.findAll({ where, include, attributes: { exclude: ['data'] }, order: [['createdAt', 'DESC'], ['id', 'ASC']], limit: 500 })) as Row[];
+  // seat and role: exact matches ignoring case (lower() on both sides).
+  const sameText = (column: 'seat' | 'role', value: string) => where(fn('lower', col(`Measurement.${column}`)), Op.eq, fn('lower', value));
+  const text = [...(query.seat ? [sameText('seat', query.seat)] : []), ...(query.role ? [sameText('role', query.role)] : [])];
+  const filter: WhereOptions = {
+    workspaceId: { [Op.in]: ids },
+    ...(query.systemId ? { systemId: query.systemId } : {}),
+    ...(text.length ? { [Op.and]: text } : {}),
+  };
+  const rows = (await Measurement.findAll({ where: filter, include, attributes: { exclude: ['data'] }, order: [['createdAt', 'DESC'], ['id', 'ASC']], limit: 500 })) as Row[];
   return { items: rows.map(toSummary) };
 }
 

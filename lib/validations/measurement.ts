@@ -28,6 +28,9 @@ export type MeasurementUploadFields = z.infer<typeof measurementUploadFieldsSche
 export const measurementListQuerySchema = z.object({
   workspaceId: uuidField('workspaceId must be an id').optional(),
   systemId: uuidField('systemId must be an id').optional(),
+  /** Only this seat and this role (each an exact match, ignoring case). */
+  seat: z.string().trim().min(1, 'seat must not be empty').max(60, 'seat must be at most 60 characters').optional(),
+  role: measurementRoleSchema.optional(),
 });
 export type MeasurementListQuery = z.infer<typeof measurementListQuerySchema>;
 
@@ -62,7 +65,7 @@ const settingsSchema = {
   delayMs: num(0, 1000, 'ms'),
   invert: z.boolean({ error: 'must be true or false' }),
   /** The processor's EQ on this output, applied to the curve (a speaker's voicing switch is already in a measurement). */
-  eq: pathEqSchema.optional(),
+  processorEq: pathEqSchema.optional(),
 };
 
 export const predictRequestSchema = z.strictObject({

@@ -16,6 +16,7 @@ import { seatBalanceMeasuredRequestSchema, seatBalanceModelRequestSchema } from 
 import { lessonCreateSchema, lessonUpdateSchema, stepCreateSchema, stepReorderSchema, stepUpdateSchema } from '@/lib/validations/lesson';
 import { copySchema, revisionNoteUpdateSchema, revisionRestoreSchema, systemCreateSchema, systemDuplicateSchema, systemRenameSchema, systemUpdateSchema } from '@/lib/validations/library';
 import { measurementUploadFieldsSchema, predictRequestSchema } from '@/lib/validations/measurement';
+import { extensionRequestSchema } from '@/lib/validations/measured-extension';
 import { eqDesignCurveRequestSchema, eqDesignMeasuredRequestSchema, eqDesignModelRequestSchema } from '@/lib/validations/compute-eq-design';
 import { processorFiltersRequestSchema } from '@/lib/validations/compute-processor-filters';
 import { profileCreateSchema, profileUpdateSchema } from '@/lib/validations/profile';
@@ -117,6 +118,7 @@ const JSON_ROUTES: JsonRoute[] = [
   compute('/api/v1/layout', layoutRequestSchema),
   compute('/api/v1/headroom', headroomRequestSchema),
   compute('/api/v1/measured/predict', predictRequestSchema, 2 * KB * KB),
+  compute('/api/v1/measured/extension', extensionRequestSchema, 2 * KB * KB),
   compute('/api/v1/processor-filters', processorFiltersRequestSchema),
   compute('/api/v1/eq-design', eqDesignCurveRequestSchema.or(eqDesignModelRequestSchema).or(eqDesignMeasuredRequestSchema)),
 
