@@ -13,6 +13,7 @@ import { migration as createSpeakerProfiles } from './20261201002000-create-spea
 import { migration as createMeasurements } from './20261201003000-create-measurements';
 import { migration as createLessons } from './20261201004000-create-lessons';
 import { migration as createLessonSteps } from './20261201004100-create-lesson-steps';
+import { migration as measurementRunsAndImpulses } from './20261202000100-measurement-runs-and-impulses';
 
 /**
  * Every migration, in the order it runs: by name, which is its file name (a timestamp first), so the order never
@@ -33,4 +34,5 @@ export const migrations: Migration[] = [
   createMeasurements,
   createLessons,
   createLessonSteps,
+  measurementRunsAndImpulses,
 ].sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));

@@ -5,6 +5,7 @@ import { notFound } from '@/lib/errors';
 import type { ParsedMeasurement } from '@/lib/measurements/parse-measurement';
 import type { MeasurementListQuery, MeasurementUploadFields } from '@/lib/validations/measurement';
 import { Measurement, System, User, Workspace, type MeasurementData } from '@/models';
+import type { ImpulseWindowRecord, MeasurementSourceFormat } from '@/models/measurement';
 import { assertUuid } from './ids';
 import { personalWorkspaceId } from './systems';
 
@@ -21,8 +22,34 @@ export interface AppMeasurementSummary {
   startHz: number;
   stopHz: number;
   hasPhase: boolean;
+  /** Tells runs of the same seat and source apart ("treble +2"); null when not labelled. */
+  runLabel: string | null;
+  /** 'text' (a delimited file or inline points) or 'wav' (an impulse response transformed through its window). */
+  sourceFormat: MeasurementSourceFormat;
+  /** An impulse response's sample rate, Hz; null for text. */
+  sampleRateHz: number | null;
+  /** An impulse response's peak, ms from the file's first sample; null for text. */
+  arrivalMs: number | null;
+  /** The window an impulse response was read through; null for text. */
+  impulseWindow: ImpulseWindowRecord | null;
   createdByName: string | null;
   createdAt: string;
+}
+
+/** What a new measurement stores: the points (a parsed text file, or an impulse response's complex response on a log grid) and, for an impulse, where it came from. */
+export interface NewMeasurementPoints extends Pick<ParsedMeasurement, 'pointCount' | 'startHz' | 'stopHz' | 'hasPhase' | 'frequencyHz' | 'magnitudeDb' | 'phaseDeg'> {
+  sourceFormat?: MeasurementSourceFormat;
+  sampleRateHz?: number;
+  arrivalMs?: number;
+  impulseWindow?: ImpulseWindowRecord;
+}
+
+/** The editable labels of a measurement (PATCH /api/v1/measurements/{id}); null clears seat, role or runLabel. */
+export interface MeasurementLabels {
+  name?: string;
+  seat?: string | null;
+  role?: string | null;
+  runLabel?: string | null;
 }
 
 /** POST /api/v1/measurements's answer: the stored summary and how the file was read (leading lines of text skipped, first data line). */
@@ -54,6 +81,11 @@ function toSummary(r: Row): AppMeasurementSummary {
     startHz: r.startHz,
     stopHz: r.stopHz,
     hasPhase: r.hasPhase,
+    runLabel: r.runLabel ?? null,
+    sourceFormat: r.sourceFormat ?? 'text',
+    sampleRateHz: r.sampleRateHz ?? null,
+    arrivalMs: r.arrivalMs ?? null,
+    impulseWindow: r.impulseWindow ?? null,
     createdByName: r.createdBy?.name ?? null,
     createdAt: r.createdAt.toISOString(),
   };
@@ -117,10 +149,11 @@ export async function uploadTarget(caller: Caller, fields: Pick<MeasurementUploa
 export async function createMeasurement(
   caller: Caller,
   target: { workspaceId: string; systemId: string | null },
-  fields: { name: string; seat?: string; role?: string },
-  parsed: ParsedMeasurement,
+  fields: { name: string; seat?: string; role?: string; runLabel?: string },
+  parsed: NewMeasurementPoints,
 ): Promise<AppMeasurementSummary> {
   await requireMembership(caller, target.workspaceId, 'editor', 'That workspace');
+  // One INSERT: a refused or failed upload leaves no row behind.
   const created = await Measurement.create({
     workspaceId: target.workspaceId,
     systemId: target.systemId,
@@ -128,13 +161,38 @@ export async function createMeasurement(
     name: fields.name,
     seat: fields.seat ?? null,
     role: fields.role ?? null,
+    ...rowPoints(parsed),
+    runLabel: fields.runLabel ?? null,
+  });
+  return toSummary(await findRow(created.id, false));
+}
+
+/** The stored columns of a measurement's points and provenance. */
+function rowPoints(parsed: NewMeasurementPoints) {
+  return {
     pointCount: parsed.pointCount,
     startHz: parsed.startHz,
     stopHz: parsed.stopHz,
     hasPhase: parsed.hasPhase,
     data: { frequencyHz: parsed.frequencyHz, magnitudeDb: parsed.magnitudeDb, phaseDeg: parsed.phaseDeg },
-  });
-  return toSummary(await findRow(created.id, false));
+    sourceFormat: parsed.sourceFormat ?? 'text',
+    sampleRateHz: parsed.sampleRateHz ?? null,
+    arrivalMs: parsed.arrivalMs ?? null,
+    impulseWindow: parsed.impulseWindow ?? null,
+  };
+}
+
+/** Renames or relabels a measurement (editor of its workspace); its points never change. */
+export async function updateMeasurementLabels(caller: Caller, id: string, labels: MeasurementLabels): Promise<AppMeasurementSummary> {
+  const r = await findRow(id, false);
+  await requireMembership(caller, r.workspaceId, 'editor', 'That measurement');
+  const changes: Partial<Pick<Measurement, 'name' | 'seat' | 'role' | 'runLabel'>> = {};
+  if (labels.name !== undefined) changes.name = labels.name;
+  if (labels.seat !== undefined) changes.seat = labels.seat;
+  if (labels.role !== undefined) changes.role = labels.role;
+  if (labels.runLabel !== undefined) changes.runLabel = labels.runLabel;
+  if (Object.keys(changes).length > 0) await Measurement.update(changes, { where: { id } });
+  return toSummary(await findRow(id, false));
 }
 
 export async function deleteMeasurement(caller: Caller, id: string): Promise<void> {
@@ -172,6 +230,11 @@ export async function systemMeasurementsUnchecked(systemId: string, workspaceId:
       startHz: r.startHz,
       stopHz: r.stopHz,
       hasPhase: r.hasPhase,
+      runLabel: r.runLabel ?? null,
+      sourceFormat: r.sourceFormat ?? 'text',
+      sampleRateHz: r.sampleRateHz ?? null,
+      arrivalMs: r.arrivalMs ?? null,
+      impulseWindow: r.impulseWindow ?? null,
       createdAt: r.createdAt.toISOString(),
       frequencyHz: tooDense ? [] : d.frequencyHz,
       magnitudeDb: tooDense ? [] : d.magnitudeDb,
@@ -186,21 +249,11 @@ export async function ensureMeasurement(
   workspaceId: string,
   systemId: string | null,
   createdById: string | null,
-  fields: { name: string; seat: string; role: string },
-  parsed: ParsedMeasurement,
+  fields: { name: string; seat: string; role: string; runLabel?: string },
+  parsed: NewMeasurementPoints,
 ): Promise<boolean> {
   db();
   if (await Measurement.findOne({ where: { workspaceId, name: fields.name }, attributes: ['id'] })) return false;
-  await Measurement.create({
-    workspaceId,
-    systemId,
-    createdById,
-    ...fields,
-    pointCount: parsed.pointCount,
-    startHz: parsed.startHz,
-    stopHz: parsed.stopHz,
-    hasPhase: parsed.hasPhase,
-    data: { frequencyHz: parsed.frequencyHz, magnitudeDb: parsed.magnitudeDb, phaseDeg: parsed.phaseDeg },
-  });
+  await Measurement.create({ workspaceId, systemId, createdById, name: fields.name, seat: fields.seat, role: fields.role, runLabel: fields.runLabel ?? null, ...rowPoints(parsed) });
   return true;
 }

@@ -16,14 +16,44 @@ export const measurementRoleSchema = z
   .trim()
   .regex(/^[A-Za-z0-9 _+-]{1,20}$/, 'role must be 1–20 letters, digits, spaces, +, - or _ (e.g. mains, sub, L)');
 
+/** A run's label: what was different this time ("treble +2", "near-wall switch on", "after moving the sub"). */
+export const runLabelSchema = z.string().trim().min(1, 'runLabel must not be empty').max(80, 'runLabel must be at most 80 characters');
+const seatSchema = z.string().trim().min(1, 'seat must not be empty').max(60, 'seat must be at most 60 characters');
+const measurementNameSchema = z.string().trim().min(1, 'name must not be empty').max(120, 'name must be at most 120 characters');
+
+/** A number sent as a form field (multipart fields are text). */
+const formNumber = (min: number, max: number, what: string) =>
+  z
+    .string()
+    .trim()
+    .regex(/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/, `${what} must be a number`)
+    .transform(Number)
+    .pipe(z.number().min(min, `${what} must be at least ${min}`).max(max, `${what} must be at most ${max}`));
+
 export const measurementUploadFieldsSchema = z.strictObject({
-  name: z.string().trim().min(1, 'name must not be empty').max(120, 'name must be at most 120 characters').optional(),
+  name: measurementNameSchema.optional(),
   systemId: uuidField('systemId must be an id').optional(),
   workspaceId: uuidField('workspaceId must be an id').optional(),
-  seat: z.string().trim().min(1, 'seat must not be empty').max(60, 'seat must be at most 60 characters').optional(),
+  seat: seatSchema.optional(),
   role: measurementRoleSchema.optional(),
+  runLabel: runLabelSchema.optional(),
+  /** An impulse response (WAV) only: the window's start from the file's first sample, ms (default: the peak − 20 ms). */
+  windowStartMs: formNumber(0, 10_000, 'windowStartMs').optional(),
+  /** An impulse response (WAV) only: the window's length, ms (default 500 ms, clamped to the file's end). */
+  windowLengthMs: formNumber(1, 10_000, 'windowLengthMs').optional(),
 });
 export type MeasurementUploadFields = z.infer<typeof measurementUploadFieldsSchema>;
+
+/** PATCH /api/v1/measurements/{id}: the labels only (the points never change); null clears seat, role or runLabel. */
+export const measurementLabelsSchema = z
+  .strictObject({
+    name: measurementNameSchema.optional(),
+    seat: seatSchema.nullable().optional(),
+    role: measurementRoleSchema.nullable().optional(),
+    runLabel: runLabelSchema.nullable().optional(),
+  })
+  .refine((v) => Object.keys(v).length > 0, { message: 'send at least one of name, seat, role, runLabel' });
+export type MeasurementLabelsInput = z.infer<typeof measurementLabelsSchema>;
 
 export const measurementListQuerySchema = z.object({
   workspaceId: uuidField('workspaceId must be an id').optional(),

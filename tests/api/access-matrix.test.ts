@@ -175,6 +175,7 @@ const MATRIX: Record<string, { expect: Expect; build: Builder }> = {
   'GET /api/v1/measurements': { expect: signedIn(200), build: () => ({ path: '/api/v1/measurements' }) },
   'POST /api/v1/measurements': { expect: write(201), build: (f) => ({ path: '/api/v1/measurements', form: measurementForm(f) }) },
   'GET /api/v1/measurements/[id]': { expect: read(), build: (f) => ({ path: `/api/v1/measurements/${f.measurementId}` }) },
+  'PATCH /api/v1/measurements/[id]': { expect: write(), build: (f) => ({ path: `/api/v1/measurements/${f.measurementId}`, body: { runLabel: 'Matrix run' } }) },
   'DELETE /api/v1/measurements/[id]': {
     expect: write(),
     build: async (f) => ({ path: `/api/v1/measurements/${(await owner(f).request('POST', '/api/v1/measurements', measurementForm(f))).body.id}` }),
