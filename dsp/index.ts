@@ -24,7 +24,7 @@ export { MAX_HOUSE_RISE_DB, HOUSE_CURVE_DEFINITION, type EqTarget } from './eq/e
 export { NULL_DEFINITION } from './eq/find-nulls';
 export { RESIDUAL_DEFINITION } from './eq/eq-residual';
 
-export { SILENCE_DB, type PathSpec, type ResponseCurves, type BlendResult } from './blend/blend-types';
+export { SILENCE_DB, type MeasuredResponse, type PathSpec, type ResponseCurves, type BlendResult } from './blend/blend-types';
 export { blendResponse } from './blend/blend-response';
 export { pathResponse } from './blend/path-response';
 export { MAX_PATH_EQ_FILTERS } from './blend/path-plan';
@@ -86,6 +86,7 @@ export { bandPowerAverageDb } from './measured/band-power-average';
 export { inRoomExtension, EXTENSION_BAND_DEFAULTS } from './measured/in-room-extension';
 export { crossoverAgainstExtension, type CrossoverAgainstExtension } from './measured/crossover-against-extension';
 export { spatialAverageDb } from './measured/spatial-average';
+export { compareRuns, COMPARE_MIN_COMMON_OCTAVES } from './measured/compare-runs';
 export { wrapDeg } from './internal/angles';
 
 export { SEAT_BALANCE_DEFAULT_LIMITS, SEAT_BALANCE_RESOLUTION, type SubSetting, type SeatBalanceLimits, type SeatBalanceMeasures } from './seat-balance/seat-balance-types';
@@ -94,3 +95,7 @@ export { optimizeSubSettings } from './seat-balance/optimize-sub-settings';
 export { subPlacementSearch, combinationCount } from './seat-balance/sub-placement-search';
 export { defaultSubCandidates } from './seat-balance/default-sub-candidates';
 export { measuredSeatTransfer } from './seat-balance/measured-seat-transfer';
+
+export { impulseFromResponse } from './time/impulse-from-response';
+export { pathsTimeResponse } from './time/paths-time-response';
+export type { TimeSignal } from './time/impulse-from-bins';

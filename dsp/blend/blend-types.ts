@@ -18,6 +18,19 @@ export interface PathSpec {
   readonly invert: boolean;
   /** Air path to the listener, m; adds distanceM / c(temperatureC) to the delay, never changes level. */
   readonly distanceM?: number;
+  /**
+   * The speaker as measured at the seat, instead of its model: the path is then this measured complex response ×
+   * filter × EQ × gain × polarity × processor delay. The measurement already holds the speaker's roll-off, its voicing
+   * switches, the air path and the room, so such a path leaves out `rolloff`, voicing EQ and `distanceM`.
+   */
+  readonly measured?: MeasuredResponse;
+}
+
+/** A measured complex response at a seat (ascending frequencies; true phase, wrapped or continuous). */
+export interface MeasuredResponse {
+  readonly frequencyHz: Float64Array | readonly number[];
+  readonly magnitudeDb: Float64Array | readonly number[];
+  readonly phaseDeg: Float64Array | readonly number[];
 }
 
 /** Magnitude, phase and group delay over a frequency grid. */

@@ -4,6 +4,7 @@ import type { AnalogSection, EqFilter } from '../filters/filter-types';
 import { assertFinite, assertNonNegative } from '../internal/guards';
 import { compileSections, type SectionPlan } from '../internal/section-plan';
 import type { PathSpec } from './blend-types';
+import { measuredFactor } from './measured-factor';
 
 /** A validated path ready for evaluation. */
 export interface CompiledPath {
@@ -42,5 +43,6 @@ export function compilePath(path: PathSpec, speedMps: number, prefix = 'path'): 
   }
   const gain = Math.pow(10, path.gainDb / 20) * (path.invert ? -1 : 1);
   const delayS = path.delayMs / 1000 + (path.distanceM ?? 0) / speedMps;
-  return { name: String(path.name), plan: compileSections(sections, gain), delayS };
+  const measured = path.measured === undefined ? null : measuredFactor(path.measured, `${prefix}.measured`);
+  return { name: String(path.name), plan: compileSections(sections, gain, measured), delayS };
 }

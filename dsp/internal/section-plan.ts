@@ -15,11 +15,32 @@ export interface SectionPlan {
   readonly gain: number;
   /** Total power of s in the numerator (sum of high-pass orders). */
   readonly numeratorPower: number;
+  /** A measured response multiplied in (a path run on a measurement instead of the speaker's model); null: none. */
+  readonly tabulated: TabulatedFactor | null;
+}
+
+/**
+ * A response known only at points (a measurement), read between them by straight lines: the natural-log amplitude in
+ * ln f, the continuous phase in f (so the group delay is constant between two points and a pure delay is read exactly).
+ * Below the first point the first amplitude and phase are held; above the last the amplitude is held and the phase
+ * goes on turning at the top group delay (so a delayed curve stays delayed).
+ */
+export interface TabulatedFactor {
+  /** Frequencies, Hz, strictly ascending, at least two points. */
+  readonly hz: Float64Array;
+  /** ln(frequency / Hz). */
+  readonly lnHz: Float64Array;
+  /** ln |M| (natural log of the amplitude). */
+  readonly lnAmplitude: Float64Array;
+  /** Continuous phase, rad. */
+  readonly phaseRad: Float64Array;
+  /** Group delay above the last point, s. */
+  readonly topGroupDelayS: number;
 }
 
 const CODES: Record<AnalogSection['kind'], number> = { lowpass1: 0, highpass1: 1, lowpass2: 2, highpass2: 3, general1: 4, general2: 5 };
 
-export function compileSections(sections: readonly AnalogSection[], gain: number): SectionPlan {
+export function compileSections(sections: readonly AnalogSection[], gain: number, tabulated: TabulatedFactor | null = null): SectionPlan {
   const kernel = new Float64Array(sections.length * 3);
   const numerators = new Float64Array(sections.length * 3);
   let numeratorPower = 0;
@@ -39,7 +60,7 @@ export function compileSections(sections: readonly AnalogSection[], gain: number
       numerators[3 * i + 2] = code === 4 ? 0 : n2;
     }
   });
-  return { kernel, numerators, hasGeneral, count: sections.length, gain, numeratorPower };
+  return { kernel, numerators, hasGeneral, count: sections.length, gain, numeratorPower, tabulated };
 }
 
 /** Where {@link evaluatePlanOnGrid} writes: H and H′/H at each grid point (each array at least as long as the grid). */
@@ -59,6 +80,56 @@ export interface PlanValues {
 export function evaluatePlanOnGrid(plan: SectionPlan, omega: ArrayLike<number>, out: PlanValues): void {
   evaluateDenominators(plan, omega, out);
   if (plan.hasGeneral) applyNumerators(plan, omega, out);
+  if (plan.tabulated) applyTabulated(plan.tabulated, omega, out);
+}
+
+const INV_TWO_PI = 1 / (2 * Math.PI);
+
+/**
+ * Multiplies a tabulated response M into H and adds M′/M to H′/H. Between points ln|M| is a straight line in ln f
+ * (d/dω = (1/ω)·d/d(ln f)) and the phase a straight line in f (dφ/dω its slope over 2π): M′/M = a′/ω + j·φ′.
+ */
+function applyTabulated(t: TabulatedFactor, omega: ArrayLike<number>, out: PlanValues): void {
+  const { hz, lnHz, lnAmplitude, phaseRad } = t;
+  const last = hz.length - 1;
+  const { re, im, dRe, dIm } = out;
+  let seg = 0;
+  for (let i = 0; i < omega.length; i++) {
+    const w = omega[i] as number;
+    const f = w * INV_TWO_PI;
+    let amp: number;
+    let phase: number;
+    let slopeAmp = 0; // d ln|M| / d ln f
+    let phasePerOmega = 0; // dφ/dω, s
+    if (f <= (hz[0] as number)) {
+      amp = lnAmplitude[0] as number;
+      phase = phaseRad[0] as number;
+    } else if (f >= (hz[last] as number)) {
+      amp = lnAmplitude[last] as number;
+      phasePerOmega = -t.topGroupDelayS;
+      phase = (phaseRad[last] as number) + phasePerOmega * (w - 2 * Math.PI * (hz[last] as number));
+    } else {
+      // The segment holding f: walk on from the last one (grids ascend), or from the start when f went back.
+      if (f < (hz[seg] as number)) seg = 0;
+      while ((hz[seg + 1] as number) <= f) seg++;
+      const f0 = hz[seg] as number;
+      const x0 = lnHz[seg] as number;
+      slopeAmp = ((lnAmplitude[seg + 1] as number) - (lnAmplitude[seg] as number)) / ((lnHz[seg + 1] as number) - x0);
+      amp = (lnAmplitude[seg] as number) + slopeAmp * (Math.log(f) - x0);
+      const phasePerHz = ((phaseRad[seg + 1] as number) - (phaseRad[seg] as number)) / ((hz[seg + 1] as number) - f0);
+      phase = (phaseRad[seg] as number) + phasePerHz * (f - f0);
+      phasePerOmega = phasePerHz * INV_TWO_PI;
+    }
+    const a = Math.exp(amp);
+    const mr = a * Math.cos(phase);
+    const mi = a * Math.sin(phase);
+    const hr = re[i] as number;
+    const hi = im[i] as number;
+    re[i] = hr * mr - hi * mi;
+    im[i] = hr * mi + hi * mr;
+    dRe[i] = (dRe[i] as number) + slopeAmp / w;
+    dIm[i] = (dIm[i] as number) + phasePerOmega;
+  }
 }
 
 /**

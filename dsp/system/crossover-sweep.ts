@@ -17,6 +17,11 @@ export interface CrossoverSweepOptions {
   readonly candidatesHz: readonly number[];
   /** Largest sub delay shift tried either way, ms (default 20). */
   readonly maxShiftMs?: number;
+  /**
+   * The mains' own −3 dB point, Hz, when it is known otherwise than from their roll-off (measured in the room); null:
+   * unknown. Default: from model.mains.rolloff.
+   */
+  readonly mainsMinus3DbHz?: number | null;
 }
 
 /** One row: a crossover point and pairing at its best delay shift and polarity of the subs, on the whole system. */
@@ -113,13 +118,14 @@ export function rankSweepRows<T extends RankableSweepRow>(rows: readonly T[], pr
  * first row is never worse than the present.
  * @example crossoverSweep({ model, pairings: [{ mainsFilter: lr4, subFilter: lr4 }], candidatesHz: [60, 80, 100] }).rows[0]
  */
-export function crossoverSweep({ model, pairings, candidatesHz, maxShiftMs = 20 }: CrossoverSweepOptions): CrossoverSweepResult {
+export function crossoverSweep({ model, pairings, candidatesHz, maxShiftMs = 20, ...options }: CrossoverSweepOptions): CrossoverSweepResult {
   if (!Array.isArray(candidatesHz) || candidatesHz.length === 0) throw new RangeError('candidatesHz must hold at least one frequency');
   if (candidatesHz.length > 200) throw new RangeError('candidatesHz must hold at most 200 frequencies');
   if (!Array.isArray(pairings) || pairings.length === 0) throw new RangeError('pairings must hold at least one pairing');
   if (model.subs.length === 0) throw new RangeError('model.subs must hold at least one sub');
   candidatesHz.forEach((f, k) => assertPositive(`candidatesHz[${k}]`, f));
-  const mainsMinus3DbHz = rolloffMinus3DbHz(model.mains.rolloff);
+  const mainsMinus3DbHz = options.mainsMinus3DbHz !== undefined ? options.mainsMinus3DbHz : rolloffMinus3DbHz(model.mains.rolloff);
+  if (mainsMinus3DbHz !== null) assertPositive('mainsMinus3DbHz', mainsMinus3DbHz);
   const lowestClearHz = mainsMinus3DbHz === null ? null : mainsMinus3DbHz * Math.SQRT2;
   const nearRolloff = (fc: number) => lowestClearHz !== null && fc < lowestClearHz - 1e-9;
   const present = assessBlend({ temperatureC: model.temperatureC, paths: systemPaths(model), crossoverHz: model.crossoverHz });

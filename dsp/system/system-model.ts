@@ -1,4 +1,4 @@
-import type { PathSpec } from '../blend/blend-types';
+import type { MeasuredResponse, PathSpec } from '../blend/blend-types';
 import type { EqFilter, FilterShape, RolloffChain } from '../filters/filter-types';
 import { withoutCommonDelayMs } from '../timing/remove-common-delay';
 
@@ -16,6 +16,11 @@ export interface SystemSource {
   readonly rolloff?: RolloffChain;
   /** The EQ this source runs: its speaker's voicing-switch filters and, for a sub, the processor's EQ on its output. */
   readonly eq?: readonly EqFilter[];
+  /**
+   * This source as measured at the seat, used instead of its model: the measurement holds the speaker's roll-off,
+   * voicing, air path and room, so a measured source has no roll-off, voicing EQ or distance of its own (distanceM 0).
+   */
+  readonly measured?: MeasuredResponse;
 }
 
 /** Bass management: the crossover point and the two slopes. */
@@ -49,6 +54,7 @@ export function systemPaths(model: SystemModel): PathSpec[] {
     delayMs: s.delayMs,
     invert: s.invert,
     distanceM: s.distanceM,
+    ...(s.measured !== undefined ? { measured: s.measured } : {}),
   });
   return [
     path(model.mains, { ...model.mainsHighpass, response: 'highpass', cornerHz: crossoverHz }),
