@@ -3,7 +3,16 @@ import type { UnitSystem } from '@/components/system/system-context';
 import type { TimingAnswer } from '@/lib/system-model/timing';
 import { lengthText } from './length-text';
 
-/** When the mains and each sub arrive at the MLP (air time plus the delay set), and their phase difference at the crossover. */
+const UNKNOWN = <span className="text-ink-faint">not known</span>;
+const ms = (v: number | null) => (v === null ? UNKNOWN : `${formatNumber(v, 2)} ms`);
+const distance = (v: number | null, units: UnitSystem) => (v === null ? UNKNOWN : lengthText(v, units));
+/** Where an arrival comes from, when it is not the layout's distance. */
+const fromMeasurement = (a: TimingAnswer['mains']) => (a.arrivalFrom === 'measured' ? ' (measured peak)' : '');
+
+/**
+ * When the mains and each sub arrive at the MLP (air time plus the delay set), and their phase difference at the
+ * crossover. On measurements an arrival is the impulse response's peak, or not known (a text file without one).
+ */
 export function ArrivalsTable({ data, temperatureC, units, pending }: { data: TimingAnswer; temperatureC: number; units: UnitSystem; pending: boolean }) {
   return (
     <div className="relative overflow-x-auto">
@@ -25,10 +34,13 @@ export function ArrivalsTable({ data, temperatureC, units, pending }: { data: Ti
         <tbody className="num whitespace-nowrap">
           <tr className="border-b border-line">
             <th scope="row" className="px-2 py-1.5 text-left font-medium text-mains">{data.mains.name} (mains)</th>
-            <td className="px-2 py-1.5">{lengthText(data.mains.distanceM, units)}</td>
-            <td className="px-2 py-1.5">{formatNumber(data.mains.arrivalMs, 2)} ms</td>
+            <td className="px-2 py-1.5">{distance(data.mains.distanceM, units)}</td>
+            <td className="px-2 py-1.5">
+              {ms(data.mains.arrivalMs)}
+              {fromMeasurement(data.mains)}
+            </td>
             <td className="px-2 py-1.5">{formatNumber(data.mains.delayMs, 2)} ms</td>
-            <td className="px-2 py-1.5">{formatNumber(data.mains.totalMs, 2)} ms</td>
+            <td className="px-2 py-1.5">{ms(data.mains.totalMs)}</td>
             <td className="px-2 py-1.5 text-ink-faint">reference</td>
           </tr>
           {data.subs.map((s, k) => (
@@ -36,17 +48,23 @@ export function ArrivalsTable({ data, temperatureC, units, pending }: { data: Ti
               <th scope="row" className="px-2 py-1.5 text-left font-medium" style={{ color: subTraceStyle(k).color }}>
                 {s.name}
               </th>
-              <td className="px-2 py-1.5">{lengthText(s.distanceM, units)}</td>
-              <td className="px-2 py-1.5">{formatNumber(s.arrivalMs, 2)} ms</td>
+              <td className="px-2 py-1.5">{distance(s.distanceM, units)}</td>
+              <td className="px-2 py-1.5">
+                {ms(s.arrivalMs)}
+                {fromMeasurement(s)}
+              </td>
               <td className="px-2 py-1.5">{formatNumber(s.delayMs, 2)} ms</td>
               <td className="px-2 py-1.5">
-                {formatNumber(s.totalMs, 2)} ms <span className="text-ink-faint">({s.leadMs >= 0 ? `${formatNumber(s.leadMs, 2)} ms early` : `${formatNumber(-s.leadMs, 2)} ms late`})</span>
+                {ms(s.totalMs)}{' '}
+                {s.leadMs === null ? null : <span className="text-ink-faint">({s.leadMs >= 0 ? `${formatNumber(s.leadMs, 2)} ms early` : `${formatNumber(-s.leadMs, 2)} ms late`})</span>}
               </td>
               <td className="px-2 py-1.5" data-testid={`timing-phase-${k}`}>
                 {formatValue(s.phaseDifferenceDeg, '°', 0)}{' '}
-                <span className="text-ink-faint">
-                  = {formatSigned(s.delayPhaseDeg, '°', 0)} arrival {formatSigned(s.filterPhaseDeg, '°', 0)} filters
-                </span>
+                {s.delayPhaseDeg === null || s.filterPhaseDeg === null ? null : (
+                  <span className="text-ink-faint">
+                    = {formatSigned(s.delayPhaseDeg, '°', 0)} arrival {formatSigned(s.filterPhaseDeg, '°', 0)} filters
+                  </span>
+                )}
               </td>
             </tr>
           ))}

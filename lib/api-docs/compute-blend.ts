@@ -43,6 +43,12 @@ const systemFields = (crossoverText: string): ApiField[] => [
   { name: 'subs[].invert', type: 'boolean', description: 'Polarity inverted now (default false).' },
   { name: 'subs[].rolloff', type: 'object | array', description: `The sub's ${rolloffNote} (default none).` },
   { name: 'subs[].eq', type: 'array', description: `This sub's ${eqNote}.` },
+  {
+    name: 'mains.measured / subs[].measured',
+    type: 'object',
+    description:
+      'Run this source on what was measured at the seat instead of its model: { measurementId } (a stored measurement you may read; needs a session) or { frequencyHz, magnitudeDb, phaseDeg? } (at most 20 000 points; no phase: a minimum-phase estimate, which holds no arrival time). The measurement holds the speaker\'s roll-off, voicing switches, air path and room, so such a source must send distanceM 0 and rolloff none, and its eq is the processor\'s only. The curves must cover fc/2 … 4·fc (mains) and fc/2 … 2·fc (subs) for every crossover point judged, else 400 naming the point. With measured mains the sweep\'s roll-off rule uses their in-room −3 dB point (level against 200 Hz–2 kHz).',
+  },
 ];
 
 export const BLEND_DOCS: ApiRouteDoc[] = [
@@ -155,7 +161,8 @@ export const BLEND_DOCS: ApiRouteDoc[] = [
     answer: [
       { name: 'speedOfSoundMps', type: 'number', unit: 'm/s', description: 'c at temperatureC, 0.001 m/s.' },
       { name: 'flatness.definition', type: 'string', description: `What flatnessDb means: "${FLATNESS_TEXT}".` },
-      { name: 'mainsMinus3DbHz', type: 'number | null', unit: 'Hz', description: "The main speaker's own −3 dB point from mains.rolloff (where its level first falls 3 dB under its passband, looking down), 0.1 Hz; null with no roll-off." },
+      { name: 'mainsMinus3DbHz', type: 'number | null', unit: 'Hz', description: "The main speaker's own −3 dB point from mains.rolloff (where its level first falls 3 dB under its passband, looking down), 0.1 Hz; null with no roll-off. With measured mains: their in-room −3 dB point against their level over 200 Hz–2 kHz." },
+      { name: 'measured', type: 'object | null', description: 'Null on the model. On measurements: { sources: [{ name, startHz, stopHz, phaseEstimated }], crossoverRangeHz, mainsMinus3DbHz, note }, as in the Timing answer.' },
       { name: 'lowestClearHz', type: 'number | null', unit: 'Hz', description: 'The lowest crossover clear of the mains\' roll-off: mainsMinus3DbHz × √2, half an octave above it (common practice); null with no roll-off.' },
       { name: 'candidatesHz', type: 'number[]', unit: 'Hz', description: 'The candidates tried.' },
       { name: 'rows[]', type: 'array', description: 'One row per candidate × pairing, plus the present setting as a row of its own; best first.' },
@@ -280,12 +287,19 @@ export const BLEND_DOCS: ApiRouteDoc[] = [
       { name: 'crossoverHz', type: 'number', unit: 'Hz', description: 'The crossover of the request.' },
       { name: 'flatness', type: 'object', unit: 'Hz', description: `{ definition: "${FLATNESS_TEXT}", bandHz: [fc/2, 2·fc] }.` },
       { name: 'present', type: 'object', description: `The whole system as it is: ${assessmentShape}.` },
-      { name: 'mains', type: 'object', unit: 'm / ms', description: '{ name, distanceM, arrivalMs (air time distanceM / c, 0.001 ms), delayMs (processor), totalMs }.' },
-      { name: 'subs[].name / distanceM / arrivalMs / delayMs / totalMs', type: 'string / number', unit: 'm / ms', description: 'The same for every sub, in request order.' },
+      {
+        name: 'mains',
+        type: 'object',
+        unit: 'm / ms',
+        description:
+          "{ name, distanceM, arrivalMs (air time distanceM / c, 0.001 ms), arrivalFrom, delayMs (processor), totalMs }. arrivalFrom 'distance' on the model; on a measured source 'measured' (the impulse response's peak, distanceM the distance that time stands for) or null with arrivalMs, distanceM and totalMs null (a curve without an arrival).",
+      },
+      { name: 'subs[].name / distanceM / arrivalMs / arrivalFrom / delayMs / totalMs', type: 'string / number | null', unit: 'm / ms', description: 'The same for every sub, in request order.' },
+      { name: 'measured', type: 'object | null', description: 'Null on the model. On measurements: { sources: [{ name, startHz, stopHz, phaseEstimated }], crossoverRangeHz: [lo, hi] (the points the curves can judge), mainsMinus3DbHz (in-room, 0.1 Hz, or null), note (one paragraph to show beside the results) }.' },
       { name: 'subs[].invert', type: 'boolean', description: 'Polarity inverted now (as sent).' },
-      { name: 'subs[].leadMs', type: 'number', unit: 'ms', description: "How much earlier this sub's sound arrives than the mains' (processor delays included; negative: later)." },
+      { name: 'subs[].leadMs', type: 'number | null', unit: 'ms', description: "How much earlier this sub's sound arrives than the mains' (processor delays included; negative: later); null when an arrival is not known." },
       { name: 'subs[].phaseDifferenceDeg', type: 'number', unit: '°', description: 'Mains minus sub phase at the crossover with the present settings, filters’ own phase and polarity included, (−180, 180], 0.1°; = delayPhaseDeg + filterPhaseDeg (wrapped).' },
-      { name: 'subs[].delayPhaseDeg / filterPhaseDeg', type: 'number', unit: '°', description: 'The part from arrival and processor delays alone, 360·fc·(sub total − mains total), and the rest: the filters\', roll-offs\' and polarity\'s own phase.' },
+      { name: 'subs[].delayPhaseDeg / filterPhaseDeg', type: 'number | null', unit: '°', description: 'The part from arrival and processor delays alone, 360·fc·(sub total − mains total), and the rest: the filters\', roll-offs\' and polarity\'s own phase.' },
       { name: 'subs[].advice.keep / reason', type: 'boolean / string', description: 'This sub\'s delay and polarity with the main channel and every other sub as they are: keep true when no change is worth making, with the reason in one sentence (what the advice gains, or why the present setting stays).' },
       { name: 'subs[].advice.set', type: 'object', unit: 'ms', description: `The whole system's settings after the advice (the present ones when keep): ${settingsShape}.` },
       { name: 'subs[].advice.before / after', type: 'object', description: 'The assessment of the present setting and of the advised one (the same when keep), each like present.' },

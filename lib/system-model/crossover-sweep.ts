@@ -11,6 +11,7 @@ import { assessmentAnswer, settingsAnswer, type AssessmentAnswer, type SettingsA
 import { profileById } from './geometry';
 import { roundTo } from './rounding';
 import { blendMainSpeaker, retimeDocument, systemModelFromDocument, timingSettingsOf } from './system-from-document';
+import { withMeasuredSources, type CurvePoints, type MeasuredBasis } from './measured-sources';
 import { systemModelFromRequest, systemRequestFromModel } from './system-request';
 
 export interface CrossoverSweepAnswerRow {
@@ -52,6 +53,8 @@ export interface CrossoverSweepAnswer {
   lowestClearHz: number | null;
   candidatesHz: number[];
   rows: CrossoverSweepAnswerRow[];
+  /** Null on the model; on measurements: which, their ranges, phase estimates, and the mains' in-room −3 dB point used. */
+  measured: MeasuredBasis | null;
 }
 
 /** Candidates from..to (inclusive) in steps of stepHz, e.g. 40, 45, … 150. */
@@ -94,10 +97,15 @@ export function crossoverSweepRequestFromDocument(
   return { ...systemRequestFromModel(model), maxDelayMs: 20, pairings: options.pairings, candidatesHz: options.candidatesHz };
 }
 
-/** The answer of POST /api/v1/crossover-sweep: every candidate crossover × slope pairing, ranked, with its settings. */
-export function computeCrossoverSweep(req: CrossoverSweepRequest): CrossoverSweepAnswer {
+/**
+ * The answer of POST /api/v1/crossover-sweep: every candidate crossover × slope pairing, ranked, with its settings — on
+ * the model, or on the measured curves the request's sources name (resolved by the route: `curves`); then the mains'
+ * roll-off rule uses their measured in-room −3 dB point.
+ */
+export function computeCrossoverSweep(req: CrossoverSweepRequest, curves: { mains: CurvePoints | null; subs: readonly (CurvePoints | null)[] } = { mains: null, subs: [] }): CrossoverSweepAnswer {
   const candidatesHz = [...(req.candidatesHz ?? DEFAULT_SWEEP_CANDIDATES_HZ)];
-  const r = crossoverSweep({ model: systemModelFromRequest(req), pairings: req.pairings, candidatesHz, maxShiftMs: req.maxDelayMs });
+  const { model, basis } = withMeasuredSources(systemModelFromRequest(req), curves, [{ path: 'crossoverHz', valueHz: req.crossoverHz }, ...candidatesHz.map((valueHz, k) => ({ path: `candidatesHz.${k}`, valueHz }))]);
+  const r = crossoverSweep({ model, pairings: req.pairings, candidatesHz, maxShiftMs: req.maxDelayMs, ...(basis && curves.mains ? { mainsMinus3DbHz: basis.mainsMinus3DbHz } : {}) });
   return {
     speedOfSoundMps: roundTo(speedOfSoundMps(req.temperatureC), 3),
     flatness: { definition: FLATNESS_DEFINITION.text },
@@ -127,6 +135,7 @@ export function computeCrossoverSweep(req: CrossoverSweepRequest): CrossoverSwee
       })),
       req.crossoverHz,
     ),
+    measured: basis,
   };
 }
 

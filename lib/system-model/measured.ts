@@ -19,15 +19,10 @@ import {
 import { invalid } from '@/lib/errors';
 import type { PredictRequest, PredictRequestInput } from '@/lib/validations/measurement';
 import type { SystemDocument } from '@/lib/validations/system';
+import type { CurvePoints } from './measured-sources';
 import { roundAllTo, roundAllToSignificant, roundTo } from './rounding';
 import { retimeDocument, systemModelFromDocument, timingSettingsOf } from './system-from-document';
 
-/** The points of one curve, as stored or sent inline. */
-export interface CurvePoints {
-  frequencyHz: readonly number[];
-  magnitudeDb: readonly number[];
-  phaseDeg: readonly number[] | null;
-}
 
 export interface PredictTrace {
   name: string;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { measuredCurveSchema } from './measured-curve';
 import { MAX_PATH_EQ_FILTERS } from '@/dsp';
 import { num } from './common';
 import { COMPUTE_LIMITS, gridSchema, temperatureCSchema } from './compute-common';
@@ -132,24 +133,42 @@ export function sweepRowsProblem(candidateCount: number, pairingCount: number): 
 }
 
 
-const timingMainsSchema = z.strictObject({
-  name: nameSchema.default('mains'),
-  distanceM: distanceMSchema,
-  delayMs: delayMsSchema.default(0),
-  gainDb: gainDbSchema.default(0),
-  rolloff: chainOf(mainsRolloffSchema).default({ kind: 'none' }),
-  eq: pathEqSchema.optional(),
-});
+/**
+ * A source run on what was measured at the seat: the measurement holds the speaker's roll-off, its voicing switches,
+ * the air path and the room, so such a source has distanceM 0 and no roll-off, and its `eq` is the processor's only.
+ */
+const measuredSourceRefine = (s: { distanceM: number; rolloff: unknown; measured?: unknown }, ctx: z.RefinementCtx) => {
+  if (s.measured === undefined) return;
+  if (s.distanceM !== 0) ctx.addIssue({ code: 'custom', path: ['distanceM'], message: 'must be 0 with measured (the measurement already holds the air path)' });
+  const chain = Array.isArray(s.rolloff) ? s.rolloff : [s.rolloff];
+  if (chain.some((r) => (r as { kind: string }).kind !== 'none')) ctx.addIssue({ code: 'custom', path: ['rolloff'], message: "must be { kind: 'none' } with measured (the measurement already holds the speaker's roll-off)" });
+};
 
-const timingSubSchema = z.strictObject({
-  name: nameSchema,
-  distanceM: distanceMSchema,
-  delayMs: delayMsSchema.default(0),
-  gainDb: gainDbSchema.default(0),
-  invert: invertSchema.default(false),
-  rolloff: chainOf(rolloffSchema).default({ kind: 'none' }),
-  eq: pathEqSchema.optional(),
-});
+const timingMainsSchema = z
+  .strictObject({
+    name: nameSchema.default('mains'),
+    distanceM: distanceMSchema,
+    delayMs: delayMsSchema.default(0),
+    gainDb: gainDbSchema.default(0),
+    rolloff: chainOf(mainsRolloffSchema).default({ kind: 'none' }),
+    eq: pathEqSchema.optional(),
+    /** Run this source on its measurement at the seat instead of its model. */
+    measured: measuredCurveSchema.optional(),
+  })
+  .superRefine(measuredSourceRefine);
+
+const timingSubSchema = z
+  .strictObject({
+    name: nameSchema,
+    distanceM: distanceMSchema,
+    delayMs: delayMsSchema.default(0),
+    gainDb: gainDbSchema.default(0),
+    invert: invertSchema.default(false),
+    rolloff: chainOf(rolloffSchema).default({ kind: 'none' }),
+    eq: pathEqSchema.optional(),
+    measured: measuredCurveSchema.optional(),
+  })
+  .superRefine(measuredSourceRefine);
 
 /** The whole system a Timing or Crossover sweep request describes: one main channel and every sub, as the processor runs them. */
 const systemShape = {

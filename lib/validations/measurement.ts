@@ -3,7 +3,7 @@ import { num, uuidField } from './common';
 import { pathEqSchema } from './compute-blend';
 import { temperatureCSchema } from './compute-common';
 import { filterFamilySchema, refineSlopeOrder } from './slope';
-import { MAX_ABS_MAGNITUDE_DB, MAX_ABS_PHASE_DEG, MIN_MEASUREMENT_POINTS } from '@/lib/measurements/parse-measurement';
+import { measuredCurveSchema } from './measured-curve';
 
 /**
  * Measurements: the text fields of an upload, the list query, and the body of
@@ -64,31 +64,7 @@ export const measurementListQuerySchema = z.object({
 });
 export type MeasurementListQuery = z.infer<typeof measurementListQuerySchema>;
 
-/** Most points of an inline curve sent to the predict route. */
-export const MAX_INLINE_POINTS = 20_000;
-
-/** A curve sent inline; the same limits as an uploaded file. */
-export const inlineCurveSchema = z
-  .strictObject({
-    frequencyHz: z.array(num(1e-6, 1e6, 'Hz')).min(MIN_MEASUREMENT_POINTS, `must hold at least ${MIN_MEASUREMENT_POINTS} points`).max(MAX_INLINE_POINTS, `must hold at most ${MAX_INLINE_POINTS} points`),
-    magnitudeDb: z.array(num(-MAX_ABS_MAGNITUDE_DB, MAX_ABS_MAGNITUDE_DB, 'dB')),
-    phaseDeg: z.array(num(-MAX_ABS_PHASE_DEG, MAX_ABS_PHASE_DEG, '°')).nullable().optional(),
-  })
-  .superRefine((c, ctx) => {
-    if (c.magnitudeDb.length !== c.frequencyHz.length) ctx.addIssue({ code: 'custom', path: ['magnitudeDb'], message: `must hold as many values as frequencyHz (${c.frequencyHz.length})` });
-    if (c.phaseDeg && c.phaseDeg.length !== c.frequencyHz.length) ctx.addIssue({ code: 'custom', path: ['phaseDeg'], message: `must hold as many values as frequencyHz (${c.frequencyHz.length})` });
-    for (let i = 1; i < c.frequencyHz.length; i++) {
-      if ((c.frequencyHz[i] as number) <= (c.frequencyHz[i - 1] as number)) {
-        ctx.addIssue({ code: 'custom', path: ['frequencyHz', i], message: 'frequencies must strictly increase' });
-        break;
-      }
-    }
-  });
-
-/** A measured curve: a stored measurement the caller may read, or the points themselves. */
-export const measuredCurveSchema = z.union([z.strictObject({ measurementId: uuidField('measurementId must be an id') }), inlineCurveSchema], {
-  error: 'must be { measurementId } or { frequencyHz, magnitudeDb, phaseDeg? }',
-});
+export { inlineCurveSchema, measuredCurveSchema, type MeasuredCurveInput } from './measured-curve';
 
 const settingsSchema = {
   gainDb: num(-60, 60, 'dB'),
@@ -116,4 +92,3 @@ export const predictRequestSchema = z.strictObject({
 });
 export type PredictRequest = z.infer<typeof predictRequestSchema>;
 export type PredictRequestInput = z.input<typeof predictRequestSchema>;
-export type MeasuredCurveInput = z.infer<typeof measuredCurveSchema>;

@@ -52,7 +52,7 @@ describe('computeTiming: the answer of POST /api/v1/timing', () => {
     const a = computeTiming(timingRequestSchema.parse(timingRequestFromDocument(testSystem())));
     const r3 = (v: number) => Math.round(v * 1000) / 1000;
     expect(a.speedOfSoundMps).toBe(343.215);
-    expect(a.mains).toEqual({ name: 'L', distanceM: 3, arrivalMs: r3(3 * MS_PER_METRE_20C), delayMs: 5.83, totalMs: r3(3 * MS_PER_METRE_20C + 5.83) });
+    expect(a.mains).toEqual({ name: 'L', distanceM: 3, arrivalFrom: 'distance', arrivalMs: r3(3 * MS_PER_METRE_20C), delayMs: 5.83, totalMs: r3(3 * MS_PER_METRE_20C + 5.83) });
     expect(a.subs[0]).toMatchObject({ name: 'Sub A', distanceM: 4, arrivalMs: r3(4 * MS_PER_METRE_20C), delayMs: 2.91, totalMs: r3(4 * MS_PER_METRE_20C + 2.91) });
     expect(a.subs[0]!.leadMs).toBe(r3(3 * MS_PER_METRE_20C + 5.83 - (4 * MS_PER_METRE_20C + 2.91)));
     expect(a.flatness.bandHz).toEqual([40, 160]);

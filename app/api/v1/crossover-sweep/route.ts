@@ -1,9 +1,13 @@
-import { json, parseJson, route } from '@/lib/http';
+import { resolveSourceCurves } from '@/lib/data/measured-curves';
+import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
 import { computeCrossoverSweep } from '@/lib/system-model/crossover-sweep';
 import { crossoverSweepRequestSchema } from '@/lib/validations/compute-blend';
 
-/** POST /api/v1/crossover-sweep — candidate crossover points for one pairing, ranked (fields in lib/api-docs/compute-blend.ts). */
+/**
+ * POST /api/v1/crossover-sweep — candidate crossover points for the pairings, ranked, on the model or on measured
+ * curves (a source's `measured`: a stored measurement's id or the points); fields in lib/api-docs/compute-blend.ts.
+ */
 export const POST = route(async (request) => {
-  const input = await parseJson(request, crossoverSweepRequestSchema);
-  return json(computeCrossoverSweep(input));
+  const input = await parseJson(request, crossoverSweepRequestSchema, BODY_LIMIT_BYTES.measuredCurves);
+  return json(computeCrossoverSweep(input, await resolveSourceCurves(input)));
 });

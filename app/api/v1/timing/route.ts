@@ -1,9 +1,14 @@
-import { json, parseJson, route } from '@/lib/http';
+import { resolveSourceCurves } from '@/lib/data/measured-curves';
+import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
 import { computeTiming } from '@/lib/system-model/timing';
 import { timingRequestSchema } from '@/lib/validations/compute-blend';
 
-/** POST /api/v1/timing — arrival times, phase at the crossover, recommended delay and polarity, Timing window (fields in lib/api-docs/compute-blend.ts). */
+/**
+ * POST /api/v1/timing — arrival times, phase at the crossover, recommended delay and polarity, Timing window, on the
+ * model or on measured curves (a source's `measured`: a stored measurement's id or the points); fields in
+ * lib/api-docs/compute-blend.ts.
+ */
 export const POST = route(async (request) => {
-  const input = await parseJson(request, timingRequestSchema);
-  return json(computeTiming(input));
+  const input = await parseJson(request, timingRequestSchema, BODY_LIMIT_BYTES.measuredCurves);
+  return json(computeTiming(input, await resolveSourceCurves(input)));
 });
