@@ -3,11 +3,14 @@
 import { useId, useMemo, useState } from 'react';
 import { formatHzReadout, formatNumber, formatSigned } from '@/components/charts';
 import { useSystem } from '@/components/system/system-context';
+import { MeasuredBasisPicker } from '@/components/measured/measured-basis-picker';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { NumberField } from '@/components/ui/number-field';
 import { DEMO_PROFILES } from '@/lib/demo/profiles';
 import { useCrossoverSweep } from '@/lib/hooks/use-crossover-sweep';
+import { useMeasuredBasis } from '@/lib/hooks/use-measured-basis';
+import { measuredSourcesRequest, settingsForDocument, type MeasuredPicks } from '@/lib/system-model/measured-sources';
 import { blendMainSpeaker } from '@/lib/system-model/system-from-document';
 import { applyCrossoverSweepToDocument, crossoverSweepRequestFromDocument, type CrossoverSweepAnswerRow } from '@/lib/system-model/crossover-sweep';
 import type { Slope, SpeakerProfile } from '@/lib/validations/system';
@@ -83,6 +86,9 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
   const [applied, setApplied] = useState<string | null>(null);
   const [showAll, setShowAll] = useState(false);
   const sweep = useCrossoverSweep();
+  const basis = useMeasuredBasis(speaker?.channel);
+  // What the rows shown were ranked on (the picker may have moved since).
+  const [ranOn, setRanOn] = useState<{ label: string; picks: MeasuredPicks | null }>({ label: 'model', picks: null });
 
   const pairings = choices.filter((p) => picked.has(pairingKey(p)));
   // As many pairings as fit the API's row cap with this range, and the API's own words when a sweep would not fit.
@@ -93,8 +99,12 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
 
   const run = () => {
     setApplied(null);
-    const request = crossoverSweepRequestFromDocument(doc, { channel: speaker?.channel, mainsProfile, subProfile, pairings, candidatesHz });
-    if (request) void sweep.run(request);
+    // On measurements the speakers are what was measured: no other profile is tried in.
+    const picks = basis.seat?.picks ?? null;
+    const request = crossoverSweepRequestFromDocument(doc, { channel: speaker?.channel, ...(picks ? {} : { mainsProfile, subProfile }), pairings, candidatesHz });
+    if (!request) return;
+    setRanOn({ label: basis.label, picks });
+    void sweep.run(picks ? { ...request, ...measuredSourcesRequest(doc, request, picks) } : request);
   };
 
   const rows = useMemo(() => {
@@ -107,7 +117,9 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
 
   const apply = (row: CrossoverSweepAnswerRow) => {
     // Exactly the crossover, slopes, delays and polarities the row was assessed with (and the profiles tried in).
-    update((d) => applyCrossoverSweepToDocument(d, row, { channel: speaker?.channel, mainsProfile, subProfile }));
+    const present = sweep.rows.find((r) => r.present);
+    const set = ranOn.picks && present ? settingsForDocument(doc, speaker?.channel, ranOn.picks, present.set, row.set) : row.set;
+    update((d) => applyCrossoverSweepToDocument(d, { ...row, set }, ranOn.picks ? { channel: speaker?.channel } : { channel: speaker?.channel, mainsProfile, subProfile }));
     setApplied(`${formatHzReadout(row.crossoverHz)}, ${pairingKey(row)}, ${settingsText(row)}`);
   };
   const lowestClearHz = sweep.lowestClearHz;
@@ -148,6 +160,9 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
               </option>
             ))}
           </select>
+        </div>
+        <div className="sm:col-span-2 xl:col-span-5">
+          <MeasuredBasisPicker basis={basis} testId="sweep-basis" />
         </div>
         <NumberField label="From" unit="Hz" value={fromHz} min={20} max={300} step={1} onChange={setFromHz} testId="sweep-from-hz" />
         <NumberField label="To" unit="Hz" value={toHz} min={20} max={300} step={1} onChange={setToHz} testId="sweep-to-hz" />
@@ -207,9 +222,15 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
         </Notice>
       ) : null}
       {applied ? <Notice kind="ok">Applied to the System: {applied}.</Notice> : null}
+      {rows.length ? (
+        <p className="text-sm font-medium" data-testid="sweep-ran-on">
+          Ranked on the {ranOn.label}.{sweep.measured ? <span className="font-normal text-ink-soft"> {sweep.measured.note}</span> : null}
+        </p>
+      ) : null}
       {rows.length && sweep.mainsMinus3DbHz !== null && lowestClearHz !== null ? (
         <p className="text-sm text-ink-soft" data-testid="sweep-mains-rolloff">
-          {speaker?.channel ?? 'The mains'} roll off by themselves at {formatHzReadout(sweep.mainsMinus3DbHz)} (−3 dB); crossovers below {formatHzReadout(lowestClearHz)}, half an octave above it, are marked and ranked down (common practice).
+          {speaker?.channel ?? 'The mains'} {sweep.measured ? 'measured in the room fall' : 'roll off by themselves'} {sweep.measured ? '3 dB under their 200 Hz–2 kHz level at' : 'at'} {formatHzReadout(sweep.mainsMinus3DbHz)}
+          {sweep.measured ? '' : ' (−3 dB)'}; crossovers below {formatHzReadout(lowestClearHz)}, half an octave above it, are marked and ranked down (common practice).
         </p>
       ) : null}
       {rows.length ? (

@@ -19,6 +19,8 @@ export interface SweepState {
   /** The mains' own −3 dB point and the lowest crossover clear of it (+ half an octave), Hz. */
   mainsMinus3DbHz: number | null;
   lowestClearHz: number | null;
+  /** What the rows were ranked on when measured (null: the model). */
+  measured: CrossoverSweepAnswer['measured'];
 }
 
 /**
@@ -27,7 +29,7 @@ export interface SweepState {
  * (rankSweepRows). A new run cancels the previous one.
  */
 export function useCrossoverSweep() {
-  const [state, setState] = useState<SweepState>({ rows: [], done: 0, total: 0, running: false, error: null, mainsMinus3DbHz: null, lowestClearHz: null });
+  const [state, setState] = useState<SweepState>({ rows: [], done: 0, total: 0, running: false, error: null, mainsMinus3DbHz: null, lowestClearHz: null, measured: null });
   const runId = useRef(0);
 
   const run = useCallback(async (request: CrossoverSweepRequest & { candidatesHz: number[] }) => {
@@ -36,7 +38,7 @@ export function useCrossoverSweep() {
     for (const pairing of request.pairings) {
       for (let i = 0; i < request.candidatesHz.length; i += CHUNK) jobs.push({ ...request, pairings: [pairing], candidatesHz: request.candidatesHz.slice(i, i + CHUNK) });
     }
-    setState({ rows: [], done: 0, total: jobs.length, running: true, error: null, mainsMinus3DbHz: null, lowestClearHz: null });
+    setState({ rows: [], done: 0, total: jobs.length, running: true, error: null, mainsMinus3DbHz: null, lowestClearHz: null, measured: null });
     let rows: CrossoverSweepAnswerRow[] = [];
     for (let k = 0; k < jobs.length; k++) {
       try {
@@ -44,7 +46,7 @@ export function useCrossoverSweep() {
         if (id !== runId.current) return;
         // Every partial answer carries the present row; the one ranking rule merges them.
         rows = rankSweepRows([...rows, ...answer.rows], request.crossoverHz);
-        setState({ rows, done: k + 1, total: jobs.length, running: k + 1 < jobs.length, error: null, mainsMinus3DbHz: answer.mainsMinus3DbHz, lowestClearHz: answer.lowestClearHz });
+        setState({ rows, done: k + 1, total: jobs.length, running: k + 1 < jobs.length, error: null, mainsMinus3DbHz: answer.mainsMinus3DbHz, lowestClearHz: answer.lowestClearHz, measured: answer.measured });
       } catch (e) {
         if (id !== runId.current) return;
         const error = e instanceof ApiError ? e : new ApiError(0, 'error', 'The sweep failed.');

@@ -11,7 +11,7 @@ import type { MeasuredCurveInput } from '@/lib/validations/measured-curve';
 import type { SystemDocument } from '@/lib/validations/system';
 import { roundTo } from './rounding';
 import type { SystemRequest } from './system-request';
-import type { TimingSettings } from './system-from-document';
+import { systemModelFromDocument, timingSettingsOf, type TimingSettings } from './system-from-document';
 
 /** The points of one curve, as stored or sent inline (phase null: the file had none). */
 export interface CurvePoints {
@@ -165,4 +165,22 @@ export function spreadAllSubsSettings(before: TimingSettings, measuredBefore: Ti
     mainsDelayMs: before.mainsDelayMs + mainsShiftMs,
     subs: before.subs.map((s) => ({ delayMs: s.delayMs + shiftMs, invert: flip ? !s.invert : s.invert })),
   };
+}
+
+/**
+ * The settings a result computed on measurements asks of the document's subs: as they are with each sub measured
+ * alone; with every sub measured together, the one "All subs" source's change spread over every sub
+ * (spreadAllSubsSettings, from the present row's settings to the chosen row's).
+ */
+export function settingsForDocument(
+  doc: SystemDocument,
+  channel: string | undefined,
+  picks: MeasuredPicks,
+  present: TimingSettings,
+  chosen: { mainsDelayMs: number; subs: readonly { name?: string; delayMs: number; invert: boolean }[] },
+): { mainsDelayMs: number; subs: { name: string; delayMs: number; invert: boolean }[] } {
+  const model = systemModelFromDocument(doc, channel);
+  if (!model || picks.subs.kind === 'each') return { mainsDelayMs: chosen.mainsDelayMs, subs: chosen.subs.map((s, k) => ({ name: s.name ?? doc.subs[k]?.name ?? '', delayMs: s.delayMs, invert: s.invert })) };
+  const spread = spreadAllSubsSettings(timingSettingsOf(model), present, chosen);
+  return { mainsDelayMs: roundTo(spread.mainsDelayMs, 2), subs: spread.subs.map((s, k) => ({ name: doc.subs[k]?.name ?? '', delayMs: roundTo(s.delayMs, 2), invert: s.invert })) };
 }

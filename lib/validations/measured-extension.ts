@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { num, uuidField } from './common';
 import { COMPUTE_LIMITS } from './compute-common';
-import { inlineCurveSchema } from './measurement';
+import { inlineCurveSchema } from './measured-curve';
 
 /** The body of POST /api/v1/measured/extension: one source's curves at 1–40 seats, a band and an optional crossover. */
 

@@ -64,8 +64,6 @@ export const measurementListQuerySchema = z.object({
 });
 export type MeasurementListQuery = z.infer<typeof measurementListQuerySchema>;
 
-export { inlineCurveSchema, measuredCurveSchema, type MeasuredCurveInput } from './measured-curve';
-
 const settingsSchema = {
   gainDb: num(-60, 60, 'dB'),
   delayMs: num(0, 1000, 'ms'),
