@@ -12,9 +12,9 @@ import { SweepButtons } from './sweep-buttons';
 import { TalkingPoints } from './talking-points';
 import { useSweepPlayer } from './use-sweep-player';
 
-/** `/systems/new?s=…&panel=…`: the snapshot as a new, unsaved System in the editor. */
+/** `/systems/new?s=…&panel=…`: the snapshot as a new, unsaved System in the editor (a time Step opens on Timing, where its plots are). */
 export function stepEditorHref(doc: SystemDocument, panel: string, name?: string): string {
-  const params = new URLSearchParams({ s: encodeDocument(doc), panel });
+  const params = new URLSearchParams({ s: encodeDocument(doc), panel: panel === 'time' ? 'timing' : panel });
   if (name) params.set('name', name.slice(0, 200));
   return `/systems/new?${params.toString()}`;
 }

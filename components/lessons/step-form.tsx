@@ -12,7 +12,7 @@ import { draftToSweep, SweepFields, sweepToDraft, type SweepDraft } from './swee
 import { TalkingPoints } from './talking-points';
 import { useSweepPlayer } from './use-sweep-player';
 
-const PANEL_LABELS: Record<LessonPanel, string> = { blend: 'Blend', timing: 'Timing', modes: 'Modes', layout: 'Layout', headroom: 'Headroom' };
+const PANEL_LABELS: Record<LessonPanel, string> = { blend: 'Blend', timing: 'Timing', modes: 'Modes', layout: 'Layout', headroom: 'Headroom', time: 'Impulse and step' };
 const TRACE_LABELS: Record<LessonTrace, string> = { mains: 'Mains', subs: 'Subs', sum: 'Sum', target: 'Flat reference', phase: 'Phase plot' };
 
 interface StepFormProps {

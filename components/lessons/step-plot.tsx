@@ -6,6 +6,7 @@ import { applyLessonSweepToDocument, formatSweepValue, sweepValueAt } from '@/li
 import { axialModesHz, computeLessonFrame, FRAME_START_HZ } from '@/lib/system-model/lesson-frame';
 import type { LessonPanel, LessonTrace, Sweep } from '@/lib/validations/lesson';
 import type { SystemDocument } from '@/lib/validations/system';
+import { TimeStepPlot } from './time-step-plot';
 
 export interface StepPlotStep {
   document: SystemDocument;
@@ -46,13 +47,18 @@ const fmt = (v: number | null | undefined, digits = 1, unit = '') => {
 /** Levels below −60 dB read as a null (an exact cancellation is −300 dB in dsp/). */
 const fmtDb = (v: number) => (Number.isFinite(v) && v < -60 ? 'null (below −60 dB)' : `${v > 0.05 ? '+' : ''}${fmt(v, 1, 'dB')}`);
 
+/** The plot of one Step: in time for a 'time' Step (impulse and step responses), else over frequency. */
+export function StepPlot(props: StepPlotProps) {
+  return props.step.panel === 'time' ? <TimeStepPlot {...props} /> : <FrequencyStepPlot {...props} />;
+}
+
 /**
  * The plot of one Step at one moment of its sweep (`progress` 0–1): magnitude of the mains, each
  * sub and the sum, the phase when asked, and the read-outs at the crossover. Recomputed from dsp/
  * in the browser on every call, so a sweep animates frame by frame. The phase is drawn from the first arrival at the
  * MLP, as Blend draws it (lib/system-model/lesson-frame.ts).
  */
-export function StepPlot({ step, progress = 0, emphasis = 'default', compact = false, plotsHeightPx }: StepPlotProps) {
+function FrequencyStepPlot({ step, progress = 0, emphasis = 'default', compact = false, plotsHeightPx }: StepPlotProps) {
   const { sweep } = step;
   const value = useMemo(() => (sweep ? sweepValueAt(sweep, progress) : null), [sweep, progress]);
   const doc = useMemo(() => (sweep && value ? applyLessonSweepToDocument(step.document, sweep, value) : step.document), [step.document, sweep, value]);

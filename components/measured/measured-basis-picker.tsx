@@ -11,7 +11,7 @@ export function MeasuredBasisPicker({ basis, testId }: { basis: MeasuredBasisSta
   const id = useId();
   const { seat, seats, gaps, unavailable } = basis;
   return (
-    <div className="flex flex-col gap-1">
+    <div className="flex min-w-0 flex-col gap-1">
       <label htmlFor={id} className="text-xs font-medium text-ink-soft">
         Run on
       </label>
@@ -20,7 +20,7 @@ export function MeasuredBasisPicker({ basis, testId }: { basis: MeasuredBasisSta
         value={seat?.seat ?? ''}
         onChange={(e) => basis.choose(e.target.value || null)}
         disabled={seats.length === 0}
-        className="max-w-full rounded-md border border-line bg-white px-2 py-1.5 text-sm disabled:text-ink-faint"
+        className="w-full min-w-0 rounded-md border border-line bg-white px-2 py-1.5 text-sm disabled:text-ink-faint"
         data-testid={testId}
       >
         <option value="">The model (speakers, distances and room as entered)</option>

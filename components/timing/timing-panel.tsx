@@ -7,7 +7,10 @@ import { MainChannelSelect } from '@/components/system/main-channel-select';
 import { useSystem } from '@/components/system/system-context';
 import { Notice } from '@/components/ui/notice';
 import { NumberField } from '@/components/ui/number-field';
+import { MeasuredBasisPicker } from '@/components/measured/measured-basis-picker';
+import { useMeasuredBasis } from '@/lib/hooks/use-measured-basis';
 import { useTiming } from '@/lib/hooks/use-timing';
+import { measuredSourcesRequest, settingsForDocument } from '@/lib/system-model/measured-sources';
 import type { ApiError } from '@/lib/client/api';
 import { blendMainSpeaker } from '@/lib/system-model/system-from-document';
 import { applyTimingToDocument, timingRequestFromDocument } from '@/lib/system-model/timing';
@@ -16,6 +19,7 @@ import { AdviceCard, describeChanges } from './advice-card';
 import { ArrivalsTable } from './arrivals-table';
 import { DistanceField } from './distance-field';
 import { FlatnessPlot } from './flatness-plot';
+import { TimeSection } from './time-section';
 
 const fieldError = (error: ApiError | undefined, path: string) => error?.field(path);
 
@@ -27,10 +31,19 @@ export function TimingPanel() {
   const [shownSub, setShownSub] = useState(0);
   const [appliedNote, setAppliedNote] = useState<string | null>(null);
   const speaker = blendMainSpeaker(doc, channel);
-  const request = useMemo(() => timingRequestFromDocument(doc, speaker?.channel), [doc, speaker?.channel]);
+  const basis = useMeasuredBasis(speaker?.channel);
+  const picks = basis.seat?.picks ?? null;
+  // On measurements each source keeps its processor settings and takes its curve at the seat in place of its model.
+  const request = useMemo(() => {
+    const onModel = timingRequestFromDocument(doc, speaker?.channel);
+    return onModel && picks ? { ...onModel, ...measuredSourcesRequest(doc, onModel, picks) } : onModel;
+  }, [doc, speaker?.channel, picks]);
   const { data, error, pending } = useTiming(request);
   const bm = doc.bassManagement;
-  const subIndex = Math.min(shownSub, Math.max(0, doc.subs.length - 1));
+  const subIndex = Math.min(shownSub, Math.max(0, (data?.subs.length ?? doc.subs.length) - 1));
+  /** A piece of advice as settings of the document's subs (one measured "All subs" source spread over every sub). */
+  const forDocument = (set: { mainsDelayMs: number; subs: { name: string; delayMs: number; invert: boolean }[] }) =>
+    picks && request ? { set: settingsForDocument(doc, speaker?.channel, picks, { mainsDelayMs: request.mains.delayMs ?? 0, subs: request.subs.map((s) => ({ delayMs: s.delayMs ?? 0, invert: s.invert ?? false })) }, set) } : { set };
 
   const setSub = (k: number, patch: Partial<Sub>) => update((d) => ({ ...d, subs: d.subs.map((s, i) => (i === k ? { ...s, ...patch } : s)) }));
   const setSpeaker = (sid: string, patch: Partial<Speaker>) => update((d) => ({ ...d, speakers: d.speakers.map((s) => (s.id === sid ? { ...s, ...patch } : s)) }));
@@ -55,6 +68,7 @@ export function TimingPanel() {
         <form className="flex flex-col gap-4" aria-label="Timing inputs" onSubmit={(e) => e.preventDefault()}>
           <NumberField label="Air temperature" unit="°C" value={doc.room.temperatureC} min={-20} max={50} step={1} disabled={readOnly} error={fieldError(error, 'temperatureC')} onChange={(v) => update((d) => ({ ...d, room: { ...d.room, temperatureC: v } }))} testId="timing-temperature" />
           <MainChannelSelect id={`${id}-channel`} label="Main channel" value={speaker.channel} speakers={doc.speakers} onChange={setChannel} />
+          <MeasuredBasisPicker basis={basis} testId="timing-basis" />
           <DistanceField label={`${speaker.channel}: distance set on the processor`} doc={doc} item={speaker} units={units} disabled={readOnly} error={fieldError(error, 'mains.distanceM')} onOverride={(m) => setSpeaker(speaker.id, { distanceOverrideM: m })} testId="timing-mains-distance" />
           {doc.subs.map((s, k) => (
             <fieldset key={s.id} className="flex flex-col gap-2 rounded-md border border-line bg-white p-3">
@@ -85,6 +99,9 @@ export function TimingPanel() {
           ) : null}
           {data ? (
             <>
+              <p className="text-sm font-medium" data-testid="timing-ran-on">
+                On the {basis.label}.{data.measured ? <span className="font-normal text-ink-soft"> {data.measured.note}</span> : null}
+              </p>
               <ArrivalsTable data={data} temperatureC={doc.room.temperatureC} units={units} pending={pending} />
 
               <p className="num text-sm" data-testid="timing-present">
@@ -109,7 +126,7 @@ export function TimingPanel() {
                     testId={`timing-advice-${k}`}
                     readOnly={readOnly}
                     onApply={() => {
-                      update((d) => applyTimingToDocument(d, s.advice, speaker.channel));
+                      update((d) => applyTimingToDocument(d, forDocument(s.advice.set), speaker.channel));
                       setAppliedNote(`${describeChanges(s.advice, data)}.`);
                     }}
                   >
@@ -139,7 +156,7 @@ export function TimingPanel() {
                   onApply={() => {
                     const group = data.group;
                     if (!group) return;
-                    update((d) => applyTimingToDocument(d, group, speaker.channel));
+                    update((d) => applyTimingToDocument(d, forDocument(group.set), speaker.channel));
                     setAppliedNote(`${describeChanges(group, data)}.`);
                   }}
                 />
@@ -147,6 +164,7 @@ export function TimingPanel() {
               {appliedNote ? <Notice kind="ok">Applied to the System: {appliedNote}</Notice> : null}
 
               <FlatnessPlot data={data} subIndex={subIndex} onSubIndex={setShownSub} band={band} />
+              <TimeSection request={request} data={data} />
             </>
           ) : (
             <p className="text-sm text-ink-faint">{error ? '' : 'Computing…'}</p>

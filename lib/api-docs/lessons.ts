@@ -14,7 +14,7 @@ const LESSON_ANSWER: ApiField[] = [
 const STEP_FIELDS: ApiField[] = [
   { name: 'step.title', type: 'string', required: true, description: 'Up to 200 characters.' },
   { name: 'step.points', type: 'string', description: 'Talking points: plain text with paragraphs, "- " bullets, **bold** and *italic* (rendered as text, never as HTML).' },
-  { name: 'step.panel', type: '"blend" | "timing" | "modes" | "layout" | "headroom"', required: true, description: 'The panel the Step opens on.' },
+  { name: 'step.panel', type: '"blend" | "timing" | "modes" | "layout" | "headroom" | "time"', required: true, description: 'The panel the Step opens on; "time" shows the impulse and step responses of the mains, each sub and the sum (opened in the editor on Timing).' },
   { name: 'step.traces', type: '("mains" | "subs" | "sum" | "target" | "phase")[]', description: 'Traces shown (default mains, subs, sum, target).' },
   { name: 'step.sweep', type: 'object | null', description: '{ parameter: "subDelayMs" | "subPolarity" | "crossoverHz" | "filter" | "subDistanceM" | "mainsGainDb", from, to, durationS }; for subPolarity from/to are "normal" | "inverted", for filter slope choices such as "butterworth-2", "linkwitz-riley-4".' },
   { name: 'step.sweep.durationS', type: 'number', unit: 's', description: 'How long the sweep takes, 1–60 s (default 6).' },
@@ -33,7 +33,7 @@ export const LESSON_DOCS: ApiRouteDoc[] = [
     auth: 'session',
     fields: [{ name: 'workspaceId', type: 'uuid (query)', description: 'Only this workspace.' }],
     answer: [{ name: 'items', type: 'Lesson[]', description: 'Without steps; with stepCount.' }],
-    examples: [{ title: 'All my Lessons', request: null, status: 200, responseExcerpt: { items: [{ id: 'uuid', title: 'Why the sub and mains cancel', revision: 1, stepCount: 7, role: 'owner' }] } }],
+    examples: [{ title: 'All my Lessons', request: null, status: 200, responseExcerpt: { items: [{ id: 'uuid', title: 'Why the sub and mains cancel', revision: 1, stepCount: 8, role: 'owner' }] } }],
   },
   {
     id: 'lessons-create',

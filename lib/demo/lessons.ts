@@ -59,7 +59,7 @@ const ALL: LessonTrace[] = ['mains', 'subs', 'sum', 'target'];
 export function demoLesson(): { title: string; description: string; steps: DemoStep[] } {
   return {
     title: 'Why the sub and mains cancel',
-    description: 'Summation through the crossover in seven Steps: slope, polarity, distance and the crossover point. Invented demo material.',
+    description: 'Summation through the crossover in eight Steps: slope, polarity, distance and the crossover point, and the late sub in time. Invented demo material.',
     steps: [
       {
         title: 'LR4: the two halves sum flat',
@@ -157,6 +157,21 @@ export function demoLesson(): { title: string; description: string; steps: DemoS
           '- Play the sweep: the crossover moves from **60 Hz to 120 Hz**.',
           '- Where does the sum stay flattest? Where does the dip appear?',
           '- Mismatched slopes and the speakers’ own roll-offs mean the best point is not simply “80 Hz”.',
+        ].join('\n'),
+      },
+      {
+        title: 'The late sub in time: the same metre as a later step',
+        panel: 'time',
+        traces: ['mains', 'subs', 'sum'],
+        sweep: { parameter: 'subDistanceM', from: 3.0, to: 4.0, durationS: 6 },
+        document: classroom({ subAtM: 4.0 }),
+        points: [
+          'Back to the LR4 classroom with the sub **1 m farther** (4.0 m; the processor still set to 3.0 m), now seen **in time** instead of in phase.',
+          '',
+          '- Top: each path’s impulse. The mains’ is a narrow spike; the sub’s, through its low-pass, a slow hump.',
+          '- Bottom: the step. The sub’s rises slowly and peaks well after the mains’: part of that is its low-pass, and **2.91 ms** is the extra metre of air.',
+          '- The dashed lines mark when each sound arrives; the sentence under the plot reads the gap off the curves.',
+          '- Play the sweep: the sub walks back from 3.0 m to 4.0 m and its step slides later.',
         ].join('\n'),
       },
     ],

@@ -2,8 +2,8 @@ import { z } from 'zod';
 import { num, uuidField } from './common';
 import { systemDocumentSchema } from './system';
 
-/** Panels a Step can open on (the System editor's panels that a class is shown). */
-export const LESSON_PANELS = ['blend', 'timing', 'modes', 'layout', 'headroom'] as const;
+/** Panels a Step can open on (the System editor's panels that a class is shown; 'time': impulse and step responses, opened in the editor on Timing). */
+export const LESSON_PANELS = ['blend', 'timing', 'modes', 'layout', 'headroom', 'time'] as const;
 export type LessonPanel = (typeof LESSON_PANELS)[number];
 export const isLessonPanel = (s: unknown): s is LessonPanel => typeof s === 'string' && (LESSON_PANELS as readonly string[]).includes(s);
 
