@@ -88,7 +88,7 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
   const sweep = useCrossoverSweep();
   const basis = useMeasuredBasis(speaker?.channel);
   // What the rows shown were ranked on (the picker may have moved since).
-  const [ranOn, setRanOn] = useState<{ label: string; picks: MeasuredPicks | null }>({ label: 'model', picks: null });
+  const [ranOn, setRanOn] = useState<{ label: string; picks: MeasuredPicks | null }>({ label: 'the model', picks: null });
 
   const pairings = choices.filter((p) => picked.has(pairingKey(p)));
   // As many pairings as fit the API's row cap with this range, and the API's own words when a sweep would not fit.
@@ -224,7 +224,7 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
       {applied ? <Notice kind="ok">Applied to the System: {applied}.</Notice> : null}
       {rows.length ? (
         <p className="text-sm font-medium" data-testid="sweep-ran-on">
-          Ranked on the {ranOn.label}.{sweep.measured ? <span className="font-normal text-ink-soft"> {sweep.measured.note}</span> : null}
+          Ranked on {ranOn.label}.{sweep.measured ? <span className="font-normal text-ink-soft"> {sweep.measured.note}</span> : null}
         </p>
       ) : null}
       {rows.length && sweep.mainsMinus3DbHz !== null && lowestClearHz !== null ? (

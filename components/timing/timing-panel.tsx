@@ -100,7 +100,7 @@ export function TimingPanel() {
           {data ? (
             <>
               <p className="text-sm font-medium" data-testid="timing-ran-on">
-                On the {basis.label}.{data.measured ? <span className="font-normal text-ink-soft"> {data.measured.note}</span> : null}
+                On {basis.label}.{data.measured ? <span className="font-normal text-ink-soft"> {data.measured.note}</span> : null}
               </p>
               <ArrivalsTable data={data} temperatureC={doc.room.temperatureC} units={units} pending={pending} />
 

@@ -21,7 +21,7 @@ export interface MeasuredBasisState {
   gaps: string[];
   unavailable: string | null;
   choose: (seat: string | null) => void;
-  /** The label every plot and table of the decision carries: "model" or "measured at Row 1 centre". */
+  /** The label every plot and table of the decision carries: "the model" or "the measurements at Row 1 centre". */
   label: string;
 }
 
@@ -47,5 +47,5 @@ export function useMeasuredBasis(channel: string | undefined): MeasuredBasisStat
         : seats.length === 0 && list.data
           ? 'No seat has both a measurement of the mains alone and of the subs for this System (Measured tab).'
           : null;
-  return { seat, seats, gaps, unavailable, choose: setChosen, label: seat ? `measured at ${seat.seat}` : 'model' };
+  return { seat, seats, gaps, unavailable, choose: setChosen, label: seat ? `the measurements at ${seat.seat}` : 'the model' };
 }
