@@ -71,7 +71,7 @@ export async function seedDemo(): Promise<string> {
   for (const file of demoMeasurementFiles()) {
     const parsed = parseMeasurementText(file.text);
     if (!parsed.ok) throw new Error(`demo measurement ${file.fileName}: ${parsed.message}`);
-    if (await ensureMeasurement(workspace.id, juniper?.id ?? null, owner.id, { name: file.name, seat: file.seat, role: file.role }, parsed.measurement)) measurementsAdded++;
+    if (await ensureMeasurement(workspace.id, juniper?.id ?? null, owner.id, { name: file.name, seat: file.seat, role: file.role, ...(file.runLabel ? { runLabel: file.runLabel } : {}) }, parsed.measurement)) measurementsAdded++;
   }
   const measurementsSummary = measurementsAdded ? `added ${measurementsAdded} invented measurements` : 'measurements already present';
 

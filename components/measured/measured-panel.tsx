@@ -12,6 +12,7 @@ import { useCompute } from '@/lib/hooks/use-compute';
 import { deleteMeasurement, useMeasurementList, useMeasurementPoints, useSystemWorkspace, type MeasurementItem } from '@/lib/hooks/use-measurements';
 import { measuredRequestFromDocument, type PredictAnswer } from '@/lib/system-model/measured';
 import { MeasurementList, type CurveItem } from './measurement-list';
+import { MeasuredRuns } from './measured-runs';
 import { MeasurementUpload, type LocalCurve } from './measurement-upload';
 import { OverlayPlot } from './overlay-plot';
 import { PredictedBlend } from './predicted-blend';
@@ -50,8 +51,8 @@ export function MeasuredPanel({ shared }: { shared?: { items: SharedMeasurement[
   const sharedPoints = useMemo(() => new Map((shared?.items ?? []).filter((m) => m.frequencyHz.length).map((m) => [m.id, m])), [shared]);
   const items: CurveItem[] = useMemo(
     () => [
-      ...saved.map((m: MeasurementItem | SharedMeasurement) => ({ id: m.id, name: m.name, seat: m.seat, role: m.role, pointCount: m.pointCount, startHz: m.startHz, stopHz: m.stopHz, hasPhase: m.hasPhase, local: false })),
-      ...local.map((c) => ({ id: c.id, name: c.name, seat: c.seat, role: c.role, pointCount: c.frequencyHz.length, startHz: c.frequencyHz[0] ?? 0, stopHz: c.frequencyHz[c.frequencyHz.length - 1] ?? 0, hasPhase: c.phaseDeg !== null, local: true })),
+      ...saved.map((m: MeasurementItem | SharedMeasurement) => ({ id: m.id, name: m.name, seat: m.seat, role: m.role, pointCount: m.pointCount, startHz: m.startHz, stopHz: m.stopHz, hasPhase: m.hasPhase, runLabel: m.runLabel, wav: m.sourceFormat === 'wav', local: false })),
+      ...local.map((c) => ({ id: c.id, name: c.name, seat: c.seat, role: c.role, pointCount: c.frequencyHz.length, startHz: c.frequencyHz[0] ?? 0, stopHz: c.frequencyHz[c.frequencyHz.length - 1] ?? 0, hasPhase: c.phaseDeg !== null, runLabel: c.runLabel ?? null, local: true })),
     ],
     [saved, local],
   );
@@ -160,25 +161,27 @@ export function MeasuredPanel({ shared }: { shared?: { items: SharedMeasurement[
       ) : null}
       {readOnly && !shared ? <Notice kind="info">You are a viewer of this System: you can look at the measurements and the prediction, but not change settings or upload.</Notice> : null}
 
+      {/* Full width: an impulse response's window editor needs the room. */}
+      {shared ? null : (
+        <MeasurementUpload
+          systemId={systemId}
+          canSave={canWrite && !readOnly}
+          saveBlockedReason={!signedIn ? 'Sign in to save.' : readOnly || !canWrite ? 'Viewers cannot save here.' : undefined}
+          seatNames={seatNames}
+          onSaved={async (answer) => {
+            await mutate((key) => typeof key === 'string' && key.startsWith('/api/v1/measurements'));
+            setOverlay((s) => new Set([...s, answer.id]));
+          }}
+          onUseLocally={(curve) => {
+            const id = `local:${local.length + 1}`;
+            setLocal((l) => [...l, { ...curve, id }]);
+            setOverlay((s) => new Set([...s, id]));
+          }}
+        />
+      )}
+
       <div className="grid grid-cols-[minmax(0,1fr)] gap-4 xl:grid-cols-[minmax(320px,400px)_minmax(0,1fr)]">
         <div className="flex min-w-0 flex-col gap-4">
-          {shared ? null : (
-          <MeasurementUpload
-            systemId={systemId}
-            canSave={canWrite && !readOnly}
-            saveBlockedReason={!signedIn ? 'Sign in to save.' : readOnly || !canWrite ? 'Viewers cannot save here.' : undefined}
-            seatNames={seatNames}
-            onSaved={async (answer) => {
-              await mutate((key) => typeof key === 'string' && key.startsWith('/api/v1/measurements'));
-              setOverlay((s) => new Set([...s, answer.id]));
-            }}
-            onUseLocally={(curve) => {
-              const id = `local:${local.length + 1}`;
-              setLocal((l) => [...l, { ...curve, id }]);
-              setOverlay((s) => new Set([...s, id]));
-            }}
-          />
-          )}
           {deleteError ? <Notice kind="error">{deleteError}</Notice> : null}
           <MeasurementList
             items={items}
@@ -205,6 +208,7 @@ export function MeasuredPanel({ shared }: { shared?: { items: SharedMeasurement[
           />
         </div>
       </div>
+      <MeasuredRuns saved={saved} local={local} systemId={systemId} curveOf={curveRef} canEdit={canWrite && !readOnly} />
     </div>
   );
 }

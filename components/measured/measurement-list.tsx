@@ -13,6 +13,10 @@ export interface CurveItem {
   startHz: number;
   stopHz: number;
   hasPhase: boolean;
+  /** What was different in this run ("treble +2"), when labelled. */
+  runLabel?: string | null;
+  /** An impulse response (WAV) transformed through its window. */
+  wav?: boolean;
   /** Used on this page only, not saved. */
   local: boolean;
 }
@@ -50,9 +54,11 @@ export function MeasurementList({ items, loading, error, overlay, onToggleOverla
             />
             <label htmlFor={`overlay-${m.id}`} className="min-w-0 flex-1 text-sm">
               <span className="font-medium">{m.name}</span>
+              {m.runLabel ? ' ' : null}
+              {m.runLabel ? <span className="ml-1.5 rounded bg-wash px-1.5 py-0.5 text-xs text-ink-soft" data-testid="run-label-tag">{m.runLabel}</span> : null}
               <span className="sr-only"> — show on the overlay</span>
               <span className="block text-xs text-ink-faint">
-                {[m.role ?? 'no role', m.seat ?? 'no seat', `${m.pointCount} points`, `${formatHzReadout(m.startHz)}–${formatHzReadout(m.stopHz)}`, m.hasPhase ? 'phase' : 'no phase', m.local ? 'this page only' : null]
+                {[m.role ?? 'no role', m.seat ?? 'no seat', `${m.pointCount} points`, `${formatHzReadout(m.startHz)}–${formatHzReadout(m.stopHz)}`, m.hasPhase ? 'phase' : 'no phase', m.wav ? 'from an impulse response' : null, m.local ? 'this page only' : null]
                   .filter(Boolean)
                   .join(' · ')}
               </span>

@@ -27,11 +27,20 @@ const sealedSeat = (offsetDb: number) => ({
 const summary: ApiField[] = [
   { name: 'id', type: 'uuid', description: 'The measurement.' },
   { name: 'name', type: 'string', description: 'As given, else the file name without its extension.' },
-  { name: 'pointCount', type: 'integer', description: 'Data lines in the file (at least 8).' },
+  { name: 'seat, role', type: 'string | null', description: 'Where it was measured and which source it is; null when not given.' },
+  { name: 'runLabel', type: 'string | null', description: 'What was different in this run ("treble +2", "near-wall switch on"); null when not labelled.' },
+  { name: 'pointCount', type: 'integer', description: 'Data lines in a text file (at least 8), or the points of an impulse response’s log grid.' },
   { name: 'startHz', type: 'number', unit: 'Hz', description: 'First frequency.' },
   { name: 'stopHz', type: 'number', unit: 'Hz', description: 'Last frequency.' },
-  { name: 'hasPhase', type: 'boolean', description: 'True when the file had a third (phase) column.' },
+  { name: 'hasPhase', type: 'boolean', description: 'True when the file had a third (phase) column; always true for an impulse response.' },
+  { name: 'sourceFormat', type: '"text" | "wav"', description: 'A delimited text file, or an impulse response (WAV) transformed through its window.' },
+  { name: 'sampleRateHz', type: 'integer | null', unit: 'Hz', description: 'An impulse response’s sample rate; null for text.' },
+  { name: 'arrivalMs', type: 'number | null', unit: 'ms', description: 'An impulse response’s arrival: its peak (largest |sample|, refined between samples by a parabola), from the file’s first sample; null for text.' },
+  { name: 'impulseWindow', type: '{ startMs, lengthMs, fadeInMs, fadeOutMs } | null', unit: 'ms', description: 'The window the impulse response was read through (from the file’s first sample); null for text.' },
 ];
+
+/** The WAV formats an impulse response may come in (lib/measurements/read-wav.ts). */
+const WAV_FORMATS = 'RIFF/WAVE, 16-, 24- or 32-bit integer PCM or 32-bit float (plain or WAVE_FORMAT_EXTENSIBLE), mono or the first channel of several, 8–192 kHz, at most 10 s, at most 16 MB';
 
 const curveFields = 'Either { "measurementId": uuid } (a stored measurement the caller may read; needs a session) or the points inline: { frequencyHz[], magnitudeDb[], phaseDeg[]? } (8–20 000 points, strictly increasing frequencies, |magnitude| ≤ 300 dB, |phase| ≤ 3600°).';
 
@@ -43,17 +52,21 @@ export const MEASURED_DOCS: ApiRouteDoc[] = [
     summary: 'Uploads a measured response (multipart/form-data) into the Library of a workspace where the caller is an editor or owner.',
     auth: 'session',
     fields: [
-      { name: 'file', type: 'file (text or CSV, ≤ 2 MB)', required: true, description: 'Two or three numeric columns per line: frequency (Hz), magnitude (dB), optional phase (°), separated by commas, semicolons, tabs or spaces. Leading lines that do not begin with a number (notes, a header row) are skipped and counted; lines starting with # or ; are comments anywhere; decimal point, or decimal comma when the columns are not comma-separated.' },
+      { name: 'file', type: 'file (text or CSV ≤ 2 MB, or WAV ≤ 16 MB)', required: true, description: `Text: two or three numeric columns per line: frequency (Hz), magnitude (dB), optional phase (°), separated by commas, semicolons, tabs or spaces. Leading lines that do not begin with a number (notes, a header row) are skipped and counted; lines starting with # or ; are comments anywhere; decimal point, or decimal comma when the columns are not comma-separated. Or an impulse response as a WAV file (${WAV_FORMATS}): read as WAV when its first bytes are a RIFF header, whatever type it was sent as (audio/wav, audio/x-wav, audio/wave, application/octet-stream…). It is cut with the window (below), transformed with an FFT and stored as its complex response on a log grid, 10 Hz to 20 kHz (never above 0.45 × the sample rate), 48 points per octave: magnitude in dB re full scale (an impulse of 1.0 reads 0 dB) and the true phase in degrees, including the delay from the file’s first sample to the peak, wrapped to (−180, 180].` },
       { name: 'name', type: 'string', description: '1–120 characters; default: the file name.' },
       { name: 'systemId', type: 'uuid', description: 'The System it was measured for; the measurement goes to that System’s workspace (editor there).' },
       { name: 'workspaceId', type: 'uuid', description: 'Without systemId: the workspace to keep it in (default: the caller’s personal workspace).' },
       { name: 'seat', type: 'string', description: 'Where it was measured, e.g. "Row 1 centre (MLP)".' },
       { name: 'role', type: 'string', description: '"mains", "sub", "sum" or another channel label (L, C, SL…).' },
+      { name: 'runLabel', type: 'string', description: '1–80 characters: what was different in this run, e.g. "treble +2", "near-wall switch on", "after moving the sub".' },
+      { name: 'windowStartMs', type: 'number', unit: 'ms', description: 'WAV only: where the window starts, from the file’s first sample (0…10 000; at or before the peak). Default: 20 ms before the peak, or the first sample when the peak is earlier. A half-Hann fade-in covers min(10 ms, half the time from the start to the peak); none when the window starts at the first sample.' },
+      { name: 'windowLengthMs', type: 'number', unit: 'ms', description: 'WAV only: the window’s length (1…10 000; it must reach past the peak and end within the file). Default: 500 ms, or to the end of the file when that comes first. A half-Hann fade-out covers min(20 % of the length, half the time from the peak to the end). Sent with a text file, either window field is a 400.' },
     ],
     answer: [
       ...summary,
-      { name: 'skippedLines', type: 'integer', description: 'Leading lines skipped because they do not begin with a number (notes, comments, the header row).' },
-      { name: 'firstDataLine', type: 'integer', description: 'The 1-based line of the first number.' },
+      { name: 'skippedLines', type: 'integer', description: 'Text only: leading lines skipped because they do not begin with a number (notes, comments, the header row).' },
+      { name: 'firstDataLine', type: 'integer', description: 'Text only: the 1-based line of the first number.' },
+      { name: 'impulse', type: 'object', description: 'WAV only: format ("pcm" or "float"), bitsPerSample, channels (only the first is read), durationS, peakDbfs (the loudest sample, dB re full scale), window ({ startMs, lengthMs, fadeInMs, fadeOutMs, startIsDefault, lengthIsDefault }) and frequencyResolutionHz (sample rate ÷ window length: the finest detail the window can show).' },
     ],
     examples: [
       {
@@ -63,6 +76,31 @@ export const MEASURED_DOCS: ApiRouteDoc[] = [
         responseExcerpt: { id: ID, name: 'Seat 1 mains (invented)', pointCount: 240, startHz: 20, stopHz: 19027, hasPhase: true, skippedLines: 3, firstDataLine: 4 },
       },
       {
+        title: 'Upload an impulse response of a sub (48 kHz, 24-bit WAV) with the default window',
+        request: { multipart: { file: 'row-1-sub.wav', systemId: SYSTEM, seat: 'Row 1 centre (MLP)', role: 'sub', runLabel: 'after moving the sub' } },
+        status: 201,
+        responseExcerpt: {
+          id: ID,
+          name: 'row-1-sub',
+          runLabel: 'after moving the sub',
+          sourceFormat: 'wav',
+          sampleRateHz: 48000,
+          arrivalMs: 12.4,
+          impulseWindow: { startMs: 0, lengthMs: 500, fadeInMs: 0, fadeOutMs: 100 },
+          pointCount: 527,
+          startHz: 10,
+          stopHz: 19897,
+          hasPhase: true,
+          impulse: { format: 'pcm', bitsPerSample: 24, channels: 1, durationS: 1, peakDbfs: -6.2, window: { startMs: 0, lengthMs: 500, fadeInMs: 0, fadeOutMs: 100, startIsDefault: true, lengthIsDefault: true }, frequencyResolutionHz: 2 },
+        },
+      },
+      {
+        title: 'A refused impulse response: the reason and the field named (nothing is stored)',
+        request: { multipart: { file: 'clipped.wav' } },
+        status: 400,
+        responseExcerpt: { error: { code: 'invalid', message: 'The WAV file was refused: 12 samples of the first channel sit at full scale: the recording clipped. Turn the level down and measure again (a peak a few dB below full scale is enough); a file normalised to full scale may touch it with one sample only.', issues: [{ path: 'file', message: '12 samples of the first channel sit at full scale: the recording clipped. …' }] } },
+      },
+      {
         title: 'A refused file: every line error named (nothing is stored)',
         request: { multipart: { file: 'broken.csv' } },
         status: 400,
@@ -70,8 +108,10 @@ export const MEASURED_DOCS: ApiRouteDoc[] = [
       },
     ],
     notes: [
-      'Refused with 400 (each issue names "line N, column M"): a non-numeric cell or a line of text below the first number, a frequency that is not positive or not strictly increasing (duplicates included), fewer than 8 points, phase outside ±3600°, magnitude outside ±300 dB, binary content. At most 50 issues are listed; totalIssues counts them all.',
-      '413 over 2 MB; 415 when the body is not multipart/form-data or the file is declared as a type that is not text (an image, a PDF, an archive).',
+      'A text file is refused with 400 (each issue names "line N, column M"): a non-numeric cell or a line of text below the first number, a frequency that is not positive or not strictly increasing (duplicates included), fewer than 8 points, phase outside ±3600°, magnitude outside ±300 dB, binary content. At most 50 issues are listed; totalIssues counts them all.',
+      'A WAV file is refused with 400 naming the field (`file`, `windowStartMs` or `windowLengthMs`) and the part of the file: a header that is truncated or whose sizes are false, a format or bit depth other than those above (8-bit, µ-law, ADPCM…), 0 channels, a sample rate outside 8–192 kHz, more than 10 s, a float sample that is NaN or infinite, clipping (more than one sample of the first channel at full scale — the largest or smallest integer code, or ±1.0 in float; one alone is a peak normalised to full scale and is kept: record again with the level turned down), silence (no sample reaches one step of a 16-bit file, −90.3 dBFS), a window that starts outside the file or after the peak, ends before the peak or runs past the end.',
+      'Every check runs before the measurement is written in one INSERT: a refused file stores nothing.',
+      '413 over 2 MB of text or 16 MB of WAV (the server stops reading a body at 16 MB); 415 when the body is not multipart/form-data or the file is declared as a type that is neither text nor WAV (an image, a PDF, an MP3, an archive).',
       ACCESS,
     ],
   },
@@ -87,7 +127,7 @@ export const MEASURED_DOCS: ApiRouteDoc[] = [
       { name: 'seat', type: 'string', description: 'Only those measured at this seat (1–60 characters; the same text, ignoring case: "row 1 centre (mlp)" finds "Row 1 centre (MLP)").' },
       { name: 'role', type: 'string', description: 'Only those of this source ("mains", "sub", "L"…; the same text, ignoring case).' },
     ],
-    answer: [{ name: 'items', type: 'MeasurementSummary[]', description: 'Each with id, workspaceId, workspaceName, systemId, name, seat, role, pointCount, startHz, stopHz, hasPhase, createdByName, createdAt.' }],
+    answer: [{ name: 'items', type: 'MeasurementSummary[]', description: 'Each with id, workspaceId, workspaceName, systemId, name, seat, role, runLabel, pointCount, startHz, stopHz, hasPhase, sourceFormat, sampleRateHz, arrivalMs, impulseWindow, createdByName, createdAt (at most 500).' }],
     examples: [
       { title: 'One workspace', request: { query: `?workspaceId=${SYSTEM}` }, status: 200, responseExcerpt: { items: [{ id: ID, name: 'Row 1 centre (MLP): L mains (invented)', role: 'mains', pointCount: 240, hasPhase: true }] } },
       { title: 'The mains at one seat of one System', request: { query: `?systemId=${SYSTEM}&seat=Row%201%20centre%20(MLP)&role=mains` }, status: 200, responseExcerpt: { items: [{ id: ID, seat: 'Row 1 centre (MLP)', role: 'mains' }] } },
@@ -105,10 +145,29 @@ export const MEASURED_DOCS: ApiRouteDoc[] = [
       ...summary,
       { name: 'frequencyHz', type: 'number[]', unit: 'Hz', description: 'Every frequency, as parsed.' },
       { name: 'magnitudeDb', type: 'number[]', unit: 'dB', description: 'Every magnitude.' },
-      { name: 'phaseDeg', type: 'number[] | null', unit: '°', description: 'Every phase, or null for a two-column file.' },
+      { name: 'phaseDeg', type: 'number[] | null', unit: '°', description: 'Every phase as the text file gave it, or null for a two-column file; for an impulse response the true phase wrapped to (−180, 180].' },
     ],
     examples: [{ title: 'Read back a stored measurement', request: {}, status: 200, responseExcerpt: { id: ID, pointCount: 240, frequencyHz: [20], magnitudeDb: [84.1], phaseDeg: [12.5] } }],
     notes: [ACCESS],
+  },
+  {
+    id: 'measurements-update',
+    method: 'PATCH',
+    path: '/api/v1/measurements/{id}',
+    summary: 'Renames or relabels a measurement (editors and owners of its workspace); its points never change.',
+    auth: 'session',
+    fields: [
+      { name: 'name', type: 'string', description: '1–120 characters.' },
+      { name: 'seat', type: 'string | null', description: '1–60 characters; null clears it.' },
+      { name: 'role', type: 'string | null', description: '1–20 letters, digits, spaces, +, - or _ ("mains", "sub", "L"…); null clears it.' },
+      { name: 'runLabel', type: 'string | null', description: '1–80 characters; null clears it.' },
+    ],
+    answer: [...summary],
+    examples: [
+      { title: 'Label a run', request: { runLabel: 'near-wall switch on' }, status: 200, responseExcerpt: { id: ID, runLabel: 'near-wall switch on' } },
+      { title: 'Clear the label and move it to another seat', request: { runLabel: null, seat: 'Row 1 left' }, status: 200, responseExcerpt: { id: ID, runLabel: null, seat: 'Row 1 left' } },
+    ],
+    notes: ['Send at least one field; any other field is a 400. Text is trimmed.', ACCESS],
   },
   {
     id: 'measurements-delete',
@@ -211,6 +270,59 @@ export const MEASURED_DOCS: ApiRouteDoc[] = [
     notes: [
       'Inline points need no session; a measurementId is read with the caller’s rights (401 signed out, 404 outside the workspace).',
       '400 naming the field: a band outside the data, curves sharing less than an octave, more than 40 curves, and the inline-curve rules above. The body may be up to 2 MB.',
+    ],
+  },
+  {
+    id: 'measured-compare',
+    method: 'POST',
+    path: '/api/v1/measured/compare',
+    summary: 'Runs compared: each other run as its difference from a reference run (dB against frequency), smoothed, over the range every run covers; levels as measured unless a band to match them over is given.',
+    auth: 'none',
+    fields: [
+      { name: 'reference', type: '{ measurementId, name? } | { frequencyHz[], magnitudeDb[], phaseDeg?, name? }', required: true, description: `The run the others are compared with. ${curveFields} A phase column is accepted and not used. name: 1–120 characters (default: the stored name, else "Reference").` },
+      { name: 'others', type: '(the same)[]', required: true, description: '1–12 runs, each shown as (run − reference) in dB; name defaults to the stored name, else "Run N".' },
+      { name: 'smoothingFraction', type: 'integer', description: '0 (none, default) or N of 1/N octave (1…48). Each run is smoothed on its own points (the power average over 1/N octave around each point; common practice) before the difference, so a difference that is the same at every frequency stays exactly that.' },
+      { name: 'pointsPerOctave', type: 'integer', description: '6…96 (default 48): the common log grid every run is resampled to (linear in log-frequency).' },
+      { name: 'matchLevelBandHz', type: '{ startHz, stopHz }', unit: 'Hz', description: 'Optional, 10…24 000 Hz, stopHz at least a third of an octave above startHz, within the runs’ common range. When given, each other run is moved so its power average over the band (each point weighted by its share of log-frequency, on its own unsmoothed points) equals the reference’s; without it no level is changed (levels as measured).' },
+    ],
+    answer: [
+      { name: 'frequencyHz', type: 'number[]', unit: 'Hz', description: 'The common log grid: from the highest first frequency to the lowest last frequency of all runs.' },
+      { name: 'rangeHz', type: '{ startHz, stopHz }', unit: 'Hz', description: 'The range every run covers (at least an octave).' },
+      { name: 'smoothingFraction', type: 'integer', description: 'As asked (0: none).' },
+      { name: 'levels', type: '"as measured" | "matched"', description: 'Whether the runs’ levels were matched over matchLevelBandHz.' },
+      { name: 'matchLevelBandHz', type: '{ startHz, stopHz } | null', unit: 'Hz', description: 'The band used for level matching, or null.' },
+      { name: 'reference', type: '{ name }', description: 'The reference run’s name.' },
+      { name: 'differences', type: '{ name, differenceDb[], levelOffsetDb, minDb, maxDb, largest: { differenceDb, frequencyHz } }[]', description: 'Per other run, in order: (run + levelOffsetDb) − reference at each grid frequency (dB, smoothed as asked); levelOffsetDb, what level matching added to the run (0 as measured); the lowest and highest difference; and the difference of largest size (signed) with its frequency.' },
+    ],
+    examples: [
+      {
+        title: 'An invented sealed mains speaker at one seat, a second run 1 dB quieter: levels as measured, 1/6-octave smoothing',
+        request: { reference: { name: 'Row 1 centre, first run (invented)', ...sealedSeat(0) }, others: [{ name: 'Row 1 centre, second run (invented)', ...sealedSeat(-1) }], smoothingFraction: 6 },
+        status: 200,
+        responseExcerpt: {
+          frequencyHz: [20],
+          rangeHz: { startHz: 20, stopHz: 2560 },
+          smoothingFraction: 6,
+          levels: 'as measured',
+          matchLevelBandHz: null,
+          reference: { name: 'Row 1 centre, first run (invented)' },
+          differences: [{ name: 'Row 1 centre, second run (invented)', differenceDb: [-1], levelOffsetDb: 0, minDb: -1, maxDb: -1, largest: { differenceDb: -1, frequencyHz: 20 } }],
+        },
+      },
+      {
+        title: 'The same two runs with their levels matched over 200 Hz–2 kHz: the 1 dB is taken out',
+        request: { reference: { name: 'Row 1 centre, first run (invented)', ...sealedSeat(0) }, others: [{ name: 'Row 1 centre, second run (invented)', ...sealedSeat(-1) }], smoothingFraction: 6, matchLevelBandHz: { startHz: 200, stopHz: 2000 } },
+        status: 200,
+        responseExcerpt: {
+          levels: 'matched',
+          matchLevelBandHz: { startHz: 200, stopHz: 2000 },
+          differences: [{ differenceDb: [0], levelOffsetDb: 1, largest: { differenceDb: 0, frequencyHz: 20 } }],
+        },
+      },
+    ],
+    notes: [
+      'Inline points need no session; a measurementId is read with the caller’s rights (401 signed out, 404 outside the workspace).',
+      '400 naming the field: runs sharing less than an octave (others), a band outside their common range (matchLevelBandHz), more than 12 others, and the inline-curve rules above. The body may be up to 2 MB.',
     ],
   },
 ];

@@ -52,10 +52,14 @@ export interface MeasurementLabels {
   runLabel?: string | null;
 }
 
-/** POST /api/v1/measurements's answer: the stored summary and how the file was read (leading lines of text skipped, first data line). */
+/**
+ * POST /api/v1/measurements's answer: the stored summary and how the file was read — a text file's leading lines of
+ * text skipped and first data line, or an impulse response's file and window (`impulse`, see lib/measurements/impulse-measurement).
+ */
 export interface AppUploadAnswer extends AppMeasurementSummary {
-  skippedLines: number;
-  firstDataLine: number;
+  skippedLines?: number;
+  firstDataLine?: number;
+  impulse?: Record<string, unknown>;
 }
 
 /** A measurement with every point exactly as uploaded. */

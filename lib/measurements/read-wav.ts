@@ -10,6 +10,8 @@ import { readWavChunks, WavReadError, type WavFormat } from './wav-chunks';
 export { WavReadError, MIN_WAV_SAMPLE_RATE_HZ, MAX_WAV_SAMPLE_RATE_HZ, SUPPORTED_WAV_ENCODINGS } from './wav-chunks';
 
 export const MAX_WAV_DURATION_S = 10;
+/** Largest WAV upload, bytes: 10 s × 192 kHz × 4 bytes of one channel, or the first channel of a stereo 96 kHz file (the browser and the server both check it). */
+export const MAX_WAV_BYTES = 16 * 1024 * 1024;
 
 export interface WavImpulse {
   sampleRateHz: number;

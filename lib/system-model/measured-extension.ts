@@ -15,7 +15,7 @@ export interface ExtensionCurvePoints {
   magnitudeDb: readonly number[];
 }
 
-interface ExtensionAnswer {
+export interface ExtensionAnswer {
   band: { startHz: number; stopHz: number };
   /** Power mean of the analysed curve over the band, dB. */
   meanLevelDb: number;
@@ -46,7 +46,9 @@ interface ExtensionAnswer {
 const COMMON_GRID_POINTS_PER_OCTAVE = 96;
 
 const hz = (v: number) => `${roundTo(v, 1)} Hz`;
-const oct = (v: number) => `${v.toFixed(2)} octave${Math.abs(v - 1) < 0.005 ? '' : 's'}`;
+const oct = (v: number) => `${Math.abs(v).toFixed(2)} octave${Math.abs(Math.abs(v) - 1) < 0.005 ? '' : 's'}`;
+/** "0.63 octaves above" or "1.22 octaves below" (a crossover under the point). */
+const side = (v: number) => `${oct(v)} ${v < 0 ? 'below' : 'above'}`;
 
 function sameGrid(curves: readonly ExtensionCurvePoints[]): boolean {
   const first = curves[0]!.frequencyHz;
@@ -75,8 +77,8 @@ function crossoverSummary(crossoverHz: number, verdict: CrossoverAgainstExtensio
   const { octavesAboveMinus3Db: above3, octavesAboveMinus6Db: above6 } = verdict;
   if (verdict.clearance === 'unknown') return `The −3 dB point lies below the lowest measured frequency (${hz(lowestHz)}); measure lower to judge ${at.toLowerCase()}.`;
   if (above3 === null || minus3Hz === null) return `The mains do not fall 3 dB below their mean down to ${hz(lowestHz)}: ${at.toLowerCase()} is clear of their in-room roll-off.`;
-  const six = above6 !== null && minus6Hz !== null ? ` and ${oct(above6)} above the −6 dB point (${hz(minus6Hz)})` : '';
-  const where = `${at} sits ${oct(above3)} above the in-room −3 dB point (${hz(minus3Hz)})${six}`;
+  const six = above6 !== null && minus6Hz !== null ? ` and ${side(above6)} the −6 dB point (${hz(minus6Hz)})` : '';
+  const where = `${at} sits ${side(above3)} the in-room −3 dB point (${hz(minus3Hz)})${six}`;
   if (verdict.clearance === 'clear') return `${where}: fine.`;
   return `${where}: too close to the mains’ roll-off; move it up to at least ${hz(minus3Hz * Math.SQRT2)} or let the subs play higher.`;
 }

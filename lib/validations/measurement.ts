@@ -53,7 +53,6 @@ export const measurementLabelsSchema = z
     runLabel: runLabelSchema.nullable().optional(),
   })
   .refine((v) => Object.keys(v).length > 0, { message: 'send at least one of name, seat, role, runLabel' });
-export type MeasurementLabelsInput = z.infer<typeof measurementLabelsSchema>;
 
 export const measurementListQuerySchema = z.object({
   workspaceId: uuidField('workspaceId must be an id').optional(),

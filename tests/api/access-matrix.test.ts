@@ -100,6 +100,7 @@ const MATRIX: Record<string, { expect: Expect; build: Builder }> = {
   'POST /api/v1/headroom': { expect: open(200), build: () => documentedExample('/api/v1/headroom') },
   'POST /api/v1/measured/predict': { expect: open(200), build: () => documentedExample('/api/v1/measured/predict') },
   'POST /api/v1/measured/extension': { expect: open(200), build: () => documentedExample('/api/v1/measured/extension') },
+  'POST /api/v1/measured/compare': { expect: open(200), build: () => documentedExample('/api/v1/measured/compare') },
   'POST /api/v1/processor-filters': { expect: open(200), build: () => documentedExample('/api/v1/processor-filters') },
   'POST /api/v1/eq-design': { expect: open(200), build: () => documentedExample('/api/v1/eq-design') },
 

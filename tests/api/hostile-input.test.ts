@@ -15,8 +15,9 @@ import { roomModesRequestSchema, roomResponseRequestSchema } from '@/lib/validat
 import { seatBalanceMeasuredRequestSchema, seatBalanceModelRequestSchema } from '@/lib/validations/compute-seat-balance';
 import { lessonCreateSchema, lessonUpdateSchema, stepCreateSchema, stepReorderSchema, stepUpdateSchema } from '@/lib/validations/lesson';
 import { copySchema, revisionNoteUpdateSchema, revisionRestoreSchema, systemCreateSchema, systemDuplicateSchema, systemRenameSchema, systemUpdateSchema } from '@/lib/validations/library';
-import { measurementUploadFieldsSchema, predictRequestSchema } from '@/lib/validations/measurement';
+import { measurementLabelsSchema, measurementUploadFieldsSchema, predictRequestSchema } from '@/lib/validations/measurement';
 import { extensionRequestSchema } from '@/lib/validations/measured-extension';
+import { compareRequestSchema } from '@/lib/validations/measured-compare';
 import { eqDesignCurveRequestSchema, eqDesignMeasuredRequestSchema, eqDesignModelRequestSchema } from '@/lib/validations/compute-eq-design';
 import { processorFiltersRequestSchema } from '@/lib/validations/compute-processor-filters';
 import { profileCreateSchema, profileUpdateSchema } from '@/lib/validations/profile';
@@ -62,6 +63,7 @@ interface Fixture {
   stepIds: string[];
   profileId: string;
   shareToken: string;
+  measurementId: string;
   /** Every id the fixture made, to tell our rows from others' on a shared database. */
   ids: string[];
 }
@@ -119,6 +121,7 @@ const JSON_ROUTES: JsonRoute[] = [
   compute('/api/v1/headroom', headroomRequestSchema),
   compute('/api/v1/measured/predict', predictRequestSchema, 2 * KB * KB),
   compute('/api/v1/measured/extension', extensionRequestSchema, 2 * KB * KB),
+  compute('/api/v1/measured/compare', compareRequestSchema, 2 * KB * KB),
   compute('/api/v1/processor-filters', processorFiltersRequestSchema),
   compute('/api/v1/eq-design', eqDesignCurveRequestSchema.or(eqDesignModelRequestSchema).or(eqDesignMeasuredRequestSchema)),
 
@@ -134,6 +137,7 @@ const JSON_ROUTES: JsonRoute[] = [
   { method: 'PATCH', route: '/api/v1/systems/[id]/revisions/[revision]', path: (f) => `/api/v1/systems/${f.systemId}/revisions/1`, schema: revisionNoteUpdateSchema, limitBytes: 16 * KB, session: true, template: () => ({ note: `Note ${MARK}` }) },
   { method: 'POST', route: '/api/v1/systems/[id]/revisions/[revision]/restore', path: (f) => `/api/v1/systems/${f.systemId}/revisions/1/restore`, schema: revisionRestoreSchema, limitBytes: 16 * KB, session: true, template: (f) => ({ revision: f.systemRevision }) },
   { method: 'POST', route: '/api/v1/shared/[token]/copy', path: (f) => `/api/v1/shared/${f.shareToken}/copy`, schema: copySchema, limitBytes: 16 * KB, session: true, template: (f) => ({ workspaceId: f.workspaceId, name: `Copy ${MARK}` }) },
+  { method: 'PATCH', route: '/api/v1/measurements/[id]', path: (f) => `/api/v1/measurements/${f.measurementId}`, schema: measurementLabelsSchema, limitBytes: 256 * KB, session: true, template: () => ({ runLabel: `Run ${MARK}`, seat: null }) },
 
   { method: 'POST', route: '/api/v1/profiles', path: () => '/api/v1/profiles', schema: profileCreateSchema, limitBytes: 32 * KB, session: true, template: (f) => ({ ...profileFields(), workspaceId: f.workspaceId }) },
   { method: 'PUT', route: '/api/v1/profiles/[id]', path: (f) => `/api/v1/profiles/${f.profileId}`, schema: profileUpdateSchema, limitBytes: 32 * KB, session: true, template: () => profileFields() },
@@ -628,7 +632,11 @@ describe('hostile input on every JSON route and on uploads', () => {
     f.stepIds = two.body.steps.map((s: { id: string }) => s.id);
     f.profileId = (await client.post('/api/v1/profiles', { ...profileFields(), workspaceId: f.workspaceId })).body.id;
     f.shareToken = (await client.post(`/api/v1/systems/${f.systemId}/share-links`)).body.token;
-    f.ids = [owner.id, editor.id, f.workspaceId, f.systemId, f.lessonId, ...f.stepIds, f.profileId, f.shareToken, MARK];
+    const curve = new FormData();
+    curve.set('file', new Blob([GOOD_CURVE], { type: 'text/csv' }), 'curve.csv');
+    curve.set('workspaceId', f.workspaceId);
+    f.measurementId = (await client.post('/api/v1/measurements', curve)).body.id;
+    f.ids = [owner.id, editor.id, f.workspaceId, f.systemId, f.lessonId, ...f.stepIds, f.profileId, f.shareToken, f.measurementId, MARK];
     for (const [k, v] of Object.entries(f)) if (v === undefined || v === null) throw new Error(`fixture ${k} missing`);
     // Every template is valid and answered 2xx? Not sent: the templates are only checked against the
     // route's own rules here, so a broken template fails loudly instead of making every mutation trivially invalid.

@@ -94,6 +94,9 @@ describe('computeMeasuredExtension', () => {
     const at60 = computeMeasuredExtension(request({ crossoverHz: 60 }), [seat]).crossover!;
     expect(at60.verdict).toBe('too-close');
     expect(at60.summary).toContain(`at least ${(Math.round(f3 * Math.SQRT2 * 10) / 10).toFixed(1)} Hz`);
+    // A crossover under the −3 dB point is said to sit below it (log2(30 / f3) < 0), never "−1.22 octaves above".
+    const at30 = computeMeasuredExtension(request({ crossoverHz: 30 }), [seat]).crossover!;
+    expect(at30.summary).toContain(`sits ${Math.abs(Math.log2(30 / f3)).toFixed(2)} octaves below the in-room −3 dB point`);
     expect(computeMeasuredExtension(request(), [seat]).crossover).toBeUndefined();
   });
 
