@@ -15,6 +15,7 @@ import { MeasurementList, type CurveItem } from './measurement-list';
 import { MeasuredRuns } from './measured-runs';
 import { MeasurementUpload, type LocalCurve } from './measurement-upload';
 import { OverlayPlot } from './overlay-plot';
+import { MeasuredTime } from './measured-time';
 import { PredictedBlend } from './predicted-blend';
 
 export const SMOOTHING_CHOICES = [0, 1, 2, 3, 6, 12, 24, 48] as const;
@@ -206,6 +207,7 @@ export function MeasuredPanel({ shared }: { shared?: { items: SharedMeasurement[
             pending={prediction.pending}
             error={prediction.error ?? null}
           />
+          {prediction.data ? <MeasuredTime prediction={prediction.data} /> : null}
         </div>
       </div>
       <MeasuredRuns saved={saved} local={local} systemId={systemId} curveOf={curveRef} canEdit={canWrite && !readOnly} />

@@ -223,8 +223,8 @@ describe('POST /api/v1/crossover-sweep', () => {
     it.each(cases)('%s → %s', refusedNaming(post));
   });
 
-  it('refuses bodies over 256 kB with 413 and non-JSON with 415', async () => {
-    expect((await post(JSON.stringify({ ...base(), padding: 'x'.repeat(300 * 1024) }))).status).toBe(413);
+  it('refuses bodies over 2 MB (room for inline measured curves) with 413 and non-JSON with 415', async () => {
+    expect((await post(JSON.stringify({ ...base(), padding: 'x'.repeat(2 * 1024 * 1024 + 1024) }))).status).toBe(413);
     expect((await post('a=1', { 'content-type': 'text/plain' })).status).toBe(415);
   });
 });

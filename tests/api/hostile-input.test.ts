@@ -111,8 +111,8 @@ const JSON_ROUTES: JsonRoute[] = [
   { method: 'POST', route: '/api/v1/auth/password-reset/confirm', path: () => '/api/v1/auth/password-reset/confirm', schema: resetConfirmSchema, limitBytes: 16 * KB, session: false, template: () => ({ token: 'x'.repeat(43), password: 'a-long-password-1' }) },
 
   compute('/api/v1/blend', blendRequestSchema),
-  compute('/api/v1/crossover-sweep', crossoverSweepRequestSchema),
-  compute('/api/v1/timing', timingRequestSchema),
+  compute('/api/v1/crossover-sweep', crossoverSweepRequestSchema, 2 * KB * KB),
+  compute('/api/v1/timing', timingRequestSchema, 2 * KB * KB),
   compute('/api/v1/room-modes', roomModesRequestSchema),
   compute('/api/v1/room-response', roomResponseRequestSchema),
   // A body with `measurements` is read by the measured schema, any other by the model's.

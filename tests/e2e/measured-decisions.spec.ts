@@ -62,4 +62,9 @@ test('Timing and the Crossover sweep on the measurements at the MLP, labelled, a
     await expect.poll(() => flatness(page), { timeout: 60_000 }).toBeCloseTo(topFlatness, 1);
   }
   await page.screenshot({ path: 'test-results/measured-decisions-timing.png', fullPage: true });
+
+  // The predicted blend at the seat in time, from the measured paths (the Measured tab's pair).
+  await page.getByRole('tab', { name: 'Measured' }).click();
+  await expect(page.getByTestId('measured-time')).toBeVisible({ timeout: 90_000 });
+  await expect(page.getByTestId('measured-time')).toContainText(/impulse peaks at [\d.]+ ms and the step at [\d.]+ ms/);
 });
