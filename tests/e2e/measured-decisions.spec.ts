@@ -1,4 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
+import { openDemoSystem } from './helpers/demo-system';
 
 // Issue 17: Timing and the Crossover sweep run on what was measured at a seat (the invented Juniper Lane files),
 // switched by one control and labelled; following the advice on the measurements leaves the measured blend no worse
@@ -12,18 +13,7 @@ const flatness = async (page: Page): Promise<number> => {
 
 test('Timing and the Crossover sweep on the measurements at the MLP, labelled, and their advice followed', async ({ page }) => {
   test.setTimeout(360_000);
-  const system = page.getByRole('link', { name: 'Juniper Lane screening room' }).first();
-  // On a busy development server the form can be filled before it hydrates; sign in again until the Library shows.
-  await expect(async () => {
-    await page.goto('/sign-in');
-    await page.waitForLoadState('networkidle');
-    await page.getByLabel('E-mail').fill('demo@seamline.test');
-    await page.getByLabel('Password').fill('seamline-demo');
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await expect(system).toBeVisible({ timeout: 40_000 });
-  }).toPass({ timeout: 150_000 });
-  await system.click();
-  await page.waitForURL(/\/systems\/[^/]+/, { timeout: 60_000 });
+  await openDemoSystem(page);
 
   // Timing: the model first, then the measurements at the MLP.
   await page.getByRole('tab', { name: 'Timing' }).click();

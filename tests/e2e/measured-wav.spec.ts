@@ -2,6 +2,7 @@ import { expect, test, type Page } from '@playwright/test';
 import { impulseCase, impulseFixture, sosImpulse } from '../dsp/measured/impulse-fixture';
 import { wavBytes } from '../helpers/wav-bytes';
 import { seriousViolations } from './helpers/axe';
+import { openDemoSystem } from './helpers/demo-system';
 
 // An invented room impulse response, written by the test: the sealed-box high-pass of the scipy fixture (2nd order,
 // 50 Hz, Q 0.707, through the bilinear transform at 48 kHz; scripts/reference/impulse-fixtures.py) arriving 30 ms
@@ -19,18 +20,7 @@ function roomImpulseWav(): Buffer {
 }
 
 async function openMeasured(page: Page) {
-  const system = page.getByRole('link', { name: 'Juniper Lane screening room' }).first();
-  // On a busy development server the form can be filled before it hydrates; sign in again until the Library shows.
-  await expect(async () => {
-    await page.goto('/sign-in');
-    await page.waitForLoadState('networkidle');
-    await page.getByLabel('E-mail').fill('demo@seamline.test');
-    await page.getByLabel('Password').fill('seamline-demo');
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await expect(system).toBeVisible({ timeout: 40_000 });
-  }).toPass({ timeout: 150_000 });
-  await system.click();
-  await expect(page).toHaveURL(/\/systems\/[0-9a-f-]{36}/, { timeout: 60_000 });
+  await openDemoSystem(page);
   await page.getByRole('tab', { name: 'Measured' }).click();
   await expect(page.getByTestId('measured-panel')).toBeVisible({ timeout: 60_000 });
 }
