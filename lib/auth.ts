@@ -1,7 +1,9 @@
 import type { NextAuthOptions, Session } from 'next-auth';
 import { getServerSession } from 'next-auth';
+import { headers } from 'next/headers';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import type { Caller } from './access';
+import { callerForAccessToken } from './data/access-tokens';
 import { findUserByEmail } from './data/users';
 import { AppError, unauthorized } from './errors';
 import { DUMMY_HASH, verifyPassword } from './passwords';
@@ -89,10 +91,26 @@ export async function getSession(): Promise<Session | null> {
   return session?.user?.id ? session : null;
 }
 
-/** The signed-in caller, or null. */
-export async function getCaller(): Promise<(Caller & { email: string; name: string }) | null> {
+/** The caller of a browser session (pages), or null. Bearer tokens are for the API only. */
+export async function getSessionCaller(): Promise<(Caller & { email: string; name: string }) | null> {
   const session = await getSession();
   return session ? { id: session.user.id, siteRole: session.user.siteRole, email: session.user.email, name: session.user.name } : null;
+}
+
+/** One answer for every token that is not accepted, so a caller cannot tell a mistyped token from a revoked one. */
+const TOKEN_REFUSED = 'The access token was not accepted: it may be mistyped, revoked or expired. Make a new one on the Account page.';
+
+/**
+ * The API's caller: `Authorization: Bearer <personal access token>` when the request carries that header (any
+ * other or a refused token: 401), else the signed-in session, else null.
+ */
+export async function getCaller(): Promise<(Caller & { email: string; name: string }) | null> {
+  const authorization = (await headers()).get('authorization');
+  if (authorization === null) return getSessionCaller();
+  const match = /^Bearer\s+(\S+)\s*$/i.exec(authorization);
+  const caller = match ? await callerForAccessToken(match[1] as string) : null;
+  if (!caller) throw unauthorized(TOKEN_REFUSED);
+  return caller;
 }
 
 export async function requireCaller(): Promise<Caller & { email: string; name: string }> {

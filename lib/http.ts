@@ -1,5 +1,7 @@
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
+import { consumeApiLimit } from './api-limits';
+import { getCaller } from './auth';
 import { errorBody, fromZod, invalid, tooLarge, toAppError, unsupportedMedia } from './errors';
 
 /** Largest request bodies the JSON routes read, in bytes; a larger body is answered 413 before it is parsed. */
@@ -16,8 +18,13 @@ export const BODY_LIMIT_BYTES = {
   measuredCurves: 2 * 1024 * 1024,
 } as const;
 
+/**
+ * A JSON answer. The web `Response.json` (the same serialisation, the same `content-type: application/json`):
+ * `NextResponse.json` builds that Response and then wraps its body stream in a second one with a cookie jar,
+ * about 0.1 ms more per answer, and nothing here sets cookies.
+ */
 export function json(data: unknown, status = 200, headers: Record<string, string> = {}) {
-  return NextResponse.json(data, { status, headers: { 'Cache-Control': 'no-store', ...headers } });
+  return Response.json(data, { status, headers: { 'Cache-Control': 'no-store', ...headers } });
 }
 
 export function errorResponse(error: unknown) {
@@ -89,10 +96,16 @@ export function parseQuery<S extends z.ZodType>(request: Request, schema: S): z.
 
 type Handler<C> = (request: Request, context: C) => Promise<Response>;
 
-/** Wraps a route handler so every thrown error becomes the one JSON error answer (`lib/errors.ts`, the API page /docs/api). */
+/**
+ * Wraps a route handler so every thrown error becomes the one JSON error answer (`lib/errors.ts`, the API page
+ * /docs/api), after counting the request against its caller's limit (`lib/api-limits.ts`: 429 over it) and, when it
+ * carries `Authorization`, checking the token (401 when refused) even on routes that need no caller.
+ */
 export function route<C = unknown>(handler: Handler<C>): Handler<C> {
   return async (request, context) => {
     try {
+      await consumeApiLimit(request);
+      if (request.headers.has('authorization')) await getCaller();
       return await handler(request, context);
     } catch (error) {
       return errorResponse(error);

@@ -12,6 +12,7 @@ import { SpeakerProfileRow } from './speaker-profile';
 import { Lesson } from './lesson';
 import { LessonStep } from './lesson-step';
 import { Measurement } from './measurement';
+import { AccessToken } from './access-token';
 
 export { DevMessage, Invitation, Membership, PasswordResetToken, ShareLink, System, SystemRevision, User, Workspace };
 export type { SiteRole } from './user';
@@ -21,6 +22,8 @@ export { SpeakerProfileRow };
 export { Lesson, LessonStep };
 
 export { Measurement };
+export { AccessToken };
+export type { TokenScope } from './access-token';
 export type { MeasurementData } from './measurement';
 
 // Per module instance: bundlers may load this module more than once around one shared Sequelize.
@@ -58,4 +61,7 @@ export function initModels(sequelize: Sequelize): void {
   Measurement.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
   Measurement.belongsTo(System, { foreignKey: 'systemId', as: 'system' });
   Measurement.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  AccessToken.initModel(sequelize);
+  AccessToken.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  AccessToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 }

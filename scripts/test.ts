@@ -147,6 +147,11 @@ async function main() {
     NEXT_DIST_DIR: '.next-test',
     E2E_BASE_URL: `http://127.0.0.1:${appPort}`,
     NEXT_TELEMETRY_DISABLED: '1',
+    // The suite calls from this machine thousands of times a minute: its own address is not limited, and the
+    // limit test (tests/api/api-limits.test.ts) sends other addresses and tokens against small budgets.
+    SEAMLINE_LIMIT_EXEMPT: '127.0.0.1,::1,::ffff:127.0.0.1',
+    SEAMLINE_LIMIT_COMPUTE_PER_MIN: '240',
+    SEAMLINE_LIMIT_LIBRARY_PER_MIN: '240',
   };
   Object.assign(process.env, env);
 

@@ -1,5 +1,5 @@
 import { Op } from 'sequelize';
-import { requireMembership, type Caller } from '@/lib/access';
+import { requireMembership, requireSessionCaller, type Caller } from '@/lib/access';
 import { config } from '@/lib/config';
 import { db } from '@/lib/db';
 import { invalid, notFound } from '@/lib/errors';
@@ -82,6 +82,7 @@ export async function previewInvitation(token: string): Promise<InvitationPrevie
 
 /** The signed-in invitee accepts: creates the membership with the invited role, once. */
 export async function acceptInvitation(caller: Caller & { email: string }, token: string): Promise<{ workspaceId: string; role: WorkspaceRole }> {
+  requireSessionCaller(caller, 'Accepting an invitation');
   const sequelize = db();
   return sequelize.transaction(async (transaction) => {
     const invitation = await findUsable(token);

@@ -1,5 +1,5 @@
 import { Op } from 'sequelize';
-import { requireMembership, type Caller } from '@/lib/access';
+import { effectiveRole, requireMembership, requireSessionCaller, type Caller } from '@/lib/access';
 import { db } from '@/lib/db';
 import { conflict, notFound } from '@/lib/errors';
 import { Membership, User, Workspace, type WorkspaceRole } from '@/models';
@@ -22,7 +22,8 @@ export interface AppMember {
 
 export async function listWorkspaces(caller: Caller): Promise<AppWorkspace[]> {
   db();
-  const memberships = await Membership.findAll({ where: { userId: caller.id }, include: [{ model: Workspace, as: 'workspace' }] });
+  const where = caller.token ? { userId: caller.id, workspaceId: caller.token.workspaceId } : { userId: caller.id };
+  const memberships = await Membership.findAll({ where, include: [{ model: Workspace, as: 'workspace' }] });
   const ids = memberships.map((m) => m.workspaceId);
   const counts = new Map<string, number>();
   if (ids.length) {
@@ -32,7 +33,7 @@ export async function listWorkspaces(caller: Caller): Promise<AppWorkspace[]> {
   return memberships
     .map((m) => {
       const w = (m as unknown as { workspace: Workspace }).workspace;
-      return { id: w.id, name: w.name, personal: w.personal, role: m.role, memberCount: counts.get(w.id) ?? 1 };
+      return { id: w.id, name: w.name, personal: w.personal, role: effectiveRole(caller, m.role), memberCount: counts.get(w.id) ?? 1 };
     })
     .sort((a, b) => Number(b.personal) - Number(a.personal) || a.name.localeCompare(b.name));
 }
@@ -46,6 +47,7 @@ export async function getWorkspace(caller: Caller, workspaceId: string): Promise
 }
 
 export async function createWorkspace(caller: Caller, name: string): Promise<AppWorkspace> {
+  requireSessionCaller(caller, 'Creating a workspace');
   const sequelize = db();
   return sequelize.transaction(async (transaction) => {
     const w = await Workspace.create({ name, personal: false }, { transaction });
@@ -72,8 +74,8 @@ export async function listMembers(caller: Caller, workspaceId: string): Promise<
 /** Changes a member's role or removes them; the last owner can be neither demoted nor removed. */
 export async function changeMember(caller: Caller, workspaceId: string, userId: string, change: { role: WorkspaceRole } | 'remove'): Promise<void> {
   const self = caller.id === userId;
-  // Anyone may leave (remove themselves); everything else needs an owner.
-  await requireMembership(caller, workspaceId, self && change === 'remove' ? 'viewer' : 'owner', 'That workspace');
+  // Anyone may leave (remove themselves) from a browser session; everything else needs an owner (which no token is).
+  await requireMembership(caller, workspaceId, self && change === 'remove' && !caller.token ? 'viewer' : 'owner', 'That workspace');
   const sequelize = db();
   await sequelize.transaction(async (transaction) => {
     // Lock the workspace's owner rows so two concurrent demotions cannot leave it without an owner.

@@ -18,12 +18,30 @@ export function roundToSignificant(value: number, digits: number): number {
   return r === 0 ? 0 : r;
 }
 
-/** Every entry rounded with {@link roundTo}. */
+/**
+ * Every entry rounded with {@link roundTo} (the same arithmetic, the scale computed once). A plain loop filling an
+ * array of doubles: `Array.from` with a mapping function over a Float64Array cost about ten times as much, and an
+ * array of unboxed doubles is also quicker for JSON.stringify — these arrays are most of every compute answer.
+ */
 export function roundAllTo(values: ArrayLike<number>, decimals: number): number[] {
-  return Array.from(values, (v) => roundTo(v, decimals));
+  const k = 10 ** decimals;
+  const n = values.length;
+  const out: number[] = [];
+  for (let i = 0; i < n; i++) {
+    const v = values[i] as number;
+    if (!Number.isFinite(v)) {
+      out.push(v);
+      continue;
+    }
+    const r = Math.round(v * k) / k;
+    out.push(r === 0 ? 0 : r);
+  }
+  return out;
 }
 
 /** Every entry rounded with {@link roundToSignificant}. */
 export function roundAllToSignificant(values: ArrayLike<number>, digits: number): number[] {
-  return Array.from(values, (v) => roundToSignificant(v, digits));
+  const out: number[] = [];
+  for (let i = 0; i < values.length; i++) out.push(roundToSignificant(values[i] as number, digits));
+  return out;
 }

@@ -26,13 +26,19 @@ export const ROOM_LIMITS = {
   maxHeadroomRows: 32,
 } as const;
 
-export const temperatureCSchema = num(-20, 50, '°C');
+export const temperatureCSchema = num(-20, 50, '°C').meta({
+  description: 'Air temperature, −20…50 °C; sets the speed of sound c = 331.3·√(1 + T/273.15) m/s.',
+  'x-unit': '°C',
+});
 
 export const gridSchema = z
   .object({
-    startHz: num(COMPUTE_LIMITS.minHz, COMPUTE_LIMITS.maxHz, 'Hz'),
-    stopHz: num(COMPUTE_LIMITS.minHz, COMPUTE_LIMITS.maxHz, 'Hz'),
-    pointsPerOctave: num(1, 384),
+    startHz: num(COMPUTE_LIMITS.minHz, COMPUTE_LIMITS.maxHz, 'Hz').meta({ description: `First frequency (included), ${COMPUTE_LIMITS.minHz}…24 000 Hz.`, 'x-unit': 'Hz' }),
+    stopHz: num(COMPUTE_LIMITS.minHz, COMPUTE_LIMITS.maxHz, 'Hz').meta({
+      description: 'Last frequency (reached when it falls on the log grid), above startHz, at most 24 000 Hz.',
+      'x-unit': 'Hz',
+    }),
+    pointsPerOctave: num(1, 384).meta({ description: `Log spacing, 1…384 points per octave; at most ${COMPUTE_LIMITS.maxGridPoints} points in all.` }),
   })
   .superRefine((g, ctx) => {
     if (g.stopHz <= g.startHz) ctx.addIssue({ code: 'custom', path: ['stopHz'], message: 'must be above startHz' });
@@ -40,16 +46,32 @@ export const gridSchema = z
     if (points > COMPUTE_LIMITS.maxGridPoints) {
       ctx.addIssue({ code: 'custom', path: ['pointsPerOctave'], message: `the grid would have ${points} points; at most ${COMPUTE_LIMITS.maxGridPoints} are allowed` });
     }
-  });
+  })
+  .meta({ id: 'FrequencyGrid', description: 'A log-spaced frequency grid from startHz (included) towards stopHz.' });
+
+const metres = (description: string) => ({ description, 'x-unit': 'm' });
 
 /** A room's inside dimensions in a compute request (m), as fields to spread into its object. */
-export const roomDimensionsShape = { lengthM: num(1, 100, 'm'), widthM: num(1, 100, 'm'), heightM: num(1, 30, 'm') };
+export const roomDimensionsShape = {
+  lengthM: num(1, 100, 'm').meta(metres('Inside length, front wall to back wall (y), 1–100 m.')),
+  widthM: num(1, 100, 'm').meta(metres('Inside width (x), 1–100 m.')),
+  heightM: num(1, 30, 'm').meta(metres('Inside height (z), 1–30 m.')),
+};
 
 /** A position in a compute request (m; origin at the front-left floor corner), as fields to spread into its object. */
-export const positionShape = { xM: num(0, 100, 'm'), yM: num(0, 100, 'm'), zM: num(0, 30, 'm') };
+export const positionShape = {
+  xM: num(0, 100, 'm').meta(metres('Across the room from the left wall (x), 0–100 m.')),
+  yM: num(0, 100, 'm').meta(metres('Into the room from the front wall (y), 0–100 m.')),
+  zM: num(0, 30, 'm').meta(metres('Up from the floor (z), 0–30 m.')),
+};
 
 /** The name of a seat, speaker, sub or headroom row in a room compute request. */
-export const roomItemNameSchema = z.string({ error: 'must be text' }).trim().min(1, 'is required').max(60, 'must be at most 60 characters');
+export const roomItemNameSchema = z
+  .string({ error: 'must be text' })
+  .trim()
+  .min(1, 'is required')
+  .max(60, 'must be at most 60 characters')
+  .meta({ description: 'A name, 1–60 characters, given back in the answer.' });
 
 /** What a room compute request places in the room: a listener, seats and subs by name, speakers by channel. */
 interface PlacedItems {

@@ -1,14 +1,15 @@
 import { z } from 'zod';
-import { EQ_DESIGN_DEFAULTS, EQ_DESIGN_LIMITS, EQ_LIMITS, MAX_HOUSE_RISE_DB, SAMPLE_RATE_LIMITS_HZ, statisticalModeCount } from '@/dsp';
+import { EQ_DESIGN_DEFAULTS, EQ_DESIGN_LIMITS, EQ_LIMITS, HOUSE_CURVE_DEFINITION, MAX_HOUSE_RISE_DB, SAMPLE_RATE_LIMITS_HZ, statisticalModeCount } from '@/dsp';
 import { num, uuidField } from './common';
 import { rolloffSchema } from './compute-blend';
-import { positionShape, refineRequestInsideRoom, ROOM_LIMITS, roomDimensionsShape, roomItemNameSchema, temperatureCSchema } from './compute-common';
+import { refineRequestInsideRoom, ROOM_LIMITS, roomItemNameSchema } from './compute-common';
+import { describedPositionShape, modalRoomSchema, seatNameSchema, subNameSchema } from './compute-room';
 import { eqFilterSchema, peakingFilterSchema } from './eq-filter';
 import { filterFamilySchema, refineSlopeOrder } from './slope';
 
 /**
- * Request bodies of POST /api/v1/eq-design (fields on the API page, lib/api-docs/compute-eq-design.ts): an inline curve,
- * the modal model of a room with its subs, or stored measurements. The design options are common to all three.
+ * Request bodies of POST /api/v1/eq-design: an inline curve, the modal model of a room with its subs, or stored
+ * measurements. The design options are common to all three. Each field's words (description, unit) sit on it as `.meta`.
  */
 
 const EQ_DESIGN_REQUEST_LIMITS = {
@@ -23,45 +24,79 @@ const EQ_DESIGN_REQUEST_LIMITS = {
 /** The grid of the model and measured forms by default: the Modes tab's (15–200 Hz, 48 points per octave). */
 const EQ_DESIGN_GRID = { startHz: 15, stopHz: 200, pointsPerOctave: 48 } as const;
 
+const D = EQ_DESIGN_DEFAULTS;
+const L = EQ_DESIGN_LIMITS;
+const hz = (description: string) => num(10, ROOM_LIMITS.maxResponseHz, 'Hz').meta({ description: `${description}, 10–${ROOM_LIMITS.maxResponseHz} Hz.`, 'x-unit': 'Hz' });
+
 const targetSchema = z.discriminatedUnion(
   'kind',
   [
-    z.object({ kind: z.literal('flat') }),
-    z.object({ kind: z.literal('house'), riseDb: num(0, MAX_HOUSE_RISE_DB, 'dB'), belowHz: num(20, 200, 'Hz') }),
+    z.object({ kind: z.literal('flat').meta({ description: 'A flat target.' }) }).meta({ description: 'A flat target.' }),
+    z
+      .object({
+        kind: z.literal('house').meta({ description: 'A house curve.' }),
+        riseDb: num(0, MAX_HOUSE_RISE_DB, 'dB').meta({ description: `The low-frequency rise, 0–${MAX_HOUSE_RISE_DB} dB.`, 'x-unit': 'dB' }),
+        belowHz: num(20, 200, 'Hz').meta({ description: 'Where the rise is half done, 20–200 Hz.', 'x-unit': 'Hz' }),
+      })
+      .meta({ description: `A house curve: ${HOUSE_CURVE_DEFINITION}.` }),
   ],
   { error: "kind must be 'flat' or 'house'" },
 );
 
 const bandSchema = z
-  .object({ startHz: num(10, ROOM_LIMITS.maxResponseHz, 'Hz'), stopHz: num(10, ROOM_LIMITS.maxResponseHz, 'Hz') })
+  .object({ startHz: hz('Lowest frequency'), stopHz: hz('Highest frequency, above startHz') })
   .superRefine((b, ctx) => {
     if (b.stopHz <= b.startHz) ctx.addIssue({ code: 'custom', path: ['stopHz'], message: 'must be above startHz' });
   });
 
+const qLimit = (description: string) => num(EQ_LIMITS.q.min, EQ_LIMITS.q.max).meta({ description: `${description}, ${EQ_LIMITS.q.min}–${EQ_LIMITS.q.max}.` });
 const qSchema = z
-  .object({ min: num(EQ_LIMITS.q.min, EQ_LIMITS.q.max), max: num(EQ_LIMITS.q.min, EQ_LIMITS.q.max) })
+  .object({ min: qLimit('Lowest Q'), max: qLimit('Highest Q, at least min') })
   .superRefine((q, ctx) => {
     if (q.max < q.min) ctx.addIssue({ code: 'custom', path: ['max'], message: 'must be at least min' });
   });
 
 /** The designer's options, common to every form. */
 const designShape = {
-  target: targetSchema.default({ kind: 'flat' }),
-  band: bandSchema.default({ ...EQ_DESIGN_DEFAULTS.band }),
-  maxFilters: num(1, EQ_DESIGN_LIMITS.maxFilters).int('must be a whole number').default(EQ_DESIGN_DEFAULTS.maxFilters),
-  maxBoostDb: num(0, EQ_DESIGN_LIMITS.maxBoostDb, 'dB').default(EQ_DESIGN_DEFAULTS.maxBoostDb),
-  maxCutDb: num(0, EQ_DESIGN_LIMITS.maxCutDb, 'dB').default(EQ_DESIGN_DEFAULTS.maxCutDb),
-  q: qSchema.default({ ...EQ_DESIGN_DEFAULTS.q }),
-  sampleRateHz: num(SAMPLE_RATE_LIMITS_HZ.min, SAMPLE_RATE_LIMITS_HZ.max, 'Hz').default(EQ_DESIGN_DEFAULTS.sampleRateHz),
-  nullDepthDb: num(EQ_DESIGN_LIMITS.minNullDepthDb, EQ_DESIGN_LIMITS.maxNullDepthDb, 'dB').default(EQ_DESIGN_DEFAULTS.nullDepthDb),
+  target: targetSchema.default({ kind: 'flat' }).meta({ description: `The target: { kind: 'flat' } (default) or { kind: 'house', riseDb, belowHz }.` }),
+  band: bandSchema.default({ ...D.band }).meta({ description: `Where the EQ works and the residual is measured, 10–500 Hz (default ${D.band.startHz}–${D.band.stopHz}); filter centres stay inside it.` }),
+  maxFilters: num(1, L.maxFilters).int('must be a whole number').default(D.maxFilters).meta({ description: `Most filters, 1–${L.maxFilters} (default ${D.maxFilters}); fewer come back when more would not help.` }),
+  maxBoostDb: num(0, L.maxBoostDb, 'dB').default(D.maxBoostDb).meta({ description: `Largest gain of any filter, 0–${L.maxBoostDb} dB (default +${D.maxBoostDb}; 0 for cuts only).`, 'x-unit': 'dB' }),
+  maxCutDb: num(0, L.maxCutDb, 'dB').default(D.maxCutDb).meta({ description: `Deepest cut, 0–${L.maxCutDb} dB (default ${D.maxCutDb}, i.e. gains down to −${D.maxCutDb} dB).`, 'x-unit': 'dB' }),
+  q: qSchema.default({ ...D.q }).meta({ description: `The filters’ Q range (default ${D.q.min}–${D.q.max}).` }),
+  sampleRateHz: num(SAMPLE_RATE_LIMITS_HZ.min, SAMPLE_RATE_LIMITS_HZ.max, 'Hz').default(D.sampleRateHz).meta({
+    description: `The processor’s sample rate, ${SAMPLE_RATE_LIMITS_HZ.min}–${SAMPLE_RATE_LIMITS_HZ.max} Hz (default ${D.sampleRateHz}): the filters are evaluated, and their sections given, as its digital biquads.`,
+    'x-unit': 'Hz',
+  }),
+  nullDepthDb: num(L.minNullDepthDb, L.maxNullDepthDb, 'dB').default(D.nullDepthDb).meta({
+    description: `How far a dip must lie below the level around it to count as a null, ${L.minNullDepthDb}–${L.maxNullDepthDb} dB (default ${D.nullDepthDb}).`,
+    'x-unit': 'dB',
+  }),
   /** Where the target sits (the input's units); default the median in the band. A design's levelOffsetDb checks against its target. */
-  targetLevelDb: num(-500, 500, 'dB').optional(),
+  targetLevelDb: num(-500, 500, 'dB').optional().meta({
+    description:
+      'Where the target sits in the input’s units, −500–500 dB (default: the median of input − target shape in the band, outside the nulls). Send a design’s levelOffsetDb with the EQ applied to check it against that design’s own target: its residual before is then what the applied EQ achieves.',
+    'x-unit': 'dB',
+  }),
 };
 
-const gridSchema = z.object({ startHz: num(10, ROOM_LIMITS.maxResponseHz, 'Hz'), stopHz: num(10, ROOM_LIMITS.maxResponseHz, 'Hz'), pointsPerOctave: num(1, 192) });
+const gridSchema = z
+  .object({ startHz: hz('Lowest frequency'), stopHz: hz('Highest frequency, above startHz'), pointsPerOctave: num(1, 192).meta({ description: 'Points per octave, 1–192.' }) })
+  .meta({ description: 'The log grid (default 15–200 Hz at 48 points per octave, the Modes tab’s); the band must lie within it and hold 3–400 of its points.' });
 
 /** The crossover low-pass the sub outputs run (a digital filter at sampleRateHz, as the processor runs it). */
-const lowpassSchema = z.object({ family: filterFamilySchema, order: num(1, 8).int('must be a whole number'), cornerHz: num(10, 500, 'Hz') }).superRefine((s, ctx) => refineSlopeOrder(s, ctx));
+const lowpassSchema = z
+  .object({
+    family: filterFamilySchema,
+    order: num(1, 8).int('must be a whole number').meta({ description: 'Butterworth 1–8, Linkwitz–Riley 2, 4 or 8.' }),
+    cornerHz: num(10, 500, 'Hz').meta({ description: 'The corner, 10–500 Hz, below the Nyquist frequency.', 'x-unit': 'Hz' }),
+  })
+  .superRefine((s, ctx) => refineSlopeOrder(s, ctx))
+  .meta({ description: 'The crossover low-pass the sub outputs run, as the processor’s biquads at sampleRateHz. Applied to the model and to per-sub measurements; files of all subs together already hold it.' });
+const followLowpassSchema = z
+  .boolean({ error: 'must be true or false' })
+  .default(true)
+  .meta({ description: 'Add the low-pass’s level to the target, so the EQ does not fight the crossover (default true).' });
 
 const invertSchema = z.boolean({ error: 'must be true or false' });
 
@@ -88,9 +123,21 @@ function refineUniqueNames(list: { name: string }[], key: string, ctx: z.Refinem
 /** An inline curve: the response on any ascending grid, and optionally a shape to add to the target. */
 export const eqDesignCurveRequestSchema = z
   .object({
-    frequencyHz: z.array(num(1, SAMPLE_RATE_LIMITS_HZ.max / 2, 'Hz')).min(3, 'at least 3 points are needed').max(EQ_DESIGN_REQUEST_LIMITS.maxCurvePoints, `at most ${EQ_DESIGN_REQUEST_LIMITS.maxCurvePoints} points`),
-    magnitudeDb: z.array(num(-300, 300, 'dB')),
-    targetShapeDb: z.array(num(-100, 100, 'dB')).optional(),
+    frequencyHz: z
+      .array(num(1, SAMPLE_RATE_LIMITS_HZ.max / 2, 'Hz'))
+      .min(3, 'at least 3 points are needed')
+      .max(EQ_DESIGN_REQUEST_LIMITS.maxCurvePoints, `at most ${EQ_DESIGN_REQUEST_LIMITS.maxCurvePoints} points`)
+      .meta({
+        description: `An inline curve’s frequencies, 3–${EQ_DESIGN_REQUEST_LIMITS.maxCurvePoints}, ascending, below the Nyquist frequency. A log grid suits the designer; any spacing works (the residual weighs each point by its share of log frequency). Q is held to what two grid steps resolve, so a coarse grid gets wider filters.`,
+        'x-unit': 'Hz',
+      }),
+    magnitudeDb: z
+      .array(num(-300, 300, 'dB'))
+      .meta({ description: 'The response the EQ acts on (already through whatever the output plays: roll-offs, crossover), one value per frequency, ±300 dB.', 'x-unit': 'dB' }),
+    targetShapeDb: z
+      .array(num(-100, 100, 'dB'))
+      .optional()
+      .meta({ description: 'A shape added to the target at each frequency, ±100 dB (e.g. the crossover low-pass, so the EQ does not fight it); one value per frequency.', 'x-unit': 'dB' }),
     ...designShape,
   })
   .superRefine((r, ctx) => {
@@ -108,29 +155,48 @@ export type EqDesignCurveRequest = z.infer<typeof eqDesignCurveRequestSchema>;
 /** The modal model: a room, seats and subs with their present processor settings, the crossover low-pass. */
 export const eqDesignModelRequestSchema = z
   .object({
-    room: z.object({ ...roomDimensionsShape, rt60S: num(0.05, 10, 's'), temperatureC: temperatureCSchema }),
-    seats: z.array(z.object({ name: roomItemNameSchema, ...positionShape })).min(1, 'at least one seat is needed').max(EQ_DESIGN_REQUEST_LIMITS.maxSeats, `at most ${EQ_DESIGN_REQUEST_LIMITS.maxSeats} seats`),
+    room: modalRoomSchema,
+    seats: z
+      .array(z.object({ name: seatNameSchema, ...describedPositionShape }))
+      .min(1, 'at least one seat is needed')
+      .max(EQ_DESIGN_REQUEST_LIMITS.maxSeats, `at most ${EQ_DESIGN_REQUEST_LIMITS.maxSeats} seats`)
+      .meta({ description: `Listening positions, 1–${EQ_DESIGN_REQUEST_LIMITS.maxSeats}, inside the room; names differ.` }),
     /** 'average' (the power average over the seats) or one seat's name. */
-    at: z.string({ error: 'must be "average" or a seat’s name' }).trim().min(1, 'is required').max(60).default('average'),
+    at: z
+      .string({ error: 'must be "average" or a seat’s name' })
+      .trim()
+      .min(1, 'is required')
+      .max(60)
+      .default('average')
+      .meta({ description: 'Where the response is taken: "average" (the power average over the seats, default) or one seat’s name, e.g. the MLP.' }),
     subs: z
       .array(
         z.object({
-          name: roomItemNameSchema,
-          ...positionShape,
-          gainDb: num(-30, 30, 'dB').default(0),
-          delayMs: num(0, 100, 'ms').default(0),
-          invert: invertSchema.default(false),
-          rolloffs: z.array(rolloffSchema).max(4, 'at most 4 roll-offs').default([]),
+          name: subNameSchema,
+          ...describedPositionShape,
+          gainDb: num(-30, 30, 'dB').default(0).meta({ description: 'Present processor gain, −30–30 dB (default 0).', 'x-unit': 'dB' }),
+          delayMs: num(0, 100, 'ms').default(0).meta({ description: 'Present processor delay (alignment and own delay), 0–100 ms (default 0).', 'x-unit': 'ms' }),
+          invert: invertSchema.default(false).meta({ description: 'Present polarity: inverted or not (default false).' }),
+          rolloffs: z.array(rolloffSchema).max(4, 'at most 4 roll-offs').default([]).meta({ description: 'The sub’s natural roll-offs, at most 4, as blend’s rolloff: sealed, vented, lowpass.' }),
           /** The filters of the sub's own back-panel switches (Voicing options), as analog prototypes. */
-          voicing: z.array(eqFilterSchema).max(16, 'at most 16 filters').default([]),
+          voicing: z
+            .array(eqFilterSchema)
+            .max(16, 'at most 16 filters')
+            .default([])
+            .meta({ description: 'The filters of the sub’s own back-panel switches (its Voicing options), at most 16 peaking or shelf filters, as analog prototypes.' }),
           /** EQ the processor already runs on this output (digital, at sampleRateHz); the design comes on top of it. */
-          eq: z.array(peakingFilterSchema.extend({ kind: z.literal('peaking', { error: "must be 'peaking': the sub outputs' EQ is peaking filters" }) })).max(10, 'at most 10 filters').default([]),
+          eq: z
+            .array(peakingFilterSchema.extend({ kind: z.literal('peaking', { error: "must be 'peaking': the sub outputs' EQ is peaking filters" }).meta({ description: 'A peaking filter (the only kind on the sub outputs).' }) }))
+            .max(10, 'at most 10 filters')
+            .default([])
+            .meta({ description: 'EQ the processor already runs on this output (at most 10 peaking filters, digital at sampleRateHz); the design comes on top of it — leave it out to design from scratch.' }),
         }),
       )
       .min(1, 'at least one sub is needed')
-      .max(EQ_DESIGN_REQUEST_LIMITS.maxSubs, `at most ${EQ_DESIGN_REQUEST_LIMITS.maxSubs} subs`),
+      .max(EQ_DESIGN_REQUEST_LIMITS.maxSubs, `at most ${EQ_DESIGN_REQUEST_LIMITS.maxSubs} subs`)
+      .meta({ description: `The subs, 1–${EQ_DESIGN_REQUEST_LIMITS.maxSubs}, summed at each seat with their present settings (the modal model, as room-response and seat-balance take it).` }),
     lowpass: lowpassSchema.optional(),
-    followLowpass: invertSchema.default(true),
+    followLowpass: followLowpassSchema,
     grid: gridSchema.default({ ...EQ_DESIGN_GRID }),
     ...designShape,
   })
@@ -158,17 +224,35 @@ export type EqDesignModelRequest = z.infer<typeof eqDesignModelRequestSchema>;
 export const eqDesignMeasuredRequestSchema = z
   .object({
     measurements: z
-      .array(z.object({ seat: roomItemNameSchema, sub: roomItemNameSchema.optional(), measurementId: uuidField('must be a measurement id') }))
+      .array(
+        z.object({
+          seat: roomItemNameSchema.meta({ description: 'The seat it was measured at; several seats are power-averaged.' }),
+          sub: roomItemNameSchema.optional().meta({ description: 'The sub measured alone (one of subs’ names); left out when every sub played together through the processor.' }),
+          measurementId: uuidField('must be a measurement id').meta({ description: 'A stored measurement the caller may read.' }),
+        }),
+      )
       .min(1, 'at least one measurement is needed')
-      .max(EQ_DESIGN_REQUEST_LIMITS.maxSeats * EQ_DESIGN_REQUEST_LIMITS.maxSubs),
+      .max(EQ_DESIGN_REQUEST_LIMITS.maxSeats * EQ_DESIGN_REQUEST_LIMITS.maxSubs)
+      .meta({
+        description:
+          'Stored measurements (needs a session and read access to each; 401 signed out, 404 outside the workspace): either each sub alone at each seat (sub named; summed with subs’ present settings and the low-pass, which needs phase from one timing reference, except with one sub), or every sub playing together through the processor with the subs’ EQ bypassed (sub left out; magnitude is enough). The files must cover the band.',
+      }),
     /** With per-sub files: every sub and its present processor settings (the files are taken without processing). */
     subs: z
-      .array(z.object({ name: roomItemNameSchema, gainDb: num(-30, 30, 'dB').default(0), delayMs: num(0, 100, 'ms').default(0), invert: invertSchema.default(false) }))
+      .array(
+        z.object({
+          name: subNameSchema,
+          gainDb: num(-30, 30, 'dB').default(0).meta({ description: 'Present processor gain, −30–30 dB (default 0).', 'x-unit': 'dB' }),
+          delayMs: num(0, 100, 'ms').default(0).meta({ description: 'Present processor delay, 0–100 ms (default 0).', 'x-unit': 'ms' }),
+          invert: invertSchema.default(false).meta({ description: 'Present polarity: inverted or not (default false).' }),
+        }),
+      )
       .min(1, 'at least one sub is needed')
       .max(EQ_DESIGN_REQUEST_LIMITS.maxSubs, `at most ${EQ_DESIGN_REQUEST_LIMITS.maxSubs} subs`)
-      .optional(),
+      .optional()
+      .meta({ description: 'Required with per-sub files: every sub and its present processor settings (the files are taken without processing).' }),
     lowpass: lowpassSchema.optional(),
-    followLowpass: invertSchema.default(true),
+    followLowpass: followLowpassSchema,
     grid: gridSchema.default({ ...EQ_DESIGN_GRID }),
     ...designShape,
   })
@@ -203,3 +287,11 @@ export const eqDesignMeasuredRequestSchema = z
     }
   });
 export type EqDesignMeasuredRequest = z.infer<typeof eqDesignMeasuredRequestSchema>;
+
+/**
+ * The body of POST /api/v1/eq-design as a whole: the handler reads a body with `measurements` as the measured request,
+ * one with `frequencyHz` as an inline curve, any other as the modal model (each form keeps its own error paths).
+ */
+export const eqDesignRequestSchema = z
+  .union([eqDesignCurveRequestSchema, eqDesignModelRequestSchema, eqDesignMeasuredRequestSchema])
+  .meta({ description: 'An inline curve (`frequencyHz`), the modal model of a room (`room`), or stored measurements (`measurements`), with the design options common to all three.' });

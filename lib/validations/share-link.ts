@@ -9,4 +9,9 @@ export function isShareToken(value: string): boolean {
 }
 
 /** `?token=` of DELETE /api/v1/lessons/{id}/share-links. */
-export const shareTokenQuerySchema = z.object({ token: z.string({ error: 'token is required' }).regex(SHARE_TOKEN_SHAPE, 'token is not a share link token') });
+export const shareTokenQuerySchema = z.object({
+  token: z
+    .string({ error: 'token is required' })
+    .regex(SHARE_TOKEN_SHAPE, 'token is not a share link token')
+    .meta({ description: 'The link’s token (43 characters of base64url), as its url ends.' }),
+});

@@ -1,5 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { API_DOCS } from '@/lib/api-docs';
+import { API_OPERATIONS } from '@/lib/openapi/operations';
 import { addMember } from '@/lib/data/workspaces';
 import { juniperLaneDocument } from '@/lib/demo/systems';
 import { demoProfile } from '@/lib/demo/profiles';
@@ -11,10 +11,38 @@ import { testDb } from '../helpers/db';
  * One table over every route in app/api (found by walking the folder, so a new route without an
  * entry fails) × {anonymous, outsider, site admin, viewer, editor, owner}, with the status each
  * must get. Outsiders and site admins are told nothing about a workspace's content (404).
+ *
+ * Programs with the owner's personal access tokens (`Authorization: Bearer`) are callers too: a read token for the
+ * workspace acts as its viewer, a write token as its editor (never an owner), a token for another workspace as an
+ * outsider; a revoked or expired token is 401 wherever it is sent. Routes only a browser session may use (account,
+ * tokens, making workspaces, accepting invitations) answer 403 to every working token — listed in SESSION_ONLY.
  */
-type Role = 'anonymous' | 'outsider' | 'admin' | 'viewer' | 'editor' | 'owner';
-const ROLES: Role[] = ['anonymous', 'outsider', 'admin', 'viewer', 'editor', 'owner'];
-type Expect = Record<Role, number>;
+type SessionRole = 'anonymous' | 'outsider' | 'admin' | 'viewer' | 'editor' | 'owner';
+type TokenRole = 'readToken' | 'writeToken' | 'otherWorkspaceToken' | 'revokedToken' | 'expiredToken';
+type Role = SessionRole | TokenRole;
+const SESSION_ROLES: SessionRole[] = ['anonymous', 'outsider', 'admin', 'viewer', 'editor', 'owner'];
+const TOKEN_ROLES: TokenRole[] = ['readToken', 'writeToken', 'otherWorkspaceToken', 'revokedToken', 'expiredToken'];
+const ROLES: Role[] = [...SESSION_ROLES, ...TOKEN_ROLES];
+type Expect = Record<SessionRole, number>;
+
+/** Routes a token may not use at all, whatever its scope. */
+const SESSION_ONLY = new Set(['POST /api/v1/workspaces', 'POST /api/v1/invitations/[token]', 'GET /api/v1/tokens', 'POST /api/v1/tokens', 'DELETE /api/v1/tokens/[id]']);
+/** Routes outside /api/v1 that ignore Authorization altogether. */
+const NO_TOKEN_CHECK = new Set(['GET /api/health']);
+
+/** What each token caller must get, from the session roles' row (independent of the code: the rule above). */
+function withTokens(key: string, e: Expect): Record<Role, number> {
+  const refused = NO_TOKEN_CHECK.has(key) ? e.anonymous : 401;
+  const working = (status: number) => (SESSION_ONLY.has(key) ? 403 : status);
+  return {
+    ...e,
+    readToken: working(e.viewer),
+    writeToken: working(e.editor),
+    otherWorkspaceToken: working(e.outsider),
+    revokedToken: refused,
+    expiredToken: refused,
+  };
+}
 
 const open = (ok: number): Expect => ({ anonymous: ok, outsider: ok, admin: ok, viewer: ok, editor: ok, owner: ok });
 const signedIn = (ok: number): Expect => ({ anonymous: 401, outsider: ok, admin: ok, viewer: ok, editor: ok, owner: ok });
@@ -30,7 +58,8 @@ interface Fixture {
   profileId: string;
   measurementId: string;
   shareToken: string;
-  users: Record<Exclude<Role, 'anonymous'>, { id: string; email: string }>;
+  users: Record<Exclude<SessionRole, 'anonymous'>, { id: string; email: string }>;
+  ownerTokenId: string;
   clients: Record<Role, Client>;
 }
 
@@ -74,10 +103,10 @@ const profileBody = (f: Fixture) => {
   return { ...fields, name: 'Matrix profile (invented)', workspaceId: f.workspaceId };
 };
 function documentedExample(routePath: string): Call {
-  const doc = API_DOCS.find((r) => r.method === 'POST' && r.path === routePath);
-  const example = doc?.examples.find((e) => e.status === 200);
+  const op = API_OPERATIONS.find((o) => o.method === 'POST' && o.path === routePath);
+  const example = op?.examples.find((e) => e.status === 200);
   if (!example) throw new Error(`the API page has no working example for POST ${routePath}`);
-  return { path: routePath, body: example.request };
+  return { path: routePath, body: example.body };
 }
 
 const MATRIX: Record<string, { expect: Expect; build: Builder }> = {
@@ -88,6 +117,13 @@ const MATRIX: Record<string, { expect: Expect; build: Builder }> = {
   'POST /api/v1/auth/password-reset/confirm': { expect: open(400), build: () => ({ path: '/api/v1/auth/password-reset/confirm', body: { token: 'x'.repeat(43), password: 'a-long-password-1' } }) },
   'GET /api/v1/invitations/[token]': { expect: open(404), build: () => ({ path: `/api/v1/invitations/${'y'.repeat(43)}` }) },
   'POST /api/v1/invitations/[token]': { expect: signedIn(404), build: () => ({ path: `/api/v1/invitations/${'y'.repeat(43)}` }) },
+  'GET /api/v1/tokens': { expect: signedIn(200), build: () => ({ path: '/api/v1/tokens' }) },
+  // Any member may make a token for the workspace (a viewer a read one); the others are not in it.
+  'POST /api/v1/tokens': { expect: read(201), build: (f) => ({ path: '/api/v1/tokens', body: { name: 'Matrix token', workspaceId: f.workspaceId, scope: 'read', expiresInDays: 1 } }) },
+  // The owner's own token: only the owner may revoke it; to anyone else it does not exist.
+  'DELETE /api/v1/tokens/[id]': { expect: { anonymous: 401, outsider: 404, admin: 404, viewer: 404, editor: 404, owner: 200 }, build: (f) => ({ path: `/api/v1/tokens/${f.ownerTokenId}` }) },
+
+  'GET /api/v1/openapi.json': { expect: open(200), build: () => ({ path: '/api/v1/openapi.json' }) },
 
   // Compute routes: open to everyone; the body is the API page's own working example.
   'POST /api/v1/blend': { expect: open(200), build: () => documentedExample('/api/v1/blend') },
@@ -251,6 +287,32 @@ describe('access matrix over every route', () => {
     fixture.clients = clients;
     const ws = await clients.owner.post('/api/v1/workspaces', { name: 'Matrix workspace' });
     fixture.workspaceId = ws.body.id;
+    // The owner's tokens, made on the API as the Account page makes them.
+    const token = async (scope: 'read' | 'write', workspaceId = fixture.workspaceId) => {
+      const res = await clients.owner.post('/api/v1/tokens', { name: `Matrix ${scope} token`, workspaceId, scope });
+      if (res.status !== 201) throw new Error(`fixture: token ${res.status} ${res.text}`);
+      return res.body as { id: string; token: string };
+    };
+    const bearer = (t: { token: string }) => new Client({ Authorization: `Bearer ${t.token}` });
+    const personal = (await clients.owner.get('/api/v1/workspaces')).body.items.find((w: { personal: boolean }) => w.personal).id as string;
+    const [readToken, writeToken, otherToken, revokedToken, expiredToken, revocable] = [
+      await token('read'),
+      await token('write'),
+      await token('write', personal),
+      await token('write'),
+      await token('write'),
+      await token('read'),
+    ];
+    await clients.owner.delete(`/api/v1/tokens/${revokedToken.id}`);
+    await (await testDb()).query("UPDATE access_tokens SET expires_at = now() - interval '1 second' WHERE id = :id", { replacements: { id: expiredToken.id } });
+    fixture.ownerTokenId = revocable.id;
+    Object.assign(clients, {
+      readToken: bearer(readToken),
+      writeToken: bearer(writeToken),
+      otherWorkspaceToken: bearer(otherToken),
+      revokedToken: bearer(revokedToken),
+      expiredToken: bearer(expiredToken),
+    });
     await addMember(fixture.workspaceId, users.editor.id, 'editor');
     await addMember(fixture.workspaceId, users.viewer.id, 'viewer');
     fixture.systemId = (await freshSystem(fixture)).id;
@@ -270,7 +332,8 @@ describe('access matrix over every route', () => {
   });
 
   for (const [key, entry] of Object.entries(MATRIX)) {
-    it(`${key}: ${ROLES.map((r) => `${r} ${entry.expect[r]}`).join(', ')}`, async () => {
+    const expected = withTokens(key, entry.expect);
+    it(`${key}: ${ROLES.map((r) => `${r} ${expected[r]}`).join(', ')}`, async () => {
       const [method] = key.split(' ') as [string];
       const got: Partial<Record<Role, number>> = {};
       for (const role of ROLES) {
@@ -279,7 +342,7 @@ describe('access matrix over every route', () => {
         got[role] = res.status;
         if (res.status >= 400) expect(res.body?.error?.message, `${key} as ${role}: an error answer has a message`).toBeTypeOf('string');
       }
-      expect(got).toEqual(entry.expect);
-    }, 60_000);
+      expect(got).toEqual(expected);
+    }, 90_000);
   }
 });

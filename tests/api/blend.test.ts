@@ -17,7 +17,7 @@ const path = (response: 'highpass' | 'lowpass' | 'none', family: 'butterworth' |
 
 const body = (paths: Json[], extra: Json = {}) => ({ temperatureC: 20, grid: { startHz: 10, stopHz: 1000, pointsPerOctave: 48 }, paths, ...extra });
 
-/** The API page's own example request (lib/api-docs/compute-blend.ts). */
+/** The API page's own example request (lib/openapi/operations, shown on /docs/api). */
 const specExample = body([
   path('highpass', 'linkwitz-riley', 4),
   { name: 'sub', filter: { family: 'butterworth', order: 2, response: 'lowpass', cornerHz: 80 }, gainDb: 0, delayMs: 2.5, invert: true, distanceM: 3.4 },

@@ -2,8 +2,9 @@ import { appendFileSync } from 'node:fs';
 import fc from 'fast-check';
 import type { z } from 'zod';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { API_DOCS } from '@/lib/api-docs';
+import { API_OPERATIONS } from '@/lib/openapi/operations';
 import { addMember } from '@/lib/data/workspaces';
+import { accessTokenCreateSchema } from '@/lib/validations/access-token';
 import { demoProfile } from '@/lib/demo/profiles';
 import { juniperLaneDocument } from '@/lib/demo/systems';
 import { isTextMediaType, MAX_MEASUREMENT_BYTES, parseMeasurementBytes } from '@/lib/measurements/parse-measurement';
@@ -85,10 +86,10 @@ interface JsonRoute {
 
 const KB = 1024;
 const documented = (routePath: string) => () => {
-  const doc = API_DOCS.find((r) => r.method === 'POST' && r.path === routePath);
-  const example = doc?.examples.find((e) => e.status === 200);
+  const op = API_OPERATIONS.find((o) => o.method === 'POST' && o.path === routePath);
+  const example = op?.examples.find((e) => e.status === 200);
   if (!example) throw new Error(`the API page has no working example for POST ${routePath}`);
-  return structuredClone(example.request);
+  return structuredClone(example.body);
 };
 const compute = (p: string, schema: z.ZodType, limitBytes = 256 * KB): JsonRoute => ({
   method: 'POST',
@@ -125,6 +126,7 @@ const JSON_ROUTES: JsonRoute[] = [
   compute('/api/v1/processor-filters', processorFiltersRequestSchema),
   compute('/api/v1/eq-design', eqDesignCurveRequestSchema.or(eqDesignModelRequestSchema).or(eqDesignMeasuredRequestSchema)),
 
+  { method: 'POST', route: '/api/v1/tokens', path: () => '/api/v1/tokens', schema: accessTokenCreateSchema, limitBytes: 16 * KB, session: true, template: (f) => ({ name: `Token ${MARK}`, workspaceId: f.workspaceId, scope: 'read', expiresInDays: 30 }) },
   { method: 'POST', route: '/api/v1/workspaces', path: () => '/api/v1/workspaces', schema: workspaceCreateSchema, limitBytes: 16 * KB, session: true, template: () => ({ name: `Workspace ${MARK}` }) },
   { method: 'PATCH', route: '/api/v1/workspaces/[id]', path: (f) => `/api/v1/workspaces/${f.workspaceId}`, schema: workspaceCreateSchema, limitBytes: 16 * KB, session: true, template: () => ({ name: `Workspace ${MARK}` }) },
   { method: 'POST', route: '/api/v1/workspaces/[id]/invitations', path: (f) => `/api/v1/workspaces/${f.workspaceId}/invitations`, schema: invitationCreateSchema, limitBytes: 16 * KB, session: true, template: () => ({ email: `${MARK}-invited@example.test`, role: 'viewer' }) },

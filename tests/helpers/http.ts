@@ -7,6 +7,9 @@ type Json = any;
 export class Client {
   private cookies = new Map<string, string>();
 
+  /** `headers` go with every request (e.g. `{ Authorization: 'Bearer slp_…' }` for a program with a token). */
+  constructor(private readonly defaultHeaders: Record<string, string> = {}) {}
+
   private cookieHeader() {
     return [...this.cookies.entries()].map(([k, v]) => `${k}=${v}`).join('; ');
   }
@@ -30,6 +33,7 @@ export class Client {
       headers: {
         ...(body !== undefined && !isForm && typeof body !== 'string' ? { 'Content-Type': 'application/json' } : {}),
         ...(this.cookies.size ? { Cookie: this.cookieHeader() } : {}),
+        ...this.defaultHeaders,
         ...headers,
       },
       body: body === undefined ? undefined : isForm || typeof body === 'string' ? (body as BodyInit) : JSON.stringify(body),

@@ -61,3 +61,18 @@ describe('roundAllTo and roundAllToSignificant: every entry, plain arrays out', 
     expect(roundAllToSignificant([26.8134, 0.0123456], 3)).toEqual([26.8, 0.0123]);
   });
 });
+
+describe('roundAllTo: the same numbers as roundTo, entry by entry', () => {
+  // Oracle: roundTo itself (hand-checked above), applied one value at a time; the array form only computes the
+  // scale once and fills a plain array, so every entry, −0 and the non-finite ones included, must be identical.
+  it('property: a Float64Array or a plain array, any decimals 0–6, including −0, NaN and ±Infinity', () => {
+    const value = fc.oneof(fc.double({ min: -1e7, max: 1e7 }), fc.constantFrom(-0, Number.NaN, Infinity, -Infinity, 0.0005, -0.0005, 2.5, -2.5));
+    fc.assert(
+      fc.property(fc.array(value, { maxLength: 40 }), fc.integer({ min: 0, max: 6 }), fc.boolean(), (values, d, typed) => {
+        const out = roundAllTo(typed ? Float64Array.from(values) : values, d);
+        expect(out).toHaveLength(values.length);
+        out.forEach((r, i) => expect(Object.is(r, roundTo(values[i] as number, d))).toBe(true));
+      }),
+    );
+  });
+});

@@ -1,6 +1,6 @@
 import { notFound } from 'next/navigation';
 import { AppHeader } from '@/components/shell/app-header';
-import { getCaller } from '@/lib/auth';
+import { getSessionCaller } from '@/lib/auth';
 import { listDevMessages } from '@/lib/data/dev-mail';
 import { devMailboxAllowed } from '@/lib/dev-mailbox';
 
@@ -8,7 +8,7 @@ export const dynamic = 'force-dynamic';
 export const metadata = { title: 'Dev mailbox' };
 
 export default async function DevMailboxPage() {
-  if (!devMailboxAllowed(await getCaller())) notFound();
+  if (!devMailboxAllowed(await getSessionCaller())) notFound();
   const messages = await listDevMessages();
   return (
     <>

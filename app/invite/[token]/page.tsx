@@ -2,7 +2,7 @@ import Link from 'next/link';
 import { AcceptInvitation } from '@/components/team/accept-invitation';
 import { Wordmark } from '@/components/ui/mark';
 import { Notice } from '@/components/ui/notice';
-import { getCaller } from '@/lib/auth';
+import { getSessionCaller } from '@/lib/auth';
 import { previewInvitation } from '@/lib/data/invitations';
 import { AppError } from '@/lib/errors';
 
@@ -10,7 +10,7 @@ export const metadata = { title: 'Invitation' };
 
 export default async function InvitePage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
-  const caller = await getCaller();
+  const caller = await getSessionCaller();
   let preview: Awaited<ReturnType<typeof previewInvitation>> | null = null;
   let problem: string | null = null;
   try {

@@ -5,7 +5,7 @@ import { SharedPanels } from '@/components/share/shared-panels';
 import { SettingsSheet } from '@/components/sheet/settings-sheet';
 import { SheetToolbar } from '@/components/sheet/sheet-toolbar';
 import { Wordmark } from '@/components/ui/mark';
-import { getCaller } from '@/lib/auth';
+import { getSessionCaller } from '@/lib/auth';
 import { SharedLesson } from '@/components/lessons/shared-lesson';
 import { getLessonByShareToken, getSharedMeasurements, getSharedSystem } from '@/lib/data/share-links';
 import { listWorkspaces } from '@/lib/data/workspaces';
@@ -22,7 +22,7 @@ export default async function SharedPage({ params }: { params: Promise<{ token: 
     if (!lesson) notFound();
     return <SharedLesson lesson={lesson} />;
   }
-  const [caller, measurements] = await Promise.all([getCaller(), getSharedMeasurements(token)]);
+  const [caller, measurements] = await Promise.all([getSessionCaller(), getSharedMeasurements(token)]);
   const writable = caller ? (await listWorkspaces(caller)).filter((w) => w.role !== 'viewer').map((w) => ({ id: w.id, name: w.name })) : [];
 
   return (

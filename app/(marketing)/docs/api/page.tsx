@@ -1,99 +1,82 @@
-import { API_DOCS, type ApiField } from '@/lib/api-docs';
+import { FieldTable } from '@/components/docs/field-table';
+import { OperationSection, operationTables } from '@/components/docs/operation-section';
+import { RichText } from '@/components/docs/rich-text';
+import { operationsByTag, RouteIndex, tagAnchor } from '@/components/docs/route-index';
+import { fieldRows, linkedSchemas } from '@/components/docs/schema-fields';
+import { SchemaSection } from '@/components/docs/schema-section';
+import { ACCESS_AND_LIMITS_TEXT } from '@/lib/openapi/access-and-limits';
+import { openApiDocument } from '@/lib/openapi/document';
 
 export const metadata = { title: 'API' };
 
-function FieldTable({ fields, caption }: { fields: ApiField[]; caption: string }) {
-  if (!fields.length) return null;
-  return (
-    <div className="mt-3 relative overflow-x-auto rounded-md border border-line bg-white">
-      <table className="w-full text-left text-sm">
-        <caption className="px-3 py-2 text-left text-xs font-semibold uppercase tracking-wide text-ink-faint">{caption}</caption>
-        <thead className="border-y border-line bg-shade text-xs text-ink-faint">
-          <tr>
-            <th className="px-3 py-1.5">Field</th>
-            <th className="px-3 py-1.5">Type</th>
-            <th className="px-3 py-1.5">Unit</th>
-            <th className="px-3 py-1.5">Description</th>
-          </tr>
-        </thead>
-        <tbody>
-          {fields.map((f) => (
-            <tr key={f.name} className="border-b border-line last:border-0 align-top">
-              <td className="num px-3 py-1.5 whitespace-nowrap">
-                {f.name}
-                {f.required ? <span className="ml-1 text-fail" title="required">*</span> : null}
-              </td>
-              <td className="num px-3 py-1.5 text-ink-soft">{f.type}</td>
-              <td className="px-3 py-1.5 text-ink-soft">{f.unit ?? ''}</td>
-              <td className="px-3 py-1.5">{f.description}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
-  );
-}
+const DOCUMENT_PATH = '/api/v1/openapi.json';
+const ERROR_EXAMPLE = {
+  error: { code: 'invalid', message: 'paths.1.filter.order: Linkwitz–Riley order must be 2, 4 or 8', issues: [{ path: 'paths.1.filter.order', message: 'Linkwitz–Riley order must be 2, 4 or 8' }] },
+};
 
-const pretty = (v: unknown) => JSON.stringify(v, null, 2);
-
+/** The API page: everything on it is read from the OpenAPI document the app serves at /api/v1/openapi.json. */
 export default function ApiDocsPage() {
+  const doc = openApiDocument();
+  const components = doc.components.schemas;
+  const groups = operationsByTag(doc);
+  const errorRows = fieldRows({ $ref: '#/components/schemas/ErrorBody' }, components);
+  const tables = Object.values(doc.paths).flatMap((item) => Object.values(item).flatMap((op) => operationTables(op!, components).map((t) => t.rows)));
+  const shared = linkedSchemas([...tables, errorRows], components);
   return (
     <div className="mx-auto max-w-5xl px-4 py-8">
       <h1 className="text-3xl font-semibold">Seamline API</h1>
       <p className="mt-2 text-ink-soft">
-        JSON over HTTP under <code className="num">/api/v1/</code>. Every body is validated; SI units everywhere, with the unit in each field&apos;s name. Compute routes work
-        without signing in; Library routes need a session (the sign-in cookie). Bodies over 256 kB are refused.
+        JSON over HTTP under <code className="num">/api/v1/</code>. Every body is validated; SI units everywhere, with the unit in each field&apos;s name. The whole API is
+        described as an OpenAPI 3.1 document at{' '}
+        <a href={DOCUMENT_PATH} className="num text-mains underline">
+          {DOCUMENT_PATH}
+        </a>{' '}
+        (this page is rendered from it): feed it to a client generator for typed calls.
       </p>
-      <section className="mt-6 rounded-lg border border-line bg-white p-4">
-        <h2 className="text-lg font-semibold">Errors</h2>
-        <p className="mt-1 text-sm">
-          Every error has the same shape, with the status 400 (invalid), 401 (sign in), 403 (your role does not allow it), 404 (not found, also for what you may not see), 409
-          (revision conflict), 413 (too large), 415 (not JSON), 429 (too many attempts) or 503 (database unavailable; retry).
-        </p>
-        <pre tabIndex={0} className="num mt-2 overflow-x-auto rounded bg-shade p-3 text-xs">
-          {pretty({ error: { code: 'invalid', message: 'paths.1.filter.order: Linkwitz–Riley order must be 2, 4 or 8', issues: [{ path: 'paths.1.filter.order', message: 'Linkwitz–Riley order must be 2, 4 or 8' }] } })}
-        </pre>
+      <section id="access" className="mt-6 rounded-lg border border-line bg-white p-4">
+        <h2 className="text-lg font-semibold">Access tokens and limits</h2>
+        {ACCESS_AND_LIMITS_TEXT.map((p) => (
+          <p key={p} className="mt-1 text-sm">
+            <RichText text={p} />
+          </p>
+        ))}
       </section>
-      <nav aria-label="Routes" className="mt-6">
-        <ul className="flex flex-wrap gap-2 text-sm">
-          {API_DOCS.map((r) => (
-            <li key={r.id}>
-              <a href={`#${r.id}`} className="num rounded border border-line bg-white px-2 py-1 wrap-anywhere hover:bg-wash">
-                {r.method} {r.path}
-              </a>
+      <section id="errors" className="mt-6 rounded-lg border border-line bg-white p-4">
+        <h2 className="text-lg font-semibold">Errors</h2>
+        <p className="mt-1 text-sm">Every error has the same shape (ErrorBody); a 500 is a bug on our side.</p>
+        <ul className="mt-1 text-sm">
+          {Object.entries(doc.components.responses).map(([name, r]) => (
+            <li key={name}>
+              <span className="font-semibold">{name}</span>: {r.description}
             </li>
           ))}
         </ul>
-      </nav>
-      {API_DOCS.map((r) => (
-        <section key={r.id} id={r.id} className="mt-8 scroll-mt-4" data-testid="api-route">
-          <h2 className="num text-xl font-semibold wrap-anywhere">
-            <span className="mr-2 rounded bg-ink px-2 py-0.5 text-sm text-white">{r.method}</span>
-            {r.path}
-          </h2>
-          <p className="mt-1">{r.summary}</p>
-          <p className="mt-1 text-sm text-ink-faint">{r.auth === 'none' ? 'No sign-in needed.' : 'Needs a signed-in session.'}</p>
-          {r.notes?.map((n) => (
-            <p key={n} className="mt-1 text-sm text-ink-soft">
-              {n}
-            </p>
-          ))}
-          <FieldTable fields={r.fields} caption="Request fields" />
-          <FieldTable fields={r.answer} caption="Answer fields" />
-          {r.examples.map((ex) => (
-            <div key={ex.title} className="mt-3 grid grid-cols-1 gap-3 md:grid-cols-2">
-              <div>
-                <h3 className="text-sm font-semibold">Example: {ex.title}</h3>
-                <pre tabIndex={0} className="num mt-1 max-h-96 overflow-auto rounded border border-line bg-white p-3 text-xs">{pretty(ex.request)}</pre>
-              </div>
-              <div>
-                <h3 className="text-sm font-semibold">Answer ({ex.status}), excerpt</h3>
-                <pre tabIndex={0} className="num mt-1 max-h-96 overflow-auto rounded border border-line bg-white p-3 text-xs">{pretty(ex.responseExcerpt)}</pre>
-              </div>
-            </div>
-          ))}
-        </section>
+        <FieldTable caption="ErrorBody fields" rows={errorRows} />
+        <pre tabIndex={0} aria-label="An error answer" className="num mt-2 overflow-x-auto rounded bg-shade p-3 text-xs">
+          {JSON.stringify(ERROR_EXAMPLE, null, 2)}
+        </pre>
+      </section>
+      <RouteIndex groups={groups} />
+      {groups.map((g) => (
+        <div key={g.tag} id={tagAnchor(g.tag)} className="mt-10 scroll-mt-4">
+          <h2 className="border-b border-line pb-1 text-2xl font-semibold">{g.tag}</h2>
+          {g.description ? <p className="mt-1 text-ink-soft">{g.description}</p> : null}
+          {g.operations.map((o) => {
+            const op = doc.paths[o.path]?.[o.method as 'get'];
+            return op ? <OperationSection key={o.id} method={o.method} path={o.path} op={op} components={components} /> : null;
+          })}
+        </div>
       ))}
+      <div id="schemas" className="mt-10">
+        <h2 className="border-b border-line pb-1 text-2xl font-semibold">Shared schemas</h2>
+        <p className="mt-1 text-ink-soft">
+          Parts of several requests and answers, written out once; the tables above link here. A name ending in Output is the form the app sends back, with every default
+          filled in.
+        </p>
+        {shared.map((name) => (
+          <SchemaSection key={name} name={name} components={components} />
+        ))}
+      </div>
     </div>
   );
 }

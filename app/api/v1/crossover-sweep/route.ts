@@ -5,7 +5,7 @@ import { crossoverSweepRequestSchema } from '@/lib/validations/compute-blend';
 
 /**
  * POST /api/v1/crossover-sweep — candidate crossover points for the pairings, ranked, on the model or on measured
- * curves (a source's `measured`: a stored measurement's id or the points); fields in lib/api-docs/compute-blend.ts.
+ * curves (a source's `measured`: a stored measurement's id or the points); fields in lib/openapi/operations (the API page /docs/api).
  */
 export const POST = route(async (request) => {
   const input = await parseJson(request, crossoverSweepRequestSchema, BODY_LIMIT_BYTES.measuredCurves);

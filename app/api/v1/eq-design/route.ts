@@ -8,7 +8,7 @@ import { computeMeasuredEqDesign } from '@/lib/system-model/eq-design-measured';
 import { eqDesignCurveRequestSchema, eqDesignMeasuredRequestSchema, eqDesignModelRequestSchema } from '@/lib/validations/compute-eq-design';
 
 /**
- * POST /api/v1/eq-design — documented in lib/api-docs/compute-eq-design.ts. An inline curve (`frequencyHz`) or the
+ * POST /api/v1/eq-design — documented in lib/openapi/operations (the API page /docs/api). An inline curve (`frequencyHz`) or the
  * modal model (`room`) needs no sign-in; a body with `measurements` reads them with the caller's workspace rights.
  */
 export const POST = route(async (request) => {

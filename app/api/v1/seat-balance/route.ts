@@ -7,7 +7,7 @@ import { computeMeasuredSeatBalance, computeSeatBalance } from '@/lib/system-mod
 import { seatBalanceMeasuredRequestSchema, seatBalanceModelRequestSchema } from '@/lib/validations/compute-seat-balance';
 
 /**
- * POST /api/v1/seat-balance — documented in lib/api-docs/compute-seat-balance.ts. The modal model needs no sign-in;
+ * POST /api/v1/seat-balance — documented in lib/openapi/operations (the API page /docs/api). The modal model needs no sign-in;
  * a body with `measurements` reads them with the caller's workspace rights.
  */
 export const POST = route(async (request) => {

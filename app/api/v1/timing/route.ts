@@ -6,7 +6,7 @@ import { timingRequestSchema } from '@/lib/validations/compute-blend';
 /**
  * POST /api/v1/timing — arrival times, phase at the crossover, recommended delay and polarity, Timing window, on the
  * model or on measured curves (a source's `measured`: a stored measurement's id or the points); fields in
- * lib/api-docs/compute-blend.ts.
+ * lib/openapi/operations (the API page /docs/api).
  */
 export const POST = route(async (request) => {
   const input = await parseJson(request, timingRequestSchema, BODY_LIMIT_BYTES.measuredCurves);

@@ -1,3 +1,0 @@
-import type { ApiRouteDoc } from './types';
-
-export const AUTH_DOCS: ApiRouteDoc[] = [];

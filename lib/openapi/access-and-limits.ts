@@ -1,0 +1,8 @@
+import { DEFAULT_API_LIMITS } from '@/lib/api-limits';
+
+/** "Access tokens and limits": the one text the API page and the OpenAPI document's description show. Edit it here. */
+export const ACCESS_AND_LIMITS_TEXT: readonly string[] = [
+  'Compute routes need no sign-in. Library routes (Systems, Speaker profiles, measurements, Lessons, Workspaces) take a signed-in browser session or a personal access token sent as `Authorization: Bearer <token>`.',
+  'An access token is made on the Account page. Each reaches one workspace and is either read (it acts as a viewer) or write (it acts with its owner’s role there, capped at editor: never an owner’s actions such as members or renaming). It never reaches another workspace (404 there), and making workspaces, accepting invitations and managing tokens take a browser session only (403 with a token). Keep it secret like a password; revoke it on the Account page when a program no longer needs it — its next request is 401. A mistyped, unknown, revoked or expired token is 401 on every route, with one message for all four.',
+  `Requests are limited per caller: a token is one caller wherever it calls from; anyone else is counted by client address. By default ${DEFAULT_API_LIMITS.computePerMinute} requests a minute on the compute routes and ${DEFAULT_API_LIMITS.libraryPerMinute} a minute on every other route (an installation may set other figures: SEAMLINE_LIMIT_COMPUTE_PER_MIN, SEAMLINE_LIMIT_LIBRARY_PER_MIN). The counts are kept in the database, so they hold across app instances. Over a limit: 429 with a \`Retry-After\` header (seconds to wait) and the same number in \`error.retryAfterS\`; wait that long before trying again.`,
+];

@@ -1,0 +1,162 @@
+import { BODY_LIMIT_BYTES } from '@/lib/http';
+import { lessonAnswerSchema, lessonListAnswerSchema } from '@/lib/openapi/answers/lessons';
+import { deletedAnswerSchema } from '@/lib/openapi/answers/library-parts';
+import { lessonCreateSchema, lessonListQuerySchema, lessonUpdateSchema, revisionQuerySchema, stepCreateSchema, stepReorderSchema, stepUpdateSchema } from '@/lib/validations/lesson';
+import type { ApiOperation } from '../types';
+import { ACCESS_NOTE, BODILESS_WRITE_ERRORS, EXAMPLE, lessonParams, lessonStepParams, QUERY_READ_ERRORS, READ_ERRORS, REVISION_NOTE, REVISION_WRITE_ERRORS, WRITE_ERRORS } from './library-common';
+
+/** Lessons and their Steps: list, create, read, save, delete; add, change, remove and reorder Steps. */
+
+const ID = EXAMPLE.lesson;
+const lesson = (description: string, status = 200) => ({ status, description, schema: lessonAnswerSchema });
+const EVERY_WRITE = 'Every write of the Lesson or of a Step adds one to the Lesson’s revision and answers the whole Lesson with its Steps in order.';
+
+export const LESSONS_OPERATIONS: ApiOperation[] = [
+  {
+    id: 'lessons-list',
+    method: 'GET',
+    path: '/api/v1/lessons',
+    tag: 'Lessons',
+    summary: 'The caller’s Lessons across their workspaces, newest change first (?workspaceId= for one workspace).',
+    access: 'member',
+    query: lessonListQuerySchema,
+    answers: [{ status: 200, description: 'The Lessons, without their Steps (with stepCount).', schema: lessonListAnswerSchema }],
+    errors: QUERY_READ_ERRORS,
+    examples: [{ title: 'All my Lessons', status: 200, responseExcerpt: { items: [{ id: ID, title: 'Why the sub and mains cancel', revision: 1, stepCount: 8, role: 'owner' }] } }],
+  },
+  {
+    id: 'lessons-create',
+    method: 'POST',
+    path: '/api/v1/lessons',
+    tag: 'Lessons',
+    summary: 'Creates a Lesson (editors and owners of the workspace; default: the caller’s own workspace).',
+    notes: [ACCESS_NOTE],
+    access: 'member',
+    body: { schema: lessonCreateSchema, limitBytes: BODY_LIMIT_BYTES.form },
+    answers: [lesson('The new Lesson, revision 1, without Steps.', 201)],
+    errors: WRITE_ERRORS,
+    examples: [{ title: 'A new Lesson', body: { title: 'Slopes and polarity (invented)' }, status: 201, responseExcerpt: { id: ID, title: 'Slopes and polarity (invented)', revision: 1, steps: [] } }],
+  },
+  {
+    id: 'lessons-get',
+    method: 'GET',
+    path: '/api/v1/lessons/{id}',
+    tag: 'Lessons',
+    summary: 'One Lesson with its Steps in order (viewers and up).',
+    notes: [ACCESS_NOTE],
+    access: 'member',
+    pathParams: lessonParams,
+    answers: [lesson('The Lesson.')],
+    errors: READ_ERRORS,
+    examples: [
+      {
+        title: 'The demo Lesson',
+        pathParams: { id: ID },
+        status: 200,
+        responseExcerpt: { id: ID, revision: 1, steps: [{ id: EXAMPLE.step, position: 1, title: 'LR4: the two halves sum flat', panel: 'blend', sweep: null }] },
+      },
+    ],
+  },
+  {
+    id: 'lessons-update',
+    method: 'PUT',
+    path: '/api/v1/lessons/{id}',
+    tag: 'Lessons',
+    summary: 'Saves the title and description, naming the revision it started from.',
+    notes: [REVISION_NOTE, ACCESS_NOTE],
+    access: 'member',
+    pathParams: lessonParams,
+    body: { schema: lessonUpdateSchema, limitBytes: BODY_LIMIT_BYTES.form },
+    answers: [lesson('The Lesson at its new revision.')],
+    errors: REVISION_WRITE_ERRORS,
+    examples: [{ title: 'Rename', pathParams: { id: ID }, body: { title: 'Summation, part 1', description: '', revision: 3 }, status: 200, responseExcerpt: { revision: 4, title: 'Summation, part 1' } }],
+  },
+  {
+    id: 'lessons-delete',
+    method: 'DELETE',
+    path: '/api/v1/lessons/{id}',
+    tag: 'Lessons',
+    summary: 'Deletes a Lesson (editors and owners); its student links stop answering.',
+    notes: [ACCESS_NOTE],
+    access: 'member',
+    pathParams: lessonParams,
+    answers: [{ status: 200, description: 'Deleted.', schema: deletedAnswerSchema }],
+    errors: BODILESS_WRITE_ERRORS,
+    examples: [{ title: 'Delete', pathParams: { id: ID }, status: 200, responseExcerpt: { id: ID, deleted: true } }],
+  },
+  {
+    id: 'lessons-step-add',
+    method: 'POST',
+    path: '/api/v1/lessons/{id}/steps',
+    tag: 'Lessons',
+    summary: 'Adds a Step: a copy of a System document (or of a saved System’s current document) with title, talking points, panel, traces and an optional sweep.',
+    notes: ['A Lesson holds at most 200 Steps.', EVERY_WRITE, REVISION_NOTE, ACCESS_NOTE],
+    access: 'member',
+    pathParams: lessonParams,
+    body: { schema: stepCreateSchema, limitBytes: BODY_LIMIT_BYTES.standard },
+    answers: [lesson('The Lesson with the new Step.', 201)],
+    errors: REVISION_WRITE_ERRORS,
+    examples: [
+      {
+        title: 'A Step with a crossover sweep',
+        pathParams: { id: ID },
+        body: {
+          step: {
+            title: 'Crossover 60 → 120 Hz',
+            points: '- Where is the sum **flattest**?',
+            panel: 'blend',
+            traces: ['mains', 'subs', 'sum'],
+            sweep: { parameter: 'crossoverHz', from: 60, to: 120, durationS: 8 },
+            fromSystemId: EXAMPLE.system,
+          },
+        },
+        status: 201,
+        responseExcerpt: { revision: 2, steps: [{ position: 1, title: 'Crossover 60 → 120 Hz', sweep: { parameter: 'crossoverHz', from: 60, to: 120, durationS: 8 } }] },
+      },
+    ],
+  },
+  {
+    id: 'lessons-step-update',
+    method: 'PUT',
+    path: '/api/v1/lessons/{id}/steps/{stepId}',
+    tag: 'Lessons',
+    summary: 'Changes some of a Step’s fields, naming the Lesson revision it started from.',
+    notes: [EVERY_WRITE, REVISION_NOTE, ACCESS_NOTE],
+    access: 'member',
+    pathParams: lessonStepParams,
+    body: { schema: stepUpdateSchema, limitBytes: BODY_LIMIT_BYTES.standard },
+    answers: [lesson('The Lesson with the changed Step.')],
+    errors: REVISION_WRITE_ERRORS,
+    examples: [{ title: 'New talking points', pathParams: { id: ID, stepId: EXAMPLE.step }, body: { revision: 4, step: { points: 'Each half is **−6 dB** at the crossover.' } }, status: 200, responseExcerpt: { revision: 5 } }],
+  },
+  {
+    id: 'lessons-step-delete',
+    method: 'DELETE',
+    path: '/api/v1/lessons/{id}/steps/{stepId}',
+    tag: 'Lessons',
+    summary: 'Removes a Step (?revision= the Lesson revision you last read); the others close up (positions stay 1…n).',
+    notes: [EVERY_WRITE, REVISION_NOTE, ACCESS_NOTE],
+    access: 'member',
+    pathParams: lessonStepParams,
+    query: revisionQuerySchema,
+    answers: [lesson('The Lesson without the Step.')],
+    errors: [400, 401, 403, 404, 409, 429, 503],
+    examples: [{ title: 'Delete a Step', pathParams: { id: ID, stepId: EXAMPLE.step }, query: '?revision=6', status: 200, responseExcerpt: { revision: 7, steps: [] } }],
+  },
+  {
+    id: 'lessons-step-reorder',
+    method: 'POST',
+    path: '/api/v1/lessons/{id}/steps/reorder',
+    tag: 'Lessons',
+    summary: 'Puts the Steps in a new order: every Step id exactly once, in the order wanted.',
+    notes: [EVERY_WRITE, REVISION_NOTE, ACCESS_NOTE],
+    access: 'member',
+    pathParams: lessonParams,
+    body: { schema: stepReorderSchema, limitBytes: BODY_LIMIT_BYTES.stepOrder },
+    answers: [lesson('The Lesson with its Steps in the new order.')],
+    errors: REVISION_WRITE_ERRORS,
+    examples: [
+      { title: 'Swap two Steps', pathParams: { id: ID }, body: { revision: 6, stepIds: [EXAMPLE.otherStep, EXAMPLE.step] }, status: 200, responseExcerpt: { revision: 7, steps: [{ id: EXAMPLE.otherStep, position: 1 }] } },
+    ],
+  },
+];
