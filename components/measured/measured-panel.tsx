@@ -17,8 +17,8 @@ import { MeasurementUpload, type LocalCurve } from './measurement-upload';
 import { OverlayPlot } from './overlay-plot';
 import { MeasuredTime } from './measured-time';
 import { PredictedBlend } from './predicted-blend';
+import { SmoothingSelect } from './smoothing-select';
 
-export const SMOOTHING_CHOICES = [0, 1, 2, 3, 6, 12, 24, 48] as const;
 
 const SYSTEM_PATH = /^\/systems\/([0-9a-f-]{36})(?:\/|$)/i;
 
@@ -120,21 +120,7 @@ export function MeasuredPanel({ shared }: { shared?: { items: SharedMeasurement[
             Each sub&apos;s processor EQ is applied too; the speakers&apos; voicing switches are not, since they were already set in the speakers when you measured.
           </p>
         </div>
-        <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
-          Smoothing
-          <select
-            value={smoothing}
-            onChange={(e) => setSmoothing(Number(e.target.value))}
-            className="rounded-md border border-line bg-white px-2 py-1.5 text-sm text-ink"
-            data-testid="measured-smoothing"
-          >
-            {SMOOTHING_CHOICES.map((n) => (
-              <option key={n} value={n}>
-                {n === 0 ? 'None' : `1/${n} octave`}
-              </option>
-            ))}
-          </select>
-        </label>
+        <SmoothingSelect value={smoothing} onChange={setSmoothing} testId="measured-smoothing" />
       </div>
 
       {shared ? (

@@ -7,6 +7,7 @@ import { NumberField } from '@/components/ui/number-field';
 import { useCompute } from '@/lib/hooks/use-compute';
 import type { CompareAnswer } from '@/lib/system-model/measured-compare';
 import { runCaption, type RunItem } from './run-grid';
+import { SmoothingSelect } from './smoothing-select';
 
 /** A run as the compare route takes it: a stored id, or the points of a curve used on this page only. */
 export type RunCurveBody = { measurementId: string } | { frequencyHz: readonly number[]; magnitudeDb: readonly number[]; phaseDeg?: readonly number[] | null };
@@ -17,7 +18,6 @@ interface Props {
 }
 
 /** None, then finest to coarsest: 1/48 … 1/1 octave. */
-const SMOOTHING = [0, 48, 24, 12, 6, 3, 2, 1] as const;
 const DEFAULT_BAND = { startHz: 200, stopHz: 2000 };
 const MAX_OTHERS = 12;
 
@@ -118,16 +118,7 @@ export function RunCompare({ runs, curveOf }: Props) {
                 ))}
               </select>
             </label>
-            <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
-              Smoothing
-              <select className="rounded-md border border-line bg-white px-2 py-1.5 text-sm text-ink" value={smoothing} onChange={(e) => setSmoothing(Number(e.target.value))} data-testid="compare-smoothing">
-                {SMOOTHING.map((n) => (
-                  <option key={n} value={n}>
-                    {n === 0 ? 'None' : `1/${n} octave`}
-                  </option>
-                ))}
-              </select>
-            </label>
+            <SmoothingSelect value={smoothing} onChange={setSmoothing} testId="compare-smoothing" />
           </div>
           <fieldset className="flex min-w-0 flex-col gap-1">
             <legend className="text-xs font-medium text-ink-soft">Shown as differences from the reference (up to {MAX_OTHERS})</legend>

@@ -44,6 +44,9 @@ export async function AppHeader() {
               <span className="hidden text-ink-faint sm:inline" data-testid="signed-in-as">
                 {caller.name}
               </span>
+              <Link href="/account" className="rounded-md px-2 py-1 text-ink hover:bg-wash">
+                Account
+              </Link>
               <SignOutButton />
             </>
           ) : (

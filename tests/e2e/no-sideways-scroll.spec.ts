@@ -1,7 +1,7 @@
 /**
  * Phones (issue 14): no page scrolls sideways at 375 px. One browser context walks every page under app/ in turn —
  * the public pages signed out, then every signed-in page (Library and its tabs, a revision, the editor with every
- * panel for a new and a saved System, the Settings sheet, Lessons, the Lesson editor, the Presenter view, Team, the
+ * panel for a new and a saved System, the Settings sheet, Lessons, the Lesson editor, the Presenter view, Team, Account, the
  * admin page, which answers "not found" to a member) and the shared System and shared Lesson pages — and checks
  * `scrollWidth ≤ clientWidth` once each page's own ready signal is there (never a fixed sleep). A failure names the
  * page and the elements reaching furthest past the right edge, their own box or the text spilling out of it (those
@@ -152,6 +152,7 @@ test(`no page scrolls sideways at ${WIDTH} px`, async ({ page }) => {
   await visit(page, `/lessons/${lessonId}/present?step=1`, 'Presenter view, Step 1', testId('step-plot'));
   await visit(page, `/lessons/${lessonId}/present?step=2`, 'Presenter view, Step 2 (phase, sweep)', testId('step-plot'));
   await visit(page, '/team', 'Team');
+  await visit(page, '/account', 'Account', async (p) => expect(p.getByRole('button', { name: 'Make token' })).toBeVisible({ timeout: 120_000 }));
   await visit(page, '/admin/users', 'Admin users (not found for a member)');
   await visit(page, '/dev/mailbox', 'Dev mailbox');
   await visit(page, sharePath, 'Shared System', testId('shared-name'));
