@@ -31,15 +31,15 @@ export const unavailable = () =>
   new AppError(503, 'unavailable', 'The database is not answering right now. Nothing was changed; try again in a few seconds.');
 
 /** Zod issues → `{ path: "paths.1.filter.order", message }`. */
-export function zodIssues(error: ZodError): IssueDetail[] {
+export function zodIssues(error: ZodError, root = '(body)'): IssueDetail[] {
   return error.issues.map((issue) => ({
-    path: issue.path.map(String).join('.') || '(body)',
+    path: issue.path.map(String).join('.') || root,
     message: issue.message,
   }));
 }
 
-export function fromZod(error: ZodError): AppError {
-  const issues = zodIssues(error);
+export function fromZod(error: ZodError, root = '(body)'): AppError {
+  const issues = zodIssues(error, root);
   const first = issues[0];
   const message = first ? `${first.path}: ${first.message}` : 'The request is not valid.';
   return invalid(issues.length > 1 ? `${message} (and ${issues.length - 1} more)` : message, issues);

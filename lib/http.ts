@@ -90,7 +90,7 @@ export async function parseJson<S extends z.ZodType>(request: Request, schema: S
 export function parseQuery<S extends z.ZodType>(request: Request, schema: S): z.infer<S> {
   const params = Object.fromEntries(new URL(request.url).searchParams.entries());
   const parsed = schema.safeParse(params);
-  if (!parsed.success) throw fromZod(parsed.error);
+  if (!parsed.success) throw fromZod(parsed.error, '(query)');
   return parsed.data;
 }
 

@@ -16,7 +16,7 @@ export const errorBodySchema = z
       issues: z
         .array(
           z.strictObject({
-            path: z.string().meta({ description: "The field, dotted with array indices (e.g. 'paths.1.filter.order'); '(body)' for the body as a whole." }),
+            path: z.string().meta({ description: "The field, dotted with array indices (e.g. 'paths.1.filter.order'); '(body)' for the body as a whole, '(query)' for the query string as a whole; a query parameter by its name (e.g. 'fields')." }),
             message: z.string().meta({ description: 'What is wrong with it and what it must be.' }),
           }),
         )

@@ -3,6 +3,7 @@ import { BODY_LIMIT_BYTES } from '@/lib/http';
 import { blendAnswerSchema, crossoverSweepAnswerSchema, timingAnswerSchema } from '../answers/compute-blend';
 import { blendRequestSchema, crossoverSweepRequestSchema, timingRequestSchema } from '@/lib/validations/compute-blend';
 import type { ApiOperation } from '../types';
+import { ANSWER_SHAPES } from '../answer-shapes';
 
 const FLATNESS_TEXT = FLATNESS_DEFINITION.text;
 
@@ -28,6 +29,7 @@ export const BLEND_OPERATIONS: ApiOperation[] = [
     id: 'blend',
     method: 'POST',
     path: '/api/v1/blend',
+    query: ANSWER_SHAPES.blend.query,
     tag: 'Compute',
     summary: 'The complex sum of up to 16 paths (crossover filter × natural roll-off × EQ × gain × polarity × delay) and its read-outs at the crossover.',
     notes: [
@@ -93,6 +95,7 @@ export const BLEND_OPERATIONS: ApiOperation[] = [
     id: 'crossover-sweep',
     method: 'POST',
     path: '/api/v1/crossover-sweep',
+    query: ANSWER_SHAPES.crossoverSweep.query,
     tag: 'Compute',
     summary:
       'Crossover sweep on the whole system: for every candidate crossover point and slope pairing, the main channel and every sub with that crossover, at the delay shift and polarity of the subs that is flattest while keeping the bass, judged by the one flatness measure. The present setting is a row of its own; a row ranks above it only when it is worth the change.',
@@ -196,6 +199,7 @@ export const BLEND_OPERATIONS: ApiOperation[] = [
     id: 'timing',
     method: 'POST',
     path: '/api/v1/timing',
+    query: ANSWER_SHAPES.timing.query,
     tag: 'Compute',
     summary:
       'Timing on the whole system (the main channel and every sub, with the processor delays they run now): arrival times, the phase difference at the crossover, the flatness of the system as it is, and advice — for each sub and for all subs together — on delay and polarity, proven on the whole system, or "keep" with the reason; the Timing window and flatness against delay.',

@@ -3,6 +3,7 @@ import { BODY_LIMIT_BYTES } from '@/lib/http';
 import { eqDesignRequestSchema } from '@/lib/validations/compute-eq-design';
 import { eqDesignAnswerSchema } from '../answers/compute-eq-design';
 import type { ApiOperation } from '../types';
+import { ANSWER_SHAPES } from '../answer-shapes';
 
 // Invented examples: the 6.4 × 4.9 × 2.7 m "Juniper Lane screening room" of the demo (fictional) with two front-corner
 // subs, and a made-up curve with a resonance near 40 Hz.
@@ -26,6 +27,7 @@ export const EQ_DESIGN_OPERATIONS: ApiOperation[] = [
     id: 'eq-design',
     method: 'POST',
     path: '/api/v1/eq-design',
+    query: ANSWER_SHAPES.eqDesign.query,
     tag: 'Compute',
     summary:
       'The EQ designer: up to maxFilters peaking filters (the Audio EQ Cookbook’s, R. Bristow-Johnson) for the sub outputs, bringing the subs’ response toward a target over a band, cut first, never worse than no EQ. Three inputs: an inline curve, the modal model of a room (the subs as they play now), or stored measurements.',

@@ -3,6 +3,7 @@ import { BODY_LIMIT_BYTES } from '@/lib/http';
 import { processorFiltersRequestSchema } from '@/lib/validations/compute-processor-filters';
 import { processorFiltersAnswerSchema } from '../answers/compute-processor-filters';
 import type { ApiOperation } from '../types';
+import { ANSWER_SHAPES } from '../answer-shapes';
 
 const LR4_LOWPASS = { kind: 'crossover', family: 'linkwitz-riley', order: 4, response: 'lowpass', cornerHz: 80 };
 
@@ -12,6 +13,7 @@ export const PROCESSOR_FILTERS_OPERATIONS: ApiOperation[] = [
     id: 'processor-filters',
     method: 'POST',
     path: '/api/v1/processor-filters',
+    query: ANSWER_SHAPES.processorFilters.query,
     tag: 'Compute',
     summary: `Filters as the digital second-order sections (biquads) a processor runs at its sample rate, in the convention ${BIQUAD_CONVENTION}; their exact digital response, the analog prototype's, and how far apart they are.`,
     notes: [

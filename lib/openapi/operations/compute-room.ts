@@ -5,6 +5,7 @@ import { layoutRequestSchema } from '@/lib/validations/compute-layout';
 import { roomModesRequestSchema, roomResponseRequestSchema } from '@/lib/validations/compute-room';
 import { headroomAnswerSchema, layoutAnswerSchema, roomModesAnswerSchema, roomResponseAnswerSchema } from '../answers/compute-room';
 import type { ApiOperation } from '../types';
+import { ANSWER_SHAPES } from '../answer-shapes';
 
 // Invented example room: the 6.4 × 4.9 × 2.7 m "Juniper Lane screening room" of the demo (fictional).
 const ROOM = { lengthM: 6.4, widthM: 4.9, heightM: 2.7 };
@@ -20,6 +21,7 @@ export const ROOM_OPERATIONS: ApiOperation[] = [
     id: 'room-modes',
     method: 'POST',
     path: '/api/v1/room-modes',
+    query: ANSWER_SHAPES.roomModes.query,
     tag: 'Compute',
     summary:
       'Every axial, tangential and oblique mode of a rectangular room up to maxHz (Rayleigh), with the Schroeder frequency, the counts per one-third octave and the Bonello verdict, near-coincident modes, the ITU-R BS.1116-3 proportion check and Kuttruff’s statistical count.',
@@ -61,6 +63,7 @@ export const ROOM_OPERATIONS: ApiOperation[] = [
     id: 'room-response',
     method: 'POST',
     path: '/api/v1/room-response',
+    query: ANSWER_SHAPES.roomResponse.query,
     tag: 'Compute',
     summary:
       'Predicted low-frequency pressure at each seat from each sub and from the subs summed (with their gain, delay and polarity), by modal summation damped by RT60; the seat-to-seat spread; one mode’s pressure over the floor; front-wall quarter-wave notches.',
@@ -115,6 +118,7 @@ export const ROOM_OPERATIONS: ApiOperation[] = [
     id: 'layout',
     method: 'POST',
     path: '/api/v1/layout',
+    query: ANSWER_SHAPES.layout.query,
     tag: 'Compute',
     summary:
       'Each speaker’s azimuth and elevation from the MLP against its channel’s recommended range (pass/warn), the front pair’s included angle, the toe-in to aim at the MLP, a seat or a point, and the distances, delays and trims a processor needs — the same channel settings as the Settings sheet, rounded once to 0.01 m, 0.01 ms and 0.1 dB.',
@@ -193,6 +197,7 @@ export const ROOM_OPERATIONS: ApiOperation[] = [
     id: 'headroom',
     method: 'POST',
     path: '/api/v1/headroom',
+    query: ANSWER_SHAPES.headroom.query,
     tag: 'Compute',
     summary:
       'Maximum SPL at the MLP per channel and per sub (inverse-square law, free field plus optional room gain) against the target — 105 dB peaks per channel, 115 dB from the subs together — with the headroom or deficit, the power the target needs, the NIOSH exposure table and the safety cautions.',

@@ -2,6 +2,7 @@ import { BODY_LIMIT_BYTES } from '@/lib/http';
 import { seatBalanceRequestSchema } from '@/lib/validations/compute-seat-balance';
 import { seatBalanceAnswerSchema } from '../answers/compute-seat-balance';
 import type { ApiOperation } from '../types';
+import { ANSWER_SHAPES } from '../answer-shapes';
 
 // Invented example: the 6.4 × 4.9 × 2.7 m "Juniper Lane screening room" of the demo (fictional).
 const ROOM = { lengthM: 6.4, widthM: 4.9, heightM: 2.7, rt60S: 0.4, temperatureC: 20 };
@@ -23,6 +24,7 @@ export const SEAT_BALANCE_OPERATIONS: ApiOperation[] = [
     id: 'seat-balance',
     method: 'POST',
     path: '/api/v1/seat-balance',
+    query: ANSWER_SHAPES.seatBalance.query,
     tag: 'Compute',
     summary:
       'Seat balance: each sub’s delay, gain and polarity (and, when asked, where to put the subs among candidate positions) that make the seats hear the same bass, from the modal model of the room or from stored measurements of every sub at every seat.',

@@ -4,6 +4,7 @@ import { extensionRequestSchema } from '@/lib/validations/measured-extension';
 import { predictRequestSchema } from '@/lib/validations/measurement';
 import { compareAnswerSchema, extensionAnswerSchema, predictAnswerSchema } from '../answers/measured';
 import type { ApiOperation } from '../types';
+import { ANSWER_SHAPES } from '../answer-shapes';
 
 /** 1/6-octave points from 20 Hz to 640 Hz: a flat (0 dB, 0°) measurement, the simplest honest example. */
 const EXAMPLE_HZ = Array.from({ length: 31 }, (_, i) => Number((20 * 2 ** (i / 6)).toPrecision(5)));
@@ -37,6 +38,7 @@ export const MEASURED_OPERATIONS: ApiOperation[] = [
     id: 'measured-predict',
     method: 'POST',
     path: '/api/v1/measured/predict',
+    query: ANSWER_SHAPES.measuredPredict.query,
     tag: 'Measured',
     summary:
       'Predicts the blend at the seat from a mains and a sub measurement with the System’s crossover, gains, delays and polarity, beside the sum as measured; with the best delay and polarity on the measured pair and its Timing window.',
@@ -92,6 +94,7 @@ export const MEASURED_OPERATIONS: ApiOperation[] = [
     id: 'measured-extension',
     method: 'POST',
     path: '/api/v1/measured/extension',
+    query: ANSWER_SHAPES.measuredExtension.query,
     tag: 'Measured',
     summary:
       'How low a source goes in the room: the −3, −6 and −10 dB points below its own mean level over a band, from its curve at one seat or the spatial average of several; and a crossover judged against them.',
@@ -136,6 +139,7 @@ export const MEASURED_OPERATIONS: ApiOperation[] = [
     id: 'measured-compare',
     method: 'POST',
     path: '/api/v1/measured/compare',
+    query: ANSWER_SHAPES.measuredCompare.query,
     tag: 'Measured',
     summary:
       'Runs compared: each other run as its difference from a reference run (dB against frequency), smoothed, over the range every run covers; levels as measured unless a band to match them over is given.',

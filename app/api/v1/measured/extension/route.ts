@@ -1,9 +1,10 @@
 import { getCaller } from '@/lib/auth';
 import { getMeasurement } from '@/lib/data/measurements';
 import { unauthorized } from '@/lib/errors';
-import { BODY_LIMIT_BYTES, json, parseJson, route } from '@/lib/http';
+import { BODY_LIMIT_BYTES, json, parseJson, parseQuery, route } from '@/lib/http';
 import { computeMeasuredExtension, type ExtensionCurvePoints } from '@/lib/system-model/measured-extension';
 import { extensionRequestSchema, type ExtensionCurveInput } from '@/lib/validations/measured-extension';
+import { ANSWER_SHAPES } from '@/lib/openapi/answer-shapes';
 
 /** Inline points need no session; a `measurementId` is read with the caller's workspace rights. */
 async function curvePoints(curve: ExtensionCurveInput): Promise<ExtensionCurvePoints> {
@@ -18,7 +19,8 @@ async function curvePoints(curve: ExtensionCurveInput): Promise<ExtensionCurvePo
 
 /** POST /api/v1/measured/extension — a source's in-room −3/−6/−10 dB points (several seats: their spatial average) and a crossover judged against them. */
 export const POST = route(async (request) => {
+  const shape = parseQuery(request, ANSWER_SHAPES.measuredExtension.query);
   const input = await parseJson(request, extensionRequestSchema, BODY_LIMIT_BYTES.measuredCurves);
   const curves = await Promise.all(input.curves.map(curvePoints));
-  return json(computeMeasuredExtension(input, curves));
+  return json(ANSWER_SHAPES.measuredExtension.apply(computeMeasuredExtension(input, curves), shape));
 });
