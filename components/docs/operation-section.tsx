@@ -18,7 +18,7 @@ export function operationTables(op: OpenApiOperation, components: Components): {
     { caption: 'Query parameters', rows: parameterRows('query') },
   ];
   for (const [type, media] of Object.entries(op.requestBody?.content ?? {})) {
-    tables.push({ caption: `Request body (${type})`, rows: fieldRows(media.schema, components) });
+    tables.push({ caption: `Request body (${type}${op.requestBody?.required ? '' : ', optional'})`, rows: fieldRows(media.schema, components) });
   }
   for (const [status, answer] of Object.entries(op.responses)) {
     if ('$ref' in answer || !answer.content) continue;

@@ -70,8 +70,8 @@ function operationObject(op: ApiOperation, schemas: Map<string, JsonSchema>): Op
     ...(body
       ? {
           requestBody: {
-            required: true,
-            description: `At most ${kB(body.limitBytes)} (413 beyond).`,
+            required: !body.optional,
+            description: `${body.optional ? 'Optional. ' : ''}At most ${kB(body.limitBytes)} (413 beyond).`,
             content: { [body.contentType ?? 'application/json']: { schema: schemas.get(key.body(op)) ?? {} } },
             'x-max-bytes': body.limitBytes,
           },

@@ -57,8 +57,11 @@ export interface ApiOperation {
   pathParams?: z.ZodObject;
   /** Query parameters (the same schema `parseQuery` uses). */
   query?: z.ZodObject;
-  /** The request body (the same schema `parseJson` uses), its media type (default application/json) and size limit. */
-  body?: { schema: z.ZodType; contentType?: 'application/json' | 'multipart/form-data'; limitBytes: number };
+  /**
+   * The request body (the same schema `parseJson` uses), its media type (default application/json) and size limit;
+   * `optional` when the route also takes no body at all.
+   */
+  body?: { schema: z.ZodType; contentType?: 'application/json' | 'multipart/form-data'; limitBytes: number; optional?: boolean };
   /** Success answers (usually one). */
   answers: ApiAnswer[];
   /** Error statuses this operation can answer with (all share the one error shape). */

@@ -132,7 +132,7 @@ const SYSTEM_OPERATIONS: ApiOperation[] = [
     notes: ['The body is optional: without one the copy is "<name> (copy)" in the same workspace.', ACCESS_NOTE],
     access: 'member',
     pathParams: systemParams,
-    body: { schema: systemDuplicateSchema, limitBytes: BODY_LIMIT_BYTES.form },
+    body: { schema: systemDuplicateSchema, limitBytes: BODY_LIMIT_BYTES.form, optional: true },
     answers: [system('The new System.', 201)],
     errors: WRITE_ERRORS,
     examples: [{ title: 'Duplicate', pathParams: { id: EXAMPLE.system }, body: { name: 'Den, variant B' }, status: 201, responseExcerpt: { name: 'Den, variant B', revision: 1 } }],
