@@ -15,6 +15,7 @@ import { aptInstall } from './lib/run';
 import { ensurePostgres, stopPostgres } from './lib/postgres';
 import { migrate } from './lib/database';
 import { serveApp } from './lib/serve';
+import { runTwoInstances } from './lib/instances';
 
 function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -202,6 +203,13 @@ async function main() {
         if (last) timed.push({ title: spec.title, durationMs: last.duration, timeoutMs: spec.timeoutMs });
         for (const r of spec.results.filter((x) => x.retry > 0)) retries.push(`playwright retried ${spec.title} (attempt ${r.retry + 1})`);
       }
+      // Two more instances of the same build on the same database: a save, a stale save, the sign-in limit, a revoked
+      // share link and a session made on one hold on the other (tests/instances/; README "Several app instances").
+      console.log('\n━━ two app instances on one PostgreSQL ━━');
+      const instancesReport = path.join(reports, 'instances.json');
+      const twoInstances = await runTwoInstances(env, ['--reporter=default', '--reporter=json', `--outputFile.json=${instancesReport}`]);
+      tallies.push({ ...vitestTally(instancesReport, twoInstances === 0), name: 'two instances' });
+      timed.push(...vitestTimes(instancesReport));
       // Last, because it stops and restarts the database under the running app.
       tallies.push(await step('database outage (test:fault)', bin('tsx'), [path.join('scripts', 'test-fault.ts')], env));
     }
