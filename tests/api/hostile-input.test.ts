@@ -26,6 +26,7 @@ import { invitationCreateSchema, memberUpdateSchema, workspaceCreateSchema } fro
 import { apiRouteFiles } from '../helpers/api-routes';
 import { baseUrl } from '../helpers/env';
 import { testDb } from '../helpers/db';
+import { tableStates, type TableState } from '../helpers/table-states';
 import { Client, uniqueEmail } from '../helpers/http';
 
 /**
@@ -458,24 +459,8 @@ async function barrage<T>(items: Iterator<T>, call: (item: T) => Promise<Answer>
 
 // ---------------------------------------------------------------- the database before and after
 
-interface TableState {
-  count: number;
-  checksum: string;
-  rows: string[];
-}
-
 async function snapshot(): Promise<Map<string, TableState>> {
-  const db = await testDb();
-  const tables = (await db.query("SELECT table_name AS name FROM information_schema.tables WHERE table_schema = 'public' AND table_type = 'BASE TABLE' ORDER BY 1", { type: 'SELECT' })) as { name: string }[];
-  const out = new Map<string, TableState>();
-  for (const { name } of tables) {
-    if (UNWATCHED.has(name)) continue;
-    const q = `"${name.replaceAll('"', '""')}"`;
-    const [sum] = (await db.query(`SELECT count(*)::int AS count, md5(coalesce(string_agg(t::text, E'\\n' ORDER BY t::text), '')) AS checksum FROM ${q} t`, { type: 'SELECT' })) as { count: number; checksum: string }[];
-    const rows = ((await db.query(`SELECT t::text AS row FROM ${q} t ORDER BY 1`, { type: 'SELECT' })) as { row: string }[]).map((r) => r.row);
-    out.set(name, { count: sum!.count, checksum: sum!.checksum, rows });
-  }
-  return out;
+  return tableStates(await testDb(), UNWATCHED);
 }
 
 /** Rows added or gone per table, between two snapshots. */
