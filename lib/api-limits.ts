@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { RateLimiterMemory, RateLimiterPostgres, RLWrapperBlackAndWhite, type RateLimiterLike } from 'rate-limiter-flexible';
 import { db } from './db';
 import { rateLimited } from './errors';
+import { clientAddress } from './client-address';
 
 /**
  * Request limits of the API, per caller: a personal access token is one caller (keyed by its hash, so even a
@@ -77,10 +78,9 @@ function limiters(): Limiters {
   return globalForLimits.seamlineApiLimiters;
 }
 
-/** The client's address as the nearest proxy reports it (the same rule as the sign-in limits), else "unknown". */
+/** The client's address as the trusted proxies report it (lib/client-address.ts; the same rule as the sign-in limits). */
 export function clientAddressOf(headers: Headers): string {
-  const forwarded = headers.get('x-forwarded-for')?.split(',')[0]?.trim();
-  return forwarded || headers.get('x-real-ip')?.trim() || 'unknown';
+  return clientAddress(headers.get('x-forwarded-for'), headers.get('x-real-ip'));
 }
 
 /** A bearer secret's bucket: part of its SHA-256, never the secret (nothing that could be used is stored or logged). */

@@ -15,6 +15,11 @@ async function main() {
   loadLocalEnv();
   const { config } = await import('../lib/config');
   const { DEMO_PASSWORD, DEMO_USERS, seedDemo } = await import('./seed');
+  // Settings the server reads per request, checked here: a mistyped value stops npm start with its name, never a 500.
+  const { readApiLimits } = await import('../lib/api-limits');
+  const { readTrustedProxies } = await import('../lib/client-address');
+  readApiLimits();
+  readTrustedProxies();
 
   if (await portAnswers('127.0.0.1', config.port)) {
     console.log(`• something already answers on port ${config.port}; if it is Seamline, it is at ${config.appUrl}`);
