@@ -4,12 +4,13 @@ import { headers } from 'next/headers';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import type { Caller } from './access';
 import { callerForAccessToken } from './data/access-tokens';
-import { findUserByEmail } from './data/users';
+import { findSessionUser, findUserByEmail } from './data/users';
 import { AppError, unauthorized } from './errors';
 import { DUMMY_HASH, verifyPassword } from './passwords';
 import { assertSignInAllowed, clearFailedSignIns, recordFailedSignIn } from './rate-limit';
 import { safeReturnPath } from './return-path';
 import { signInSchema } from './validations/auth';
+import { clientAddress } from './client-address';
 
 declare module 'next-auth' {
   interface Session {
@@ -27,10 +28,10 @@ declare module 'next-auth/jwt' {
   }
 }
 
-function clientAddress(headers: Record<string, unknown> | undefined): string {
-  const forwarded = headers?.['x-forwarded-for'];
-  const first = typeof forwarded === 'string' ? forwarded.split(',')[0]?.trim() : undefined;
-  return first || (typeof headers?.['x-real-ip'] === 'string' ? (headers['x-real-ip'] as string) : 'unknown');
+/** The sign-in limits' client address: the same rule as the API limits (lib/client-address.ts). */
+function clientAddressOfSignIn(headers: Record<string, unknown> | undefined): string {
+  const text = (name: string) => (typeof headers?.[name] === 'string' ? (headers[name] as string) : null);
+  return clientAddress(text('x-forwarded-for'), text('x-real-ip'));
 }
 
 export const authOptions: NextAuthOptions = {
@@ -44,7 +45,7 @@ export const authOptions: NextAuthOptions = {
         const parsed = signInSchema.safeParse(credentials ?? {});
         if (!parsed.success) throw new Error('Enter your e-mail and password.');
         const { email, password } = parsed.data;
-        const address = clientAddress(req?.headers as Record<string, unknown> | undefined);
+        const address = clientAddressOfSignIn(req?.headers as Record<string, unknown> | undefined);
         try {
           await assertSignInAllowed(email, address);
         } catch (e) {
@@ -91,10 +92,15 @@ export async function getSession(): Promise<Session | null> {
   return session?.user?.id ? session : null;
 }
 
-/** The caller of a browser session (pages), or null. Bearer tokens are for the API only. */
+/**
+ * The caller of a browser session (pages), or null. Bearer tokens are for the API only. The account is looked up on
+ * each request that asks (never on a compute route that needs no caller), so a deleted account's cookie is refused at
+ * once, and its name and site role are the stored ones, not the ones signed into the cookie.
+ */
 export async function getSessionCaller(): Promise<(Caller & { email: string; name: string }) | null> {
   const session = await getSession();
-  return session ? { id: session.user.id, siteRole: session.user.siteRole, email: session.user.email, name: session.user.name } : null;
+  const user = session ? await findSessionUser(session.user.id) : null;
+  return user ? { id: user.id, siteRole: user.siteRole, email: user.email, name: user.name } : null;
 }
 
 /** One answer for every token that is not accepted, so a caller cannot tell a mistyped token from a revoked one. */

@@ -15,6 +15,7 @@ import { migration as createLessons } from './20261201004000-create-lessons';
 import { migration as createLessonSteps } from './20261201004100-create-lesson-steps';
 import { migration as measurementRunsAndImpulses } from './20261202000100-measurement-runs-and-impulses';
 import { migration as createAccessTokens } from './20261202000200-create-access-tokens';
+import { migration as systemsKeepFormerMembers } from './20261203000500-systems-keep-former-members';
 
 /**
  * Every migration, in the order it runs: by name, which is its file name (a timestamp first), so the order never
@@ -37,4 +38,5 @@ export const migrations: Migration[] = [
   createLessonSteps,
   measurementRunsAndImpulses,
   createAccessTokens,
+  systemsKeepFormerMembers,
 ].sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));

@@ -3,8 +3,9 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 export class System extends Model<InferAttributes<System>, InferCreationAttributes<System>> {
   declare id: CreationOptional<string>;
   declare workspaceId: string;
-  declare ownerId: string;
-  declare lastEditorId: string;
+  /** Null once that account is deleted (the System stays, shown as by "a former member"). */
+  declare ownerId: string | null;
+  declare lastEditorId: string | null;
   declare name: string;
   declare document: unknown;
   declare revision: CreationOptional<number>;
@@ -18,8 +19,8 @@ export class System extends Model<InferAttributes<System>, InferCreationAttribut
       {
         id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
         workspaceId: { type: DataTypes.UUID, allowNull: false, field: 'workspace_id' },
-        ownerId: { type: DataTypes.UUID, allowNull: false, field: 'owner_id' },
-        lastEditorId: { type: DataTypes.UUID, allowNull: false, field: 'last_editor_id' },
+        ownerId: { type: DataTypes.UUID, allowNull: true, field: 'owner_id' },
+        lastEditorId: { type: DataTypes.UUID, allowNull: true, field: 'last_editor_id' },
         name: { type: DataTypes.STRING(200), allowNull: false },
         document: { type: DataTypes.JSONB, allowNull: false },
         revision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },

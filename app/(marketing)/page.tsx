@@ -1,4 +1,6 @@
 import Link from 'next/link';
+import { Suspense } from 'react';
+import { AccountDeletedNotice } from '@/components/account/account-deleted-notice';
 import { buttonClass } from '@/components/ui/button';
 import { Mark } from '@/components/ui/mark';
 
@@ -23,6 +25,9 @@ const STORIES = [
 export default function LandingPage() {
   return (
     <div className="mx-auto max-w-6xl px-4 py-10 sm:py-16">
+      <Suspense fallback={null}>
+        <AccountDeletedNotice />
+      </Suspense>
       <div className="flex flex-col gap-6 sm:flex-row sm:items-center">
         <Mark size={72} title="" />
         <div>

@@ -5,6 +5,8 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { ApiError, apiFetch } from '@/lib/client/api';
 import { useInvitations, useMembers, useWorkspaces } from '@/lib/hooks/use-workspaces';
+import { WorkspaceTransfer } from '@/components/transfer/workspace-transfer';
+import { LeaveWorkspace } from './leave-workspace';
 
 const ROLES = ['owner', 'editor', 'viewer'] as const;
 
@@ -119,9 +121,7 @@ export function TeamManager({ userId }: { userId: string }) {
                     </td>
                     <td className="px-3 py-2 text-right">
                       {m.userId === userId ? (
-                        <Button variant="ghost" onClick={() => void act(() => apiFetch(`/api/v1/workspaces/${current.id}/members/${m.userId}`, { method: 'DELETE' }), `You left ${current.name}.`).then(() => setSelected(null))}>
-                          Leave
-                        </Button>
+                        <span className="text-xs text-ink-faint">you</span>
                       ) : isOwner ? (
                         <Button variant="ghost" onClick={() => void act(() => apiFetch(`/api/v1/workspaces/${current.id}/members/${m.userId}`, { method: 'DELETE' }), `${m.name} was removed.`)}>
                           Remove
@@ -200,6 +200,18 @@ export function TeamManager({ userId }: { userId: string }) {
               </ul>
             )}
           </div>
+
+          <WorkspaceTransfer workspace={current} onImported={() => void workspaces.mutate()} onOpenWorkspace={setSelected} />
+
+          {members.data ? (
+            <LeaveWorkspace
+              key={current.id}
+              workspace={current}
+              members={members.data.items}
+              userId={userId}
+              onLeave={() => act(() => apiFetch(`/api/v1/workspaces/${current.id}/members/${userId}`, { method: 'DELETE' }), `You left ${current.name}.`).then(() => setSelected(null))}
+            />
+          ) : null}
         </section>
       ) : null}
     </div>

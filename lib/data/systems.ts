@@ -35,7 +35,7 @@ export interface AppRevision {
   createdAt: string;
 }
 
-type SystemRow = System & { owner?: User; lastEditor?: User; workspace?: Workspace };
+type SystemRow = System & { owner?: User | null; lastEditor?: User | null; workspace?: Workspace };
 
 const include = [
   { model: User, as: 'owner', attributes: ['id', 'name'] },
@@ -51,8 +51,8 @@ function toSummary(s: SystemRow): AppSystemSummary {
     name: s.name,
     revision: s.revision,
     tags: s.tags,
-    ownerName: s.owner?.name ?? '',
-    lastEditorName: s.lastEditor?.name ?? '',
+    ownerName: s.owner?.name ?? 'a former member',
+    lastEditorName: s.lastEditor?.name ?? 'a former member',
     updatedAt: s.updatedAt.toISOString(),
     deletedAt: s.deletedAt ? s.deletedAt.toISOString() : null,
   };

@@ -3,6 +3,7 @@ import { db } from '@/lib/db';
 import { invalid } from '@/lib/errors';
 import { hashPassword } from '@/lib/passwords';
 import type { SignUpInput } from '@/lib/validations/auth';
+import { isUuid } from '@/lib/validations/common';
 import { Membership, User, Workspace, type SiteRole } from '@/models';
 
 export interface AppUser {
@@ -38,6 +39,16 @@ export async function createUserWithWorkspace(input: SignUpInput & { siteRole?: 
 export async function findUserByEmail(email: string): Promise<User | null> {
   db();
   return User.findOne({ where: { email: email.trim().toLowerCase() } });
+}
+
+/**
+ * The account a browser session names, read afresh on every request that needs a caller: a deleted account's
+ * session (its cookie is good for 30 days) then finds nothing, and a changed name or site role shows at once.
+ */
+export async function findSessionUser(id: string): Promise<Pick<User, 'id' | 'email' | 'name' | 'siteRole'> | null> {
+  if (!isUuid(id)) return null;
+  db();
+  return User.findByPk(id, { attributes: ['id', 'email', 'name', 'siteRole'] });
 }
 
 export async function listUsers(): Promise<(AppUser & { workspaceCount: number })[]> {

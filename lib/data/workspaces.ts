@@ -84,7 +84,11 @@ export async function changeMember(caller: Caller, workspaceId: string, userId: 
     if (!target) throw notFound('That member');
     const losesOwner = target.role === 'owner' && (change === 'remove' || change.role !== 'owner');
     if (losesOwner && owners.length <= 1) {
-      throw conflict('A workspace needs at least one owner. Make someone else an owner first.');
+      throw conflict(
+        self
+          ? `A workspace needs at least one owner, and you are its only one: make another member an owner before you ${change === 'remove' ? 'leave' : 'step down'}.`
+          : 'A workspace needs at least one owner. Make someone else an owner first.',
+      );
     }
     if (change === 'remove') await target.destroy({ transaction });
     else await target.update({ role: change.role }, { transaction });

@@ -6,6 +6,7 @@ import { demoProfile } from '@/lib/demo/profiles';
 import { apiRouteFiles } from '../helpers/api-routes';
 import { Client, signedInClient, uniqueEmail } from '../helpers/http';
 import { testDb } from '../helpers/db';
+import { smallSystemFile, smallWorkspaceFile } from '../helpers/transfer';
 
 /**
  * One table over every route in app/api (found by walking the folder, so a new route without an
@@ -19,14 +20,16 @@ import { testDb } from '../helpers/db';
  */
 type SessionRole = 'anonymous' | 'outsider' | 'admin' | 'viewer' | 'editor' | 'owner';
 type TokenRole = 'readToken' | 'writeToken' | 'otherWorkspaceToken' | 'revokedToken' | 'expiredToken';
-type Role = SessionRole | TokenRole;
+/** A deleted account's session cookie and access token, kept after DELETE /api/v1/account: anonymous and refused. */
+type DeletedRole = 'deletedSession' | 'deletedToken';
+type Role = SessionRole | TokenRole | DeletedRole;
 const SESSION_ROLES: SessionRole[] = ['anonymous', 'outsider', 'admin', 'viewer', 'editor', 'owner'];
 const TOKEN_ROLES: TokenRole[] = ['readToken', 'writeToken', 'otherWorkspaceToken', 'revokedToken', 'expiredToken'];
-const ROLES: Role[] = [...SESSION_ROLES, ...TOKEN_ROLES];
+const ROLES: Role[] = [...SESSION_ROLES, ...TOKEN_ROLES, 'deletedSession', 'deletedToken'];
 type Expect = Record<SessionRole, number>;
 
 /** Routes a token may not use at all, whatever its scope. */
-const SESSION_ONLY = new Set(['POST /api/v1/workspaces', 'POST /api/v1/invitations/[token]', 'GET /api/v1/tokens', 'POST /api/v1/tokens', 'DELETE /api/v1/tokens/[id]']);
+const SESSION_ONLY = new Set(['POST /api/v1/workspaces', 'POST /api/v1/invitations/[token]', 'GET /api/v1/tokens', 'POST /api/v1/tokens', 'DELETE /api/v1/tokens/[id]', 'GET /api/v1/account/deletion-plan', 'DELETE /api/v1/account', 'POST /api/v1/workspaces/import']);
 /** Routes outside /api/v1 that ignore Authorization altogether. */
 const NO_TOKEN_CHECK = new Set(['GET /api/health']);
 
@@ -41,6 +44,8 @@ function withTokens(key: string, e: Expect): Record<Role, number> {
     otherWorkspaceToken: working(e.outsider),
     revokedToken: refused,
     expiredToken: refused,
+    deletedSession: e.anonymous,
+    deletedToken: refused,
   };
 }
 
@@ -118,6 +123,9 @@ const MATRIX: Record<string, { expect: Expect; build: Builder }> = {
   'GET /api/v1/invitations/[token]': { expect: open(404), build: () => ({ path: `/api/v1/invitations/${'y'.repeat(43)}` }) },
   'POST /api/v1/invitations/[token]': { expect: signedIn(404), build: () => ({ path: `/api/v1/invitations/${'y'.repeat(43)}` }) },
   'GET /api/v1/tokens': { expect: signedIn(200), build: () => ({ path: '/api/v1/tokens' }) },
+  'GET /api/v1/account/deletion-plan': { expect: signedIn(200), build: () => ({ path: '/api/v1/account/deletion-plan' }) },
+  // The words not typed: refused after the caller is checked and before the password is (no failed sign-in is counted).
+  'DELETE /api/v1/account': { expect: signedIn(400), build: () => ({ path: '/api/v1/account', body: { password: 'not-read-here', confirm: 'not the words', workspaces: [] } }) },
   // Any member may make a token for the workspace (a viewer a read one); the others are not in it.
   'POST /api/v1/tokens': { expect: read(201), build: (f) => ({ path: '/api/v1/tokens', body: { name: 'Matrix token', workspaceId: f.workspaceId, scope: 'read', expiresInDays: 1 } }) },
   // The owner's own token: only the owner may revoke it; to anyone else it does not exist.
@@ -164,6 +172,13 @@ const MATRIX: Record<string, { expect: Expect; build: Builder }> = {
       return { path: `/api/v1/workspaces/${f.workspaceId}/invitations/${inv.body.id}` };
     },
   },
+
+  // Workspace export and import (issue 19): the export lists the members' e-mails (owners only); a whole-workspace file
+  // becomes a new workspace of any signed-in browser session (tokens 403); a System file goes in for editors and write tokens.
+  'GET /api/v1/workspaces/[id]/export': { expect: ownerOnly(), build: (f) => ({ path: `/api/v1/workspaces/${f.workspaceId}/export` }) },
+  'POST /api/v1/workspaces/import': { expect: signedIn(201), build: () => ({ path: '/api/v1/workspaces/import', body: smallWorkspaceFile('matrix') }) },
+  'POST /api/v1/workspaces/[id]/systems/import': { expect: write(201), build: (f) => ({ path: `/api/v1/workspaces/${f.workspaceId}/systems/import`, body: smallSystemFile('matrix') }) },
+  'GET /api/v1/systems/[id]/export/history': { expect: write(), build: (f) => ({ path: `/api/v1/systems/${f.systemId}/export/history` }) },
 
   'GET /api/v1/systems': { expect: signedIn(200), build: () => ({ path: '/api/v1/systems' }) },
   'POST /api/v1/systems': { expect: write(201), build: (f) => ({ path: '/api/v1/systems', body: { name: 'Matrix new', document: juniperLaneDocument(), workspaceId: f.workspaceId } }) },
@@ -306,6 +321,14 @@ describe('access matrix over every route', () => {
     await clients.owner.delete(`/api/v1/tokens/${revokedToken.id}`);
     await (await testDb()).query("UPDATE access_tokens SET expires_at = now() - interval '1 second' WHERE id = :id", { replacements: { id: expiredToken.id } });
     fixture.ownerTokenId = revocable.id;
+    // An account that is then deleted: its cookie and its token stay in their clients.
+    const gone = await createUser('deleted');
+    const goneClient = await signedInClient(gone.email, 'a-long-password-1');
+    const gonePersonal = (await goneClient.get('/api/v1/workspaces')).body.items[0].id as string;
+    const goneToken = (await goneClient.post('/api/v1/tokens', { name: 'Matrix doomed token', workspaceId: gonePersonal, scope: 'write' })).body as { token: string };
+    const deleted = await goneClient.request('DELETE', '/api/v1/account', { password: 'a-long-password-1', confirm: 'delete my account', workspaces: [{ workspaceId: gonePersonal, action: 'delete' }] });
+    if (deleted.status !== 200) throw new Error(`fixture: account deletion ${deleted.status} ${deleted.text}`);
+    Object.assign(clients, { deletedSession: goneClient, deletedToken: bearer(goneToken) });
     Object.assign(clients, {
       readToken: bearer(readToken),
       writeToken: bearer(writeToken),

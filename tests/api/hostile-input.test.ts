@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { API_OPERATIONS } from '@/lib/openapi/operations';
 import { addMember } from '@/lib/data/workspaces';
 import { accessTokenCreateSchema } from '@/lib/validations/access-token';
+import { accountDeleteSchema } from '@/lib/validations/account';
 import { demoProfile } from '@/lib/demo/profiles';
 import { juniperLaneDocument } from '@/lib/demo/systems';
 import { isTextMediaType, MAX_MEASUREMENT_BYTES, parseMeasurementBytes } from '@/lib/measurements/parse-measurement';
@@ -23,11 +24,13 @@ import { eqDesignCurveRequestSchema, eqDesignMeasuredRequestSchema, eqDesignMode
 import { processorFiltersRequestSchema } from '@/lib/validations/compute-processor-filters';
 import { profileCreateSchema, profileUpdateSchema } from '@/lib/validations/profile';
 import { invitationCreateSchema, memberUpdateSchema, workspaceCreateSchema } from '@/lib/validations/workspace';
+import { systemFileSchema, workspaceFileSchema } from '@/lib/validations/workspace-transfer';
 import { apiRouteFiles } from '../helpers/api-routes';
 import { baseUrl } from '../helpers/env';
 import { testDb } from '../helpers/db';
 import { tableStates, type TableState } from '../helpers/table-states';
 import { Client, uniqueEmail } from '../helpers/http';
+import { smallSystemFile, smallWorkspaceFile } from '../helpers/transfer';
 
 /**
  * Hostile input (issue 8): fast-check generates malformed bodies for every JSON route in app/api —
@@ -71,7 +74,7 @@ interface Fixture {
 }
 
 interface JsonRoute {
-  method: 'POST' | 'PUT' | 'PATCH';
+  method: 'POST' | 'PUT' | 'PATCH' | 'DELETE';
   /** The route as in app/api, `[param]` segments kept. */
   route: string;
   path: (f: Fixture) => string;
@@ -128,10 +131,15 @@ const JSON_ROUTES: JsonRoute[] = [
   compute('/api/v1/eq-design', eqDesignCurveRequestSchema.or(eqDesignModelRequestSchema).or(eqDesignMeasuredRequestSchema)),
 
   { method: 'POST', route: '/api/v1/tokens', path: () => '/api/v1/tokens', schema: accessTokenCreateSchema, limitBytes: 16 * KB, session: true, template: (f) => ({ name: `Token ${MARK}`, workspaceId: f.workspaceId, scope: 'read', expiresInDays: 30 }) },
+  // Never a valid body (those are not sent), and its password is not the fixture's either: nothing can delete the account.
+  { method: 'DELETE', route: '/api/v1/account', path: () => '/api/v1/account', schema: accountDeleteSchema, limitBytes: 16 * KB, session: true, template: (f) => ({ password: 'not-the-fixture-password', confirm: 'delete my account', workspaces: [{ workspaceId: f.workspaceId, action: 'delete' }] }) },
   { method: 'POST', route: '/api/v1/workspaces', path: () => '/api/v1/workspaces', schema: workspaceCreateSchema, limitBytes: 16 * KB, session: true, template: () => ({ name: `Workspace ${MARK}` }) },
   { method: 'PATCH', route: '/api/v1/workspaces/[id]', path: (f) => `/api/v1/workspaces/${f.workspaceId}`, schema: workspaceCreateSchema, limitBytes: 16 * KB, session: true, template: () => ({ name: `Workspace ${MARK}` }) },
   { method: 'POST', route: '/api/v1/workspaces/[id]/invitations', path: (f) => `/api/v1/workspaces/${f.workspaceId}/invitations`, schema: invitationCreateSchema, limitBytes: 16 * KB, session: true, template: () => ({ email: `${MARK}-invited@example.test`, role: 'viewer' }) },
   { method: 'PATCH', route: '/api/v1/workspaces/[id]/members/[userId]', path: (f) => `/api/v1/workspaces/${f.workspaceId}/members/${f.editorId}`, schema: memberUpdateSchema, limitBytes: 16 * KB, session: true, template: () => ({ role: 'viewer' }) },
+  // Transfer files (issue 19): JSON (or a zip, told by its first bytes), checked whole with the file's schema.
+  { method: 'POST', route: '/api/v1/workspaces/import', path: () => '/api/v1/workspaces/import', schema: workspaceFileSchema, limitBytes: 50 * KB * KB, session: true, template: () => smallWorkspaceFile(MARK) },
+  { method: 'POST', route: '/api/v1/workspaces/[id]/systems/import', path: (f) => `/api/v1/workspaces/${f.workspaceId}/systems/import`, schema: systemFileSchema, limitBytes: 50 * KB * KB, session: true, template: () => smallSystemFile(MARK) },
 
   { method: 'POST', route: '/api/v1/systems', path: () => '/api/v1/systems', schema: systemCreateSchema, limitBytes: 256 * KB, session: true, template: (f) => ({ name: `System ${MARK}`, document: juniperLaneDocument(), workspaceId: f.workspaceId }) },
   { method: 'PUT', route: '/api/v1/systems/[id]', path: (f) => `/api/v1/systems/${f.systemId}`, schema: systemUpdateSchema, limitBytes: 256 * KB, session: true, template: (f) => ({ name: `System ${MARK}`, document: juniperLaneDocument(), revision: f.systemRevision }) },
@@ -152,13 +160,13 @@ const JSON_ROUTES: JsonRoute[] = [
   { method: 'POST', route: '/api/v1/lessons/[id]/steps/reorder', path: (f) => `/api/v1/lessons/${f.lessonId}/steps/reorder`, schema: stepReorderSchema, limitBytes: 32 * KB, session: true, template: (f) => ({ revision: f.lessonRevision, stepIds: [...f.stepIds].reverse() }) },
 ];
 
-/** POST/PUT/PATCH handlers in app/api that read a JSON body (they call parseJson), found by walking the folder. */
+/** POST/PUT/PATCH/DELETE handlers in app/api that read a JSON body (they call parseJson), found by walking the folder. */
 function discoverJsonRoutes(): string[] {
   const found: string[] = [];
   for (const { route, source } of apiRouteFiles()) {
     for (const part of source.split(/(?=export (?:const|async function) (?:GET|POST|PUT|PATCH|DELETE)\b)/)) {
-      const m = /^export (?:const|async function) (POST|PUT|PATCH)\b/.exec(part);
-      if (m && /\bparseJson\(|request\.json\(\)/.test(part)) found.push(`${m[1]} ${route}`);
+      const m = /^export (?:const|async function) (POST|PUT|PATCH|DELETE)\b/.exec(part);
+      if (m && /\bparseJson\(|request\.json\(\)|\breadTransferFile\(/.test(part)) found.push(`${m[1]} ${route}`);
     }
   }
   return found.sort();

@@ -1,4 +1,5 @@
 import { AccessTokens } from '@/components/account/access-tokens';
+import { DeleteAccount } from '@/components/account/delete-account';
 import { pageCaller } from '@/components/shell/require-caller';
 
 export const metadata = { title: 'Account' };
@@ -21,6 +22,7 @@ export default async function AccountPage() {
         </dl>
       </div>
       <AccessTokens />
+      <DeleteAccount />
     </div>
   );
 }

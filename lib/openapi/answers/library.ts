@@ -13,8 +13,8 @@ const systemSummaryShape = {
   name: z.string().meta({ description: 'Stored verbatim (up to 200 characters).' }),
   revision: z.number().int().meta({ description: 'The current revision; every save adds one.' }),
   tags: z.array(z.string()).meta({ description: 'The document’s tags.' }),
-  ownerName: z.string().meta({ description: 'Who created it.' }),
-  lastEditorName: z.string().meta({ description: 'Who saved it last.' }),
+  ownerName: z.string().meta({ description: 'Who created it ("a former member" when that account is gone).' }),
+  lastEditorName: z.string().meta({ description: 'Who saved it last ("a former member" when that account is gone).' }),
   updatedAt: isoTime('The last save.'),
   deletedAt: isoTime('When it was deleted').nullable().meta({ description: 'When it was deleted, while it is in Recently deleted; null for a live System.' }),
 };

@@ -1,4 +1,5 @@
 import type { ApiOperation } from '../types';
+import { ACCOUNT_OPERATIONS } from './account';
 import { AUTH_OPERATIONS } from './auth';
 import { BLEND_OPERATIONS } from './compute-blend';
 import { EQ_DESIGN_OPERATIONS } from './compute-eq-design';
@@ -12,6 +13,7 @@ import { MEASUREMENTS_OPERATIONS } from './measurements';
 import { PROFILES_OPERATIONS } from './profiles';
 import { SHARES_OPERATIONS } from './shares';
 import { TOKENS_OPERATIONS } from './tokens';
+import { TRANSFER_OPERATIONS } from './transfer';
 import { WORKSPACES_OPERATIONS } from './workspaces';
 
 /** Every operation of the public API, in the order the API page shows them. */
@@ -28,6 +30,8 @@ export const API_OPERATIONS: ApiOperation[] = [
   ...MEASUREMENTS_OPERATIONS,
   ...LESSONS_OPERATIONS,
   ...WORKSPACES_OPERATIONS,
+  ...TRANSFER_OPERATIONS,
   ...TOKENS_OPERATIONS,
+  ...ACCOUNT_OPERATIONS,
   ...AUTH_OPERATIONS,
 ];

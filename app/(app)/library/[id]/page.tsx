@@ -2,6 +2,7 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { RevisionHistory } from '@/components/library/revision-history';
 import { pageCaller } from '@/components/shell/require-caller';
+import { ExportLink } from '@/components/transfer/export-link';
 import { buttonClass } from '@/components/ui/button';
 import { getSystem, listRevisions } from '@/lib/data/systems';
 import { AppError } from '@/lib/errors';
@@ -29,13 +30,18 @@ export default async function SystemHistoryPage({ params }: { params: Promise<{ 
       <div className="flex flex-wrap items-center gap-3">
         <h1 className="min-w-0 break-words text-2xl font-semibold">{system.name}</h1>
         <span className="num text-sm text-ink-faint">revision {system.revision}</span>
-        <div className="ml-auto flex gap-2">
+        <div className="ml-auto flex flex-wrap gap-2">
           <Link href={`/systems/${id}`} className={buttonClass('primary')}>
             Open in editor
           </Link>
           <Link href={`/systems/${id}/sheet`} className={buttonClass('secondary')}>
             Settings sheet
           </Link>
+          {system.role !== 'viewer' ? (
+            <ExportLink href={`/api/v1/systems/${id}/export/history`} label={`Export ${system.name} with history`}>
+              Export with history
+            </ExportLink>
+          ) : null}
         </div>
       </div>
       <p className="text-sm text-ink-soft">
