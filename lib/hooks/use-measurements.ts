@@ -1,7 +1,8 @@
 'use client';
 
 import useSWR from 'swr';
-import { ApiError, apiFetch, jsonFetcher, type ApiIssue } from '@/lib/client/api';
+import { ApiError, apiFetch, jsonFetcher } from '@/lib/client/api';
+import { postWithProgress } from '@/lib/client/post-with-progress';
 import type { AppMeasurement, AppMeasurementSummary, AppUploadAnswer } from '@/lib/data/measurements';
 import type { AppSystem } from '@/lib/data/systems';
 
@@ -36,32 +37,14 @@ export function useSystemWorkspace(systemId: string | null) {
  * progress (fetch cannot). Resolves with the 201 answer; rejects with an ApiError (its issues are the
  * refused file's line errors).
  */
-export function uploadMeasurement(form: FormData, onProgress: (fraction: number) => void): Promise<UploadAnswer> {
-  return new Promise((resolve, reject) => {
-    const xhr = new XMLHttpRequest();
-    xhr.open('POST', '/api/v1/measurements');
-    xhr.responseType = 'text';
-    xhr.upload.onprogress = (e) => {
-      if (e.lengthComputable && e.total > 0) onProgress(e.loaded / e.total);
-    };
-    xhr.onerror = () => reject(new ApiError(0, 'network', 'Could not reach Seamline. Check the connection; nothing was saved.'));
-    xhr.onload = () => {
-      let body: unknown = null;
-      try {
-        body = xhr.responseText ? JSON.parse(xhr.responseText) : null;
-      } catch {
-        body = null;
-      }
-      if (xhr.status === 201) {
-        onProgress(1);
-        resolve(body as UploadAnswer);
-        return;
-      }
-      const err = (body as { error?: { code?: string; message?: string; issues?: ApiIssue[] } } | null)?.error;
-      reject(new ApiError(xhr.status, err?.code ?? 'error', err?.message ?? `The upload failed (${xhr.status}).`, err?.issues ?? [], (err ?? {}) as Record<string, unknown>));
-    };
-    xhr.send(form);
+export async function uploadMeasurement(form: FormData, onProgress: (fraction: number) => void): Promise<UploadAnswer> {
+  const answer = await postWithProgress<UploadAnswer>('/api/v1/measurements', form, {
+    onProgress,
+    networkMessage: 'Could not reach Seamline. Check the connection; nothing was saved.',
+    failureMessage: (status) => `The upload failed (${status}).`,
   });
+  onProgress(1);
+  return answer;
 }
 
 export function deleteMeasurement(id: string) {

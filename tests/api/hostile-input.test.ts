@@ -29,7 +29,7 @@ import { apiRouteFiles } from '../helpers/api-routes';
 import { baseUrl } from '../helpers/env';
 import { testDb } from '../helpers/db';
 import { tableStates, type TableState } from '../helpers/table-states';
-import { Client, uniqueEmail } from '../helpers/http';
+import { Client, sessionCookie, uniqueEmail } from '../helpers/http';
 import { smallSystemFile, smallWorkspaceFile } from '../helpers/transfer';
 
 /**
@@ -566,30 +566,6 @@ function uploadBody(u: Upload): { body: Uint8Array | FormData; contentType: stri
 }
 
 // ---------------------------------------------------------------- the fixture
-
-async function sessionCookie(email: string, password: string): Promise<string> {
-  const jar = new Map<string, string>();
-  const keep = (res: Response) => {
-    for (const line of res.headers.getSetCookie()) {
-      const [pair] = line.split(';');
-      const i = pair!.indexOf('=');
-      jar.set(pair!.slice(0, i).trim(), pair!.slice(i + 1).trim());
-    }
-  };
-  const header = () => [...jar.entries()].map(([k, v]) => `${k}=${v}`).join('; ');
-  const csrf = await fetch(`${baseUrl()}/api/auth/csrf`);
-  keep(csrf);
-  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const res = await fetch(`${baseUrl()}/api/auth/callback/credentials`, {
-    method: 'POST',
-    redirect: 'manual',
-    headers: { 'Content-Type': 'application/x-www-form-urlencoded', Cookie: header() },
-    body: new URLSearchParams({ csrfToken, email, password, json: 'true', callbackUrl: '/library' }),
-  });
-  keep(res);
-  if (![...jar.keys()].some((k) => k.includes('session-token'))) throw new Error(`fixture: could not sign in as ${email}`);
-  return header();
-}
 
 async function signUp(prefix: string): Promise<{ id: string; email: string }> {
   const email = uniqueEmail(`${MARK}-${prefix}`);

@@ -2,8 +2,8 @@ import { strToU8, zipSync } from 'fflate';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { lindenStreetDocument } from '@/lib/demo/systems';
 import { baseUrl } from '../helpers/env';
-import { Client, signedInClient, uniqueEmail } from '../helpers/http';
-import { rowCounts, sessionCookie, smallSystemFile, smallWorkspaceFile, systemPart } from '../helpers/transfer';
+import { Client, sessionCookie, signedInClient, uniqueEmail } from '../helpers/http';
+import { rowCounts, smallSystemFile, smallWorkspaceFile, systemPart } from '../helpers/transfer';
 
 /**
  * Hostile import files (issue 19): a wrong version, 10 000-deep nesting, 1 000 Systems of which part 900 fails the

@@ -2,10 +2,10 @@ import { unzipSync, strFromU8 } from 'fflate';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { demoProfile } from '@/lib/demo/profiles';
 import { juniperLaneDocument, lindenStreetDocument } from '@/lib/demo/systems';
-import { Client, signedInClient, uniqueEmail } from '../helpers/http';
+import { Client, sessionCookie, signedInClient, uniqueEmail } from '../helpers/http';
 import { makeTeam, type Team } from '../helpers/team';
 import { baseUrl } from '../helpers/env';
-import { comparable, rowCounts, sessionCookie, smallWorkspaceFile } from '../helpers/transfer';
+import { comparable, rowCounts, smallWorkspaceFile } from '../helpers/transfer';
 import { uploadForm } from '../helpers/wav-upload';
 import { wavBytes } from '../helpers/wav-bytes';
 

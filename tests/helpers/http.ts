@@ -91,3 +91,28 @@ export async function signedInClient(email: string, password = 'seamline-demo'):
 }
 
 export const uniqueEmail = (prefix: string) => `${prefix}-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 7)}@example.test`;
+
+/** A signed-in session's Cookie header, for plain fetch calls (bytes, multipart bodies) that the Client does not send. */
+export async function sessionCookie(email: string, password: string): Promise<string> {
+  const jar = new Map<string, string>();
+  const keep = (res: Response) => {
+    for (const line of res.headers.getSetCookie()) {
+      const [pair] = line.split(';');
+      const i = pair!.indexOf('=');
+      jar.set(pair!.slice(0, i).trim(), pair!.slice(i + 1).trim());
+    }
+  };
+  const header = () => [...jar.entries()].map(([k, v]) => `${k}=${v}`).join('; ');
+  const csrf = await fetch(`${baseUrl()}/api/auth/csrf`);
+  keep(csrf);
+  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
+  const res = await fetch(`${baseUrl()}/api/auth/callback/credentials`, {
+    method: 'POST',
+    redirect: 'manual',
+    headers: { 'Content-Type': 'application/x-www-form-urlencoded', Cookie: header() },
+    body: new URLSearchParams({ csrfToken, email, password, json: 'true', callbackUrl: '/library' }),
+  });
+  keep(res);
+  if (![...jar.keys()].some((k) => k.includes('session-token'))) throw new Error(`could not sign in as ${email}`);
+  return header();
+}

@@ -1,7 +1,6 @@
 import { demoProfile } from '@/lib/demo/profiles';
 import { juniperLaneDocument, lindenStreetDocument } from '@/lib/demo/systems';
 import { testDb } from './db';
-import { baseUrl } from './env';
 
 /**
  * Shared by the transfer tests (tests/api/workspace-transfer*.test.ts, the access matrix, hostile input): small valid
@@ -137,29 +136,4 @@ export async function rowCounts(userId: string, mark: string): Promise<Record<st
     { replacements: { userId, like: `%${mark}%` }, type: 'SELECT' },
   )) as Record<string, number>[];
   return row as Record<string, number>;
-}
-
-/** A signed-in session's Cookie header, for requests whose bodies or answers are bytes (zip files). */
-export async function sessionCookie(email: string, password: string): Promise<string> {
-  const jar = new Map<string, string>();
-  const keep = (res: Response) => {
-    for (const line of res.headers.getSetCookie()) {
-      const [pair] = line.split(';');
-      const i = pair!.indexOf('=');
-      jar.set(pair!.slice(0, i).trim(), pair!.slice(i + 1).trim());
-    }
-  };
-  const header = () => [...jar.entries()].map(([k, v]) => `${k}=${v}`).join('; ');
-  const csrf = await fetch(`${baseUrl()}/api/auth/csrf`);
-  keep(csrf);
-  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const res = await fetch(`${baseUrl()}/api/auth/callback/credentials`, {
-    method: 'POST',
-    redirect: 'manual',
-    headers: { 'Content-Type': 'application/x-www-form-urlencoded', Cookie: header() },
-    body: new URLSearchParams({ csrfToken, email, password, json: 'true', callbackUrl: '/library' }),
-  });
-  keep(res);
-  if (![...jar.keys()].some((k) => k.includes('session-token'))) throw new Error(`could not sign in as ${email}`);
-  return header();
 }
