@@ -86,7 +86,7 @@ test('save, share, open signed out, revoke, 404; print the Settings sheet', asyn
   await expect(page.getByRole('button', { name: 'Print' })).toBeHidden();
   await expect(page.getByRole('link', { name: 'Library' })).toBeHidden();
   await expect(page.getByRole('heading', { name: 'Subwoofers' })).toBeVisible();
-  await expect(page.getByTestId('sheet-revision')).toHaveText('1');
+  await expect(page.getByTestId('sheet-revision').filter({ visible: true })).toHaveText('1');
   await page.screenshot({ path: path.join(OUT, 'sheet-print-media.png'), fullPage: true });
 
   for (const format of ['A4', 'Letter'] as const) {

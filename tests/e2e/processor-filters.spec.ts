@@ -93,11 +93,12 @@ test('Processor filters on the Juniper Lane screening room: 96 kHz, a section co
     await page.getByTestId('save-button').click();
     await expect(page.getByText('all changes saved')).toBeVisible({ timeout: 60_000 });
     await page.goto(`/systems/${copyId}/sheet`);
-    await expect(page.getByTestId('sheet-pf-rate')).toHaveText('96000 Hz');
-    const sheetRow = page.getByTestId(`sheet-pf-${mainId}-1`);
+    // While the page streams in, React may hold a hidden copy of the sheet in the DOM: read the one on screen.
+    await expect(page.getByTestId('sheet-pf-rate').filter({ visible: true })).toHaveText('96000 Hz');
+    const sheetRow = page.getByTestId(`sheet-pf-${mainId}-1`).filter({ visible: true });
     for (const value of [hp!.b0, hp!.b1, hp!.b2, hp!.a1, hp!.a2]) await expect(sheetRow).toContainText(String(value));
-    await expect(page.getByTestId('sheet-processor-filters')).toContainText('Low-pass, Linkwitz–Riley 4th order (24 dB/oct), 80 Hz');
-    await expect(page.locator('[data-testid^="sheet-pf-sub-sub1-"]')).toHaveCount(2 + n); // the applied EQ, on the sheet too
+    await expect(page.getByTestId('sheet-processor-filters').filter({ visible: true })).toContainText('Low-pass, Linkwitz–Riley 4th order (24 dB/oct), 80 Hz');
+    await expect(page.locator('[data-testid^="sheet-pf-sub-sub1-"]').filter({ visible: true })).toHaveCount(2 + n); // the applied EQ, on the sheet too
   } finally {
     expect((await page.request.delete(`/api/v1/systems/${copyId}`)).status()).toBe(200);
   }
