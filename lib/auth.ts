@@ -34,7 +34,23 @@ function clientAddressOfSignIn(headers: Record<string, unknown> | undefined): st
   return clientAddress(text('x-forwarded-for'), text('x-real-ip'));
 }
 
+/** Thrown by the jwt callback for a cookie whose account no longer exists: next-auth then clears the cookie. */
+class AccountGoneError extends Error {
+  constructor() {
+    super('The account of this session no longer exists.');
+    this.name = 'AccountGoneError';
+  }
+}
+
 export const authOptions: NextAuthOptions = {
+  logger: {
+    // A deleted account's cookie is an expected end of a session, not an error worth a stack trace in the log.
+    error(code, metadata) {
+      const error = metadata instanceof Error ? metadata : (metadata as { error?: unknown } | undefined)?.error;
+      if (error instanceof AccountGoneError) return;
+      console.error(`[next-auth][error][${code}]`, metadata);
+    },
+  },
   session: { strategy: 'jwt', maxAge: 30 * 24 * 3600 },
   pages: { signIn: '/sign-in' },
   providers: [
@@ -68,11 +84,28 @@ export const authOptions: NextAuthOptions = {
     async redirect({ url, baseUrl }) {
       return `${baseUrl}${safeReturnPath(url, '/', baseUrl)}`;
     },
+    /**
+     * At sign-in the account goes into the cookie; on every later read (the browser's /api/auth/session, a page's
+     * getServerSession) the account is looked up again: a deleted account's cookie is cleared and reads as signed out,
+     * and a changed name or site role shows at once. While the database cannot answer the cookie stands as it is (an
+     * outage must not sign everyone out; whatever needs the database answers 503 meanwhile).
+     */
     async jwt({ token, user }) {
       if (user) {
         token.uid = user.id;
         token.siteRole = user.siteRole;
+        return token;
       }
+      let stored: Awaited<ReturnType<typeof findSessionUser>> | undefined;
+      try {
+        stored = await findSessionUser(token.uid ?? '');
+      } catch {
+        return token;
+      }
+      if (!stored) throw new AccountGoneError();
+      token.name = stored.name;
+      token.email = stored.email;
+      token.siteRole = stored.siteRole;
       return token;
     },
     async session({ session, token }) {

@@ -215,6 +215,7 @@ describe('deleting an account', () => {
     });
     expect(plan.body.workspaces.find((w: Row) => w.workspaceId === leaver.personalId)).toMatchObject({ personal: true, onlyOwner: true, otherMembers: [] });
     expect(plan.body).toMatchObject({ accessTokens: 1, pendingInvitationsSent: 1, blockedReason: null });
+    expect((await leaver.client.get('/api/auth/session')).body).toMatchObject({ user: { id: leaver.id, email: leaver.email } });
 
     const before = await workspaceRows(ws);
     const editorBefore = await userRows(editor.id);
@@ -261,6 +262,11 @@ describe('deleting an account', () => {
     const page = await leaver.client.get('/account');
     expect(`${page.headers.get('location') ?? ''} ${page.text}`).toContain('/sign-in?callbackUrl=%2Faccount');
     expect(page.text).not.toContain(leaver.email);
+    // The browser's own "who is signed in?" (next-auth's session route, read by the header) answers nobody and clears the cookie.
+    const who = await leaver.client.get('/api/auth/session');
+    expect(who.status).toBe(200);
+    expect(who.body).toEqual({});
+    expect(who.headers.getSetCookie().join('\n')).toMatch(/session-token=;[^\n]*Max-Age=0/i);
     expect((await bearer.get('/api/v1/systems')).status).toBe(401);
     const again = new Client();
     expect(await again.signIn(leaver.email, PASSWORD, ADDRESS)).toMatch(/do not match an account/);
