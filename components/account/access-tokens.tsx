@@ -60,6 +60,7 @@ export function AccessTokens() {
       {created ? <NewSecret name={created.name} secret={created.secret} onDismiss={() => setCreated(null)} /> : null}
 
       <h3 className="text-base font-semibold">Your tokens</h3>
+      <p className="text-sm text-ink-soft">Revoked and expired tokens stay in this list for 30 days after they end, then drop out of it; they never work again.</p>
       {message ? <Notice kind={message.kind}>{message.text}</Notice> : null}
       {tokens.error ? <Notice kind="error">{String(tokens.error.message)}</Notice> : tokens.data ? <TokenList tokens={tokens.data.items} onRevoke={onRevoke} /> : <p role="status">Loading tokens…</p>}
     </section>

@@ -48,11 +48,26 @@ function toApp(t: AccessToken, workspaceName: string, now = Date.now()): AppAcce
 
 const workspaceName = (t: AccessToken) => (t as unknown as { workspace?: Workspace }).workspace?.name ?? '';
 
-/** The caller's tokens, newest first (revoked and expired ones too, so the list says what happened to them). */
+/** How long a revoked or expired token stays in its owner's list, days. */
+export const ENDED_TOKENS_LISTED_DAYS = 30;
+
+/**
+ * The caller's tokens, newest first: every active one, and the revoked and expired ones for ENDED_TOKENS_LISTED_DAYS
+ * after they ended (so the list says what happened to them, without growing for ever). Older ones stay in the
+ * database, refused as before, and leave with the account.
+ */
 export async function listAccessTokens(caller: Caller): Promise<AppAccessToken[]> {
   requireSessionCaller(caller, 'Managing access tokens');
   db();
-  const rows = await AccessToken.findAll({ where: { userId: caller.id }, include: [{ model: Workspace, as: 'workspace', attributes: ['name'] }], order: [['createdAt', 'DESC']] });
+  const since = new Date(Date.now() - ENDED_TOKENS_LISTED_DAYS * DAY_MS);
+  const rows = await AccessToken.findAll({
+    where: {
+      userId: caller.id,
+      [Op.or]: [{ revokedAt: { [Op.gt]: since } }, { revokedAt: null, [Op.or]: [{ expiresAt: null }, { expiresAt: { [Op.gt]: since } }] }],
+    },
+    include: [{ model: Workspace, as: 'workspace', attributes: ['name'] }],
+    order: [['createdAt', 'DESC']],
+  });
   return rows.map((t) => toApp(t, workspaceName(t)));
 }
 

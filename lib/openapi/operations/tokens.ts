@@ -27,7 +27,7 @@ export const TOKENS_OPERATIONS: ApiOperation[] = [
     method: 'GET',
     path: '/api/v1/tokens',
     tag: 'Account',
-    summary: 'The caller’s personal access tokens (never their secrets), with created, last-used and expiry dates.',
+    summary: 'The caller’s personal access tokens (never their secrets), with created, last-used and expiry dates; revoked and expired ones for 30 days after they ended.',
     notes: [SESSION_ONLY],
     access: 'session',
     answers: [{ status: 200, description: 'The tokens.', schema: accessTokenListAnswerSchema }],
