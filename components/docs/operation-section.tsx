@@ -1,3 +1,4 @@
+import Link from 'next/link';
 import { ACCESS_WORDS } from '@/lib/openapi/document-parts';
 import type { OpenApiDocument, OpenApiOperation, OpenApiParameter } from '@/lib/openapi/document-types';
 import { ExampleBlock } from './example-block';
@@ -57,7 +58,7 @@ export function OperationSection({ method, path, op, components }: { method: str
         <span className="font-semibold">Answers:</span> {successes.map(([status, r]) => `${status} ${'description' in r ? r.description : ''}`).join(' ')}{' '}
         {errors.length ? (
           <>
-            <span className="font-semibold">Errors</span> (the <a href="#errors" className="text-mains underline">one error shape</a>): {errors.map(([status]) => status).join(', ')}.
+            <span className="font-semibold">Errors</span> (the <Link prefetch={false} href="/docs/api#errors" className="text-mains underline">one error shape</Link>): {errors.map(([status]) => status).join(', ')}.
           </>
         ) : null}
       </p>

@@ -1,3 +1,4 @@
+import Link from 'next/link';
 import type { OpenApiDocument } from '@/lib/openapi/document-types';
 
 interface IndexedOperation {
@@ -19,25 +20,27 @@ export function operationsByTag(doc: OpenApiDocument): { tag: string; descriptio
   }));
 }
 
-const tagAnchor = (tag: string) => `tag-${tag.toLowerCase().replace(/[^a-z0-9]+/g, '-')}`;
+/** The API page's part for a tag: /docs/api/<slug>, e.g. "Compute" → compute. */
+export const tagSlug = (tag: string) => tag.toLowerCase().replace(/[^a-z0-9]+/g, '-');
+export const partHref = (tag: string) => `/docs/api/${tagSlug(tag)}`;
 
-/** The route list at the top of the API page, one group per tag. */
+/** The route list of the API page's overview, one group per tag, each route linked to its place in its tag's part. */
 export function RouteIndex({ groups }: { groups: ReturnType<typeof operationsByTag> }) {
   return (
     <nav aria-label="Routes" className="mt-6 grid grid-cols-1 gap-4 md:grid-cols-2">
       {groups.map((g) => (
         <div key={g.tag} className="min-w-0">
           <h2 className="text-sm font-semibold uppercase tracking-wide text-ink-faint">
-            <a href={`#${tagAnchor(g.tag)}`} className="hover:underline">
+            <Link prefetch={false} href={partHref(g.tag)} className="hover:underline">
               {g.tag}
-            </a>
+            </Link>
           </h2>
           <ul className="mt-1 space-y-1 text-sm">
             {g.operations.map((o) => (
               <li key={o.id}>
-                <a href={`#${o.id}`} className="num wrap-anywhere hover:underline">
+                <Link prefetch={false} href={`${partHref(g.tag)}#${o.id}`} className="num wrap-anywhere hover:underline">
                   <span className="font-semibold">{o.method.toUpperCase()}</span> {o.path}
-                </a>
+                </Link>
               </li>
             ))}
           </ul>
@@ -47,4 +50,25 @@ export function RouteIndex({ groups }: { groups: ReturnType<typeof operationsByT
   );
 }
 
-export { tagAnchor };
+
+/** The parts of the API page, the present one marked: at the top of each part. */
+export function PartNav({ groups, current }: { groups: ReturnType<typeof operationsByTag>; current: string }) {
+  return (
+    <nav aria-label="Parts of the API page" className="mt-4 flex flex-wrap gap-x-1 gap-y-1 text-sm">
+      <Link prefetch={false} href="/docs/api" className="rounded-md px-2 py-1 text-mains underline">
+        Overview
+      </Link>
+      {groups.map((g) =>
+        g.tag === current ? (
+          <span key={g.tag} aria-current="page" className="rounded-md bg-ink px-2 py-1 font-semibold text-white">
+            {g.tag}
+          </span>
+        ) : (
+          <Link prefetch={false} key={g.tag} href={partHref(g.tag)} className="rounded-md px-2 py-1 text-mains underline">
+            {g.tag}
+          </Link>
+        ),
+      )}
+    </nav>
+  );
+}

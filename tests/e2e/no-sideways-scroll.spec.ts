@@ -100,7 +100,13 @@ test(`no page scrolls sideways at ${WIDTH} px`, async ({ page }) => {
 
   // Signed out.
   await visit(page, '/', 'Landing page');
-  await visit(page, '/docs/api', 'API page', testId('api-route'));
+  await visit(page, '/docs/api', 'API page');
+  const apiParts = await page
+    .getByRole('navigation', { name: 'Routes' })
+    .locator('h2 a')
+    .evaluateAll((links) => links.map((a) => a.getAttribute('href') ?? ''));
+  expect(apiParts.length).toBeGreaterThan(5);
+  for (const part of apiParts) await visit(page, part, `API page ${part}`, testId('api-route'));
   await visit(page, '/sign-up', 'Sign-up');
   await visit(page, '/forgot', 'Forgotten password');
   await visit(page, '/reset/not-a-real-token', 'Reset password (unknown link)');

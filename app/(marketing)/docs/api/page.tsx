@@ -1,9 +1,8 @@
+import Link from 'next/link';
 import { FieldTable } from '@/components/docs/field-table';
-import { OperationSection, operationTables } from '@/components/docs/operation-section';
 import { RichText } from '@/components/docs/rich-text';
-import { operationsByTag, RouteIndex, tagAnchor } from '@/components/docs/route-index';
-import { fieldRows, linkedSchemas } from '@/components/docs/schema-fields';
-import { SchemaSection } from '@/components/docs/schema-section';
+import { operationsByTag, partHref, RouteIndex } from '@/components/docs/route-index';
+import { fieldRows } from '@/components/docs/schema-fields';
 import { ACCESS_AND_LIMITS_TEXT } from '@/lib/openapi/access-and-limits';
 import { openApiDocument } from '@/lib/openapi/document';
 
@@ -14,14 +13,15 @@ const ERROR_EXAMPLE = {
   error: { code: 'invalid', message: 'paths.1.filter.order: Linkwitz–Riley order must be 2, 4 or 8', issues: [{ path: 'paths.1.filter.order', message: 'Linkwitz–Riley order must be 2, 4 or 8' }] },
 };
 
-/** The API page: everything on it is read from the OpenAPI document the app serves at /api/v1/openapi.json. */
+/**
+ * The API page's overview: access, limits, the one error shape and every route, each linked to its tag's part
+ * (/docs/api/<tag>, one page per tag, so no page carries every field table at once). Everything is read from the
+ * OpenAPI document the app serves at /api/v1/openapi.json.
+ */
 export default function ApiDocsPage() {
   const doc = openApiDocument();
-  const components = doc.components.schemas;
   const groups = operationsByTag(doc);
-  const errorRows = fieldRows({ $ref: '#/components/schemas/ErrorBody' }, components);
-  const tables = Object.values(doc.paths).flatMap((item) => Object.values(item).flatMap((op) => operationTables(op!, components).map((t) => t.rows)));
-  const shared = linkedSchemas([...tables, errorRows], components);
+  const errorRows = fieldRows({ $ref: '#/components/schemas/ErrorBody' }, doc.components.schemas);
   return (
     <div className="mx-auto max-w-5xl px-4 py-8">
       <h1 className="text-3xl font-semibold">Seamline API</h1>
@@ -56,27 +56,20 @@ export default function ApiDocsPage() {
           {JSON.stringify(ERROR_EXAMPLE, null, 2)}
         </pre>
       </section>
-      <RouteIndex groups={groups} />
-      {groups.map((g) => (
-        <div key={g.tag} id={tagAnchor(g.tag)} className="mt-10 scroll-mt-4">
-          <h2 className="border-b border-line pb-1 text-2xl font-semibold">{g.tag}</h2>
-          {g.description ? <p className="mt-1 text-ink-soft">{g.description}</p> : null}
-          {g.operations.map((o) => {
-            const op = doc.paths[o.path]?.[o.method as 'get'];
-            return op ? <OperationSection key={o.id} method={o.method} path={o.path} op={op} components={components} /> : null;
-          })}
-        </div>
-      ))}
-      <div id="schemas" className="mt-10">
-        <h2 className="border-b border-line pb-1 text-2xl font-semibold">Shared schemas</h2>
-        <p className="mt-1 text-ink-soft">
-          Parts of several requests and answers, written out once; the tables above link here. A name ending in Output is the form the app sends back, with every default
-          filled in.
-        </p>
-        {shared.map((name) => (
-          <SchemaSection key={name} name={name} components={components} />
+      <h2 className="mt-8 text-2xl font-semibold">Routes</h2>
+      <p className="mt-1 text-ink-soft">
+        One page per group, with every parameter, body and answer field, examples, and the shared schemas its tables name:{' '}
+        {groups.map((g, i) => (
+          <span key={g.tag}>
+            {i ? ', ' : ''}
+            <Link prefetch={false} href={partHref(g.tag)} className="text-mains underline">
+              {g.tag}
+            </Link>
+          </span>
         ))}
-      </div>
+        .
+      </p>
+      <RouteIndex groups={groups} />
     </div>
   );
 }
