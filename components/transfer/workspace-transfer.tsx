@@ -26,8 +26,9 @@ interface Props {
 }
 
 /**
- * Taking a workspace out as one file (owners) and bringing a file in: a workspace file as a new workspace (anyone),
- * or a System file into this workspace (editors and owners).
+ * Taking a workspace out as one file (owners) and bringing a file in: a workspace file as a new workspace (anyone) or
+ * into this one while it is empty (owners; the server refuses a workspace holding anything), or a System file into this
+ * workspace (editors and owners).
  */
 export function WorkspaceTransfer({ workspace, onImported, onOpenWorkspace }: Props) {
   const id = useId();
@@ -96,13 +97,18 @@ export function WorkspaceTransfer({ workspace, onImported, onOpenWorkspace }: Pr
           data-testid="transfer-file"
         />
         <p className="text-xs text-ink-faint">
-          A whole-workspace file becomes a new workspace that you own; its members are listed, not added. A file of one System (Export with history, in the Library) can be added to this
-          workspace. At most 50 MB; the whole file is checked before anything is created.
+          A whole-workspace file becomes a new workspace that you own, or fills this one if you own it and it holds nothing yet; its members are listed, not added. A file of one System
+          (Export with history, in the Library) can be added to this workspace. At most 50 MB; the whole file is checked before anything is created.
         </p>
         <div className="flex flex-wrap gap-2">
           <Button disabled={!file || busy} onClick={() => void run('/api/v1/workspaces/import')}>
             Import as a new workspace
           </Button>
+          {workspace.role === 'owner' ? (
+            <Button variant="secondary" disabled={!file || busy} onClick={() => void run(`/api/v1/workspaces/import?workspaceId=${encodeURIComponent(workspace.id)}`)}>
+              Import into {workspace.name}
+            </Button>
+          ) : null}
           {canAddSystems ? (
             <Button variant="secondary" disabled={!file || busy} onClick={() => void run(`/api/v1/workspaces/${workspace.id}/systems/import`)}>
               Add a System file to {workspace.name}

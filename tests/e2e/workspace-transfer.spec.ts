@@ -73,6 +73,30 @@ test('export the demo workspace, import it as a new workspace of another account
   await other.getByTestId('import-result').getByRole('link', { name: firstName, exact: true }).click();
   await expect(other).toHaveURL(/\/systems\/[0-9a-f-]{36}/, { timeout: 60_000 });
   await expect(other.getByLabel('System name')).toHaveValue(firstName, { timeout: 60_000 });
+
+  // The same file fills the account's own workspace while that holds nothing; a second time it is refused, naming why.
+  const personal = "Transfer walk (invented)'s workspace";
+  await openTeam(other);
+  await other.getByRole('button', { name: new RegExp(`^${personal.replace(/[()]/g, '\\$&')}`) }).click();
+  await expect(other.getByRole('heading', { level: 1, name: personal })).toBeVisible();
+  for (const attempt of ['empty', 'filled']) {
+    await other.getByLabel('Import a workspace file').setInputFiles(path);
+    await other.getByRole('button', { name: `Import into ${personal}` }).click();
+    if (attempt === 'empty') {
+      await expect(other.getByTestId('import-created')).toContainText(`${plural(file.systems.length, 'System')} (${plural(revisions, 'revision')})`, { timeout: 90_000 });
+      await expect(other.getByTestId('import-result')).toContainText(`Imported into ${personal}`);
+    } else {
+      await expect(other.getByTestId('workspace-transfer').getByText(/That workspace is not empty \(\d+ Systems/)).toBeVisible({ timeout: 60_000 });
+    }
+  }
+  const lists = await Promise.all(
+    [personal, 'Larkspur AV'].map(async (name) => {
+      const all = (await (await other.request.get('/api/v1/workspaces')).json()).items as { id: string; name: string }[];
+      const ws = all.find((w) => w.name === name)!;
+      return ((await (await other.request.get(`/api/v1/systems?workspaceId=${ws.id}`)).json()).items as unknown[]).length;
+    }),
+  );
+  expect(lists, 'the personal workspace holds the file once, like the imported one').toEqual([file.systems.length, file.systems.length]);
   await context.close();
 });
 
