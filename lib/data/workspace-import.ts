@@ -131,7 +131,8 @@ export async function importWorkspaceFile(caller: Caller, raw: unknown, options:
 
 /**
  * A System file into a workspace where the caller is an editor or owner: the System with its history, its profiles and
- * its measurements, each name that the workspace already has getting " (imported)".
+ * its measurements. A System or profile name the workspace already has gets " (imported)"; the measurements belong to
+ * the new System alone, so their names (shown within that System) are kept as they are.
  */
 export async function importSystemFile(caller: Caller, workspaceId: string, raw: unknown): Promise<TransferImportAnswer> {
   assertUuid(workspaceId, 'That workspace');
