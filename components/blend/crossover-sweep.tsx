@@ -133,7 +133,7 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
           Crossover sweep
         </h3>
         <p className="text-sm text-ink-soft">
-          Try candidate crossover points and slopes on the whole System ({speaker?.channel ?? 'the mains'} and {doc.subs.length === 1 ? doc.subs[0]?.name : `all ${doc.subs.length} subs`}), each at the subs&apos; best delay and polarity. The present setting is a row of its own; only a row that is at least 0.5 dB flatter, keeps the −3 dB point within a third of an octave and the bass within 1 dB ranks above it.
+          Try candidate crossover points and slopes on the whole System ({speaker?.channel ?? 'the mains'} and {doc.subs.length === 1 ? doc.subs[0]?.name : `all ${doc.subs.length} subs`}), each at the subs&apos; best delay and polarity. The present setting is a row of its own. A row ranks above it only when it keeps the −3 dB point within a third of an octave and the bass within 1 dB, is no less flat, and is either at least 0.5 dB flatter or takes a crossover that sits in the mains&apos; roll-off clear of it. Among those, rows within 0.5 dB of the flattest (too close to hear apart) come in order of the smallest change from the present setting.
         </p>
       </div>
       <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-[1fr_1fr_auto_auto_auto]">
@@ -293,7 +293,7 @@ export function CrossoverSweep({ channel }: { channel?: string }) {
         </div>
       ) : !sweep.running ? (
         <p className="text-sm text-ink-faint">
-          Default candidates: 40–150 Hz in 5 Hz steps. Each row is the whole System ({speaker?.channel ?? 'the mains'} and every sub) at that crossover, with the subs&apos; delays and polarity at their best. Rows worth a change (at least 0.5 dB flatter, keeping the bass) rank above the present setting; a more negative &quot;Mains at fc/2&quot; means the mains carry less of the deep bass.
+          Default candidates: 40–150 Hz in 5 Hz steps. Each row is the whole System ({speaker?.channel ?? 'the mains'} and every sub) at that crossover, with the subs&apos; delays and polarity at their best. Rows worth a change (keeping the bass, and at least 0.5 dB flatter or clear of the mains&apos; roll-off without being less flat) rank above the present setting; a more negative &quot;Mains at fc/2&quot; means the mains carry less of the deep bass.
         </p>
       ) : null}
     </section>
