@@ -25,9 +25,14 @@ export class Client {
     }
   }
 
-  async request(method: string, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<{ status: number; body: Json; headers: Headers; text: string }> {
+  request(method: string, path: string, body?: unknown, headers: Record<string, string> = {}) {
+    return this.requestAt(baseUrl(), method, path, body, headers);
+  }
+
+  /** A request to the app at `base` (one of several instances, as behind a balancer), with this client's cookies. */
+  async requestAt(base: string, method: string, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<{ status: number; body: Json; headers: Headers; text: string }> {
     const isForm = body instanceof URLSearchParams || body instanceof FormData;
-    const res = await fetch(`${baseUrl()}${path}`, {
+    const res = await fetch(`${base}${path}`, {
       method,
       redirect: 'manual',
       headers: {
@@ -66,16 +71,20 @@ export class Client {
   }
 
   /** Signs in through next-auth's credentials flow; returns the error text next-auth gave, or null. */
-  async signIn(email: string, password: string, address?: string): Promise<string | null> {
-    const csrf = await this.get('/api/auth/csrf');
+  signIn(email: string, password: string, address?: string): Promise<string | null> {
+    return this.signInAt(baseUrl(), email, password, address);
+  }
+
+  /** Signs in on the app at `base`, from the client address `address` (X-Forwarded-For) when given. */
+  async signInAt(base: string, email: string, password: string, address?: string): Promise<string | null> {
+    const csrf = await this.requestAt(base, 'GET', '/api/auth/csrf');
     const form = new URLSearchParams({ csrfToken: csrf.body.csrfToken, email, password, json: 'true', callbackUrl: '/library' });
-    const res = await this.request('POST', '/api/auth/callback/credentials', form, {
+    const res = await this.requestAt(base, 'POST', '/api/auth/callback/credentials', form, {
       'Content-Type': 'application/x-www-form-urlencoded',
       ...(address ? { 'X-Forwarded-For': address } : {}),
     });
     const location = res.headers.get('location') ?? (res.body?.url as string | undefined) ?? '';
-    const error = new URL(location, baseUrl()).searchParams.get('error');
-    return error;
+    return new URL(location, base).searchParams.get('error');
   }
 
   get signedIn() {

@@ -9,7 +9,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { juniperLaneDocument } from '@/lib/demo/systems';
 import { SIGN_IN_FAILURES_PER_EMAIL } from '@/lib/rate-limit';
-import { Browser } from './instance-client';
+import { Client as Browser } from '../helpers/http';
 
 const A = (process.env.INSTANCE_A_URL ?? '').replace(/\/$/, '');
 const B = (process.env.INSTANCE_B_URL ?? '').replace(/\/$/, '');
@@ -32,12 +32,12 @@ const nextAddress = () => `${addressPrefix}.${(attempts++ % 254) + 1}`;
 
 const signUp = async (base: string, what: string) => {
   const email = emailFor(what);
-  const res = await new Browser().request(base, 'POST', '/api/v1/auth/sign-up', { name: `Instances ${what} (invented)`, email, password: PASSWORD });
+  const res = await new Browser().requestAt(base, 'POST', '/api/v1/auth/sign-up', { name: `Instances ${what} (invented)`, email, password: PASSWORD });
   expect(res.status, res.text).toBe(201);
   return email;
 };
 
-const signInOnce = (base: string, email: string, password: string) => new Browser().signIn(base, email, password, nextAddress());
+const signInOnce = (base: string, email: string, password: string) => new Browser().signInAt(base, email, password, nextAddress());
 
 describe.skipIf(missing.length > 0)('two app instances on one PostgreSQL', () => {
   let owner: Browser;
@@ -46,31 +46,31 @@ describe.skipIf(missing.length > 0)('two app instances on one PostgreSQL', () =>
 
   /** A fresh System made through A; its id and revision. */
   const freshSystem = async () => {
-    const res = await owner.request(A, 'POST', '/api/v1/systems', { name: systemName, document: juniperLaneDocument() });
+    const res = await owner.requestAt(A, 'POST', '/api/v1/systems', { name: systemName, document: juniperLaneDocument() });
     expect(res.status, res.text).toBe(201);
     return res.body as { id: string; revision: number; document: ReturnType<typeof juniperLaneDocument> };
   };
   const save = (base: string, id: string, revision: number, notes: string) =>
-    owner.request(base, 'PUT', `/api/v1/systems/${id}`, { name: systemName, document: { ...juniperLaneDocument(), notes }, revision });
+    owner.requestAt(base, 'PUT', `/api/v1/systems/${id}`, { name: systemName, document: { ...juniperLaneDocument(), notes }, revision });
 
   beforeAll(async () => {
     expect(A).not.toBe(B);
     ownerEmail = await signUp(A, 'owner');
     owner = new Browser();
-    expect(await owner.signIn(A, ownerEmail, PASSWORD, nextAddress())).toBeNull();
+    expect(await owner.signInAt(A, ownerEmail, PASSWORD, nextAddress())).toBeNull();
     expect(owner.signedIn).toBe(true);
   });
 
   it('a session cookie from signing in on A is honoured on B', async () => {
-    const session = await owner.request(B, 'GET', '/api/auth/session');
+    const session = await owner.requestAt(B, 'GET', '/api/auth/session');
     expect(session.status).toBe(200);
     expect(session.body.user.email).toBe(ownerEmail);
-    const workspaces = await owner.request(B, 'GET', '/api/v1/workspaces');
+    const workspaces = await owner.requestAt(B, 'GET', '/api/v1/workspaces');
     expect(workspaces.status, workspaces.text).toBe(200);
     expect(workspaces.body.items).toHaveLength(1);
     expect(workspaces.body.items[0]).toMatchObject({ personal: true, role: 'owner' });
     // Without the cookie, B does not know the caller.
-    expect((await new Browser().request(B, 'GET', '/api/v1/workspaces')).status).toBe(401);
+    expect((await new Browser().requestAt(B, 'GET', '/api/v1/workspaces')).status).toBe(401);
   });
 
   it('a save through A is read through B at the new revision with the same document', async () => {
@@ -79,7 +79,7 @@ describe.skipIf(missing.length > 0)('two app instances on one PostgreSQL', () =>
     expect(saved.status, saved.text).toBe(200);
     expect(saved.body.revision).toBe(s.revision + 1);
 
-    const read = await owner.request(B, 'GET', `/api/v1/systems/${s.id}`);
+    const read = await owner.requestAt(B, 'GET', `/api/v1/systems/${s.id}`);
     expect(read.status, read.text).toBe(200);
     expect(read.body.revision).toBe(s.revision + 1);
     expect(read.body.document.notes).toBe(`saved through A, run ${runId}`);
@@ -94,7 +94,7 @@ describe.skipIf(missing.length > 0)('two app instances on one PostgreSQL', () =>
     const staleOnB = await save(B, s.id, r, 'stale, through B');
     expect(staleOnB.status, staleOnB.text).toBe(409);
     expect(staleOnB.body.error.currentRevision).toBe(r + 1);
-    const afterB = await owner.request(A, 'GET', `/api/v1/systems/${s.id}`);
+    const afterB = await owner.requestAt(A, 'GET', `/api/v1/systems/${s.id}`);
     expect([afterB.body.revision, afterB.body.document.notes]).toEqual([r + 1, 'first, through A']);
 
     // And the reverse: saved on B, stale on A.
@@ -102,7 +102,7 @@ describe.skipIf(missing.length > 0)('two app instances on one PostgreSQL', () =>
     const staleOnA = await save(A, s.id, r + 1, 'stale, through A');
     expect(staleOnA.status, staleOnA.text).toBe(409);
     expect(staleOnA.body.error.currentRevision).toBe(r + 2);
-    const afterA = await owner.request(B, 'GET', `/api/v1/systems/${s.id}`);
+    const afterA = await owner.requestAt(B, 'GET', `/api/v1/systems/${s.id}`);
     expect([afterA.body.revision, afterA.body.document.notes]).toEqual([r + 2, 'second, through B']);
   });
 
@@ -111,9 +111,9 @@ describe.skipIf(missing.length > 0)('two app instances on one PostgreSQL', () =>
     const [onA, onB] = await Promise.all([save(A, s.id, s.revision, 'race, through A'), save(B, s.id, s.revision, 'race, through B')]);
     expect([onA.status, onB.status].sort((x, y) => x - y)).toEqual([200, 409]);
     const winner = onA.status === 200 ? 'race, through A' : 'race, through B';
-    const read = await owner.request(B, 'GET', `/api/v1/systems/${s.id}`);
+    const read = await owner.requestAt(B, 'GET', `/api/v1/systems/${s.id}`);
     expect([read.body.revision, read.body.document.notes]).toEqual([s.revision + 1, winner]);
-    const history = await owner.request(A, 'GET', `/api/v1/systems/${s.id}/revisions`);
+    const history = await owner.requestAt(A, 'GET', `/api/v1/systems/${s.id}/revisions`);
     expect(history.status, history.text).toBe(200);
     expect(history.body.items.map((i: { revision: number }) => i.revision).sort((x: number, y: number) => x - y)).toEqual([s.revision, s.revision + 1]);
   });
@@ -139,26 +139,26 @@ describe.skipIf(missing.length > 0)('two app instances on one PostgreSQL', () =>
     // The right password is refused on both while the limit holds, and no session cookie is set.
     for (const base of [A, B]) {
       const browser = new Browser();
-      expect(await browser.signIn(base, twoInstances, PASSWORD, nextAddress())).toMatch(/Too many failed sign-ins/);
+      expect(await browser.signInAt(base, twoInstances, PASSWORD, nextAddress())).toMatch(/Too many failed sign-ins/);
       expect(browser.signedIn).toBe(false);
     }
   });
 
   it('a share link made on A opens on B; revoked on A, it is 404 on B at once', async () => {
     const s = await freshSystem();
-    const made = await owner.request(A, 'POST', `/api/v1/systems/${s.id}/share-links`);
+    const made = await owner.requestAt(A, 'POST', `/api/v1/systems/${s.id}/share-links`);
     expect(made.status, made.text).toBe(201);
     const token = made.body.token as string;
 
-    const opened = await new Browser().request(B, 'GET', `/s/${token}`);
+    const opened = await new Browser().requestAt(B, 'GET', `/s/${token}`);
     expect(opened.status).toBe(200);
     expect(opened.text).toContain(systemName);
 
-    const revoked = await owner.request(A, 'DELETE', `/api/v1/share-links/${token}`);
+    const revoked = await owner.requestAt(A, 'DELETE', `/api/v1/share-links/${token}`);
     expect(revoked.status, revoked.text).toBe(200);
-    expect((await new Browser().request(B, 'GET', `/s/${token}`)).status).toBe(404);
-    expect((await new Browser().request(A, 'GET', `/s/${token}`)).status).toBe(404);
-    const listedOnB = await owner.request(B, 'GET', `/api/v1/systems/${s.id}/share-links`);
+    expect((await new Browser().requestAt(B, 'GET', `/s/${token}`)).status).toBe(404);
+    expect((await new Browser().requestAt(A, 'GET', `/s/${token}`)).status).toBe(404);
+    const listedOnB = await owner.requestAt(B, 'GET', `/api/v1/systems/${s.id}/share-links`);
     expect(listedOnB.body.items.map((l: { token: string }) => l.token)).not.toContain(token);
   });
 });
