@@ -51,7 +51,7 @@ export interface AccountDeletionPlan {
 }
 
 export const LAST_SITE_ADMIN =
-  'You are the only site admin. Seamline needs one to manage accounts: another account must be made a site admin before you can delete yours.';
+  'You are the only site admin. Seamline needs one to manage accounts: make another account a site admin on the Users page first, then delete yours.';
 
 /** The workspaces of one user, with every member of each (locked FOR UPDATE inside a deletion's transaction). */
 export async function membershipsOf(userId: string, transaction?: Transaction) {

@@ -117,6 +117,11 @@ function documentedExample(routePath: string): Call {
 const MATRIX: Record<string, { expect: Expect; build: Builder }> = {
   'GET /api/health': { expect: open(200), build: () => ({ path: '/api/health' }) },
   'GET /api/v1/admin/users': { expect: { anonymous: 401, outsider: 404, admin: 200, viewer: 404, editor: 404, owner: 404 }, build: () => ({ path: '/api/v1/admin/users' }) },
+  // The viewer made a member again: the role it has, so nothing changes whoever gets through.
+  'PATCH /api/v1/admin/users/[id]': {
+    expect: { anonymous: 401, outsider: 404, admin: 200, viewer: 404, editor: 404, owner: 404 },
+    build: (f) => ({ path: `/api/v1/admin/users/${f.users.viewer.id}`, body: { siteRole: 'member' } }),
+  },
   'POST /api/v1/auth/sign-up': { expect: open(201), build: () => ({ path: '/api/v1/auth/sign-up', body: { name: 'Matrix signup', email: uniqueEmail('matrix'), password: 'a-long-password-1' } }) },
   'POST /api/v1/auth/password-reset': { expect: open(202), build: () => ({ path: '/api/v1/auth/password-reset', body: { email: uniqueEmail('nobody') } }) },
   'POST /api/v1/auth/password-reset/confirm': { expect: open(400), build: () => ({ path: '/api/v1/auth/password-reset/confirm', body: { token: 'x'.repeat(43), password: 'a-long-password-1' } }) },

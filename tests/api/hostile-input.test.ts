@@ -10,6 +10,7 @@ import { demoProfile } from '@/lib/demo/profiles';
 import { juniperLaneDocument } from '@/lib/demo/systems';
 import { isTextMediaType, MAX_MEASUREMENT_BYTES, parseMeasurementBytes } from '@/lib/measurements/parse-measurement';
 import { resetConfirmSchema, resetRequestSchema, signUpSchema } from '@/lib/validations/auth';
+import { siteRoleUpdateSchema } from '@/lib/validations/site-role';
 import { blendRequestSchema, crossoverSweepRequestSchema, timingRequestSchema } from '@/lib/validations/compute-blend';
 import { headroomRequestSchema } from '@/lib/validations/compute-headroom';
 import { layoutRequestSchema } from '@/lib/validations/compute-layout';
@@ -59,6 +60,8 @@ const PRIVATE_DB = Boolean(process.env.SEAMLINE_TEST_DATA_DIR) || process.env.HO
 
 interface Fixture {
   cookie: string;
+  /** A site administrator's session, for the admin routes (anyone else is 404 before the body is read). */
+  adminCookie: string;
   workspaceId: string;
   editorId: string;
   systemId: string;
@@ -83,7 +86,8 @@ interface JsonRoute {
   limitBytes: number;
   /** A valid body: the API page's working example or one built like the access matrix does. */
   template: (f: Fixture) => unknown;
-  session: boolean;
+  /** Sent with the fixture owner's session cookie (true), a site admin's ('admin'), or none (false). */
+  session: boolean | 'admin';
   /** POST /systems/{id}/duplicate takes no body at all as "no options". */
   bodyOptional?: boolean;
 }
@@ -133,6 +137,7 @@ const JSON_ROUTES: JsonRoute[] = [
   { method: 'POST', route: '/api/v1/tokens', path: () => '/api/v1/tokens', schema: accessTokenCreateSchema, limitBytes: 16 * KB, session: true, template: (f) => ({ name: `Token ${MARK}`, workspaceId: f.workspaceId, scope: 'read', expiresInDays: 30 }) },
   // Never a valid body (those are not sent), and its password is not the fixture's either: nothing can delete the account.
   { method: 'DELETE', route: '/api/v1/account', path: () => '/api/v1/account', schema: accountDeleteSchema, limitBytes: 16 * KB, session: true, template: (f) => ({ password: 'not-the-fixture-password', confirm: 'delete my account', workspaces: [{ workspaceId: f.workspaceId, action: 'delete' }] }) },
+  { method: 'PATCH', route: '/api/v1/admin/users/[id]', path: (f) => `/api/v1/admin/users/${f.editorId}`, schema: siteRoleUpdateSchema, limitBytes: 16 * KB, session: 'admin', template: () => ({ siteRole: 'member' }) },
   { method: 'POST', route: '/api/v1/workspaces', path: () => '/api/v1/workspaces', schema: workspaceCreateSchema, limitBytes: 16 * KB, session: true, template: () => ({ name: `Workspace ${MARK}` }) },
   { method: 'PATCH', route: '/api/v1/workspaces/[id]', path: (f) => `/api/v1/workspaces/${f.workspaceId}`, schema: workspaceCreateSchema, limitBytes: 16 * KB, session: true, template: () => ({ name: `Workspace ${MARK}` }) },
   { method: 'POST', route: '/api/v1/workspaces/[id]/invitations', path: (f) => `/api/v1/workspaces/${f.workspaceId}/invitations`, schema: invitationCreateSchema, limitBytes: 16 * KB, session: true, template: () => ({ email: `${MARK}-invited@example.test`, role: 'viewer' }) },
@@ -567,6 +572,8 @@ function uploadBody(u: Upload): { body: Uint8Array | FormData; contentType: stri
 
 // ---------------------------------------------------------------- the fixture
 
+const cookieFor = (r: JsonRoute, f: Fixture): string | null => (r.session === 'admin' ? f.adminCookie : r.session ? f.cookie : null);
+
 async function signUp(prefix: string): Promise<{ id: string; email: string }> {
   const email = uniqueEmail(`${MARK}-${prefix}`);
   const res = await new Client().post('/api/v1/auth/sign-up', { name: `Hostile ${prefix}`, email, password: 'a-long-password-1' });
@@ -586,6 +593,9 @@ describe('hostile input on every JSON route and on uploads', () => {
     const owner = await signUp('owner');
     const editor = await signUp('editor');
     f.cookie = await sessionCookie(owner.email, 'a-long-password-1');
+    const admin = await signUp('admin');
+    await (await testDb()).query("UPDATE users SET site_role = 'admin' WHERE id = :id", { replacements: { id: admin.id } });
+    f.adminCookie = await sessionCookie(admin.email, 'a-long-password-1');
     const client = new Client();
     await client.signIn(owner.email, 'a-long-password-1');
     const ws = await client.post('/api/v1/workspaces', { name: `Hostile workspace ${MARK}` });
@@ -607,7 +617,7 @@ describe('hostile input on every JSON route and on uploads', () => {
     curve.set('file', new Blob([GOOD_CURVE], { type: 'text/csv' }), 'curve.csv');
     curve.set('workspaceId', f.workspaceId);
     f.measurementId = (await client.post('/api/v1/measurements', curve)).body.id;
-    f.ids = [owner.id, editor.id, f.workspaceId, f.systemId, f.lessonId, ...f.stepIds, f.profileId, f.shareToken, f.measurementId, MARK];
+    f.ids = [owner.id, editor.id, admin.id, f.workspaceId, f.systemId, f.lessonId, ...f.stepIds, f.profileId, f.shareToken, f.measurementId, MARK];
     for (const [k, v] of Object.entries(f)) if (v === undefined || v === null) throw new Error(`fixture ${k} missing`);
     // Every template is valid and answered 2xx? Not sent: the templates are only checked against the
     // route's own rules here, so a broken template fails loudly instead of making every mutation trivially invalid.
@@ -617,7 +627,7 @@ describe('hostile input on every JSON route and on uploads', () => {
       if (!parsed.success) throw new Error(`template for ${r.method} ${r.route} is not valid: ${parsed.error.message}`);
     }
     // Warm up (dev servers compile a route on its first call).
-    for (const r of JSON_ROUTES) await send(r.method, r.path(f), encoder.encode('{'), 'application/json', r.session ? f.cookie : null);
+    for (const r of JSON_ROUTES) await send(r.method, r.path(f), encoder.encode('{'), 'application/json', cookieFor(r, f));
     await send('POST', '/api/v1/measurements', encoder.encode('x'), 'text/plain', f.cookie);
     before = await snapshot();
     windowStart = Date.now();
@@ -640,7 +650,7 @@ describe('hostile input on every JSON route and on uploads', () => {
       const t0 = Date.now();
       const result = await barrage(
         refusedBodies(r, f, BODIES_PER_ROUTE, stats),
-        (b) => send(r.method, r.path(f), b.bytes, b.contentType, r.session ? f.cookie : null),
+        (b) => send(r.method, r.path(f), b.bytes, b.contentType, cookieFor(r, f)),
         (b) => `${b.label} (${b.bytes.byteLength} bytes, ${b.contentType ?? 'no content type'}): ${new TextDecoder().decode(b.bytes.slice(0, 120))}`,
       );
       const s = (Date.now() - t0) / 1000;

@@ -48,6 +48,8 @@ const userAnswerSchema = z
 
 export const userListAnswerSchema = itemsOf(userAnswerSchema, 'Every account, oldest first.');
 
+export const siteRoleAnswerSchema = userAnswerSchema.omit({ workspaceCount: true }).meta({ description: 'The account with its site role now.' });
+
 // Each answer schema is the type its data function (or handler) returns, so the two cannot drift apart.
 const _signUp: Same<z.output<typeof signUpAnswerSchema>, Pick<AppUser, 'id' | 'email' | 'name'>> = true;
 const _preview: Same<z.output<typeof invitationPreviewAnswerSchema>, InvitationPreview> = true;

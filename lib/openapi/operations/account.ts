@@ -62,7 +62,7 @@ export const ACCOUNT_OPERATIONS: ApiOperation[] = [
       `The body asks for your password again (a wrong one is 400 on password and counts as a failed sign-in: after 5 in 15 minutes the answer is 429) and the words “${DELETE_ACCOUNT_CONFIRMATION}”.`,
       'Every workspace where you are the only owner needs one decision (GET /api/v1/account/deletion-plan lists them): transfer to one of its members, who becomes an owner, or delete it with every System, revision, Lesson, Step, Speaker profile, measurement and share link in it. A missing decision is 400 on workspaces naming the workspace; a decision for any other workspace, or a transfer to someone who is not a member, is 400 on that decision. Nothing is changed by a refused request.',
       'What you saved in the workspaces that stay (Systems, revisions, Lessons, profiles, measurements, share links) is kept, shown as by “a former member”. Your memberships, access tokens, password-reset links and the invitations you sent that are still open are deleted. Afterwards your session is refused (401) and your password signs nobody in.',
-      'The only site admin cannot delete their account (409): another account must be made a site admin first.',
+      'The only site admin cannot delete their account (409): another account must be made a site admin first (PATCH /api/v1/admin/users/{id}, or the Users page).',
     ],
     access: 'session',
     body: { schema: accountDeleteSchema, limitBytes: BODY_LIMIT_BYTES.form },

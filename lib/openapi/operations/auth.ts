@@ -1,11 +1,12 @@
 import { BODY_LIMIT_BYTES } from '@/lib/http';
-import { invitationAcceptedAnswerSchema, invitationPreviewAnswerSchema, resetRequestedAnswerSchema, signUpAnswerSchema, userListAnswerSchema } from '@/lib/openapi/answers/auth';
+import { invitationAcceptedAnswerSchema, invitationPreviewAnswerSchema, resetRequestedAnswerSchema, signUpAnswerSchema, siteRoleAnswerSchema, userListAnswerSchema } from '@/lib/openapi/answers/auth';
 import { okAnswerSchema } from '@/lib/openapi/answers/library-parts';
 import { resetConfirmSchema, resetRequestSchema, signUpSchema } from '@/lib/validations/auth';
+import { siteRoleUpdateSchema } from '@/lib/validations/site-role';
 import type { ApiOperation } from '../types';
-import { EXAMPLE, invitationTokenParams } from './library-common';
+import { adminUserParams, EXAMPLE, invitationTokenParams } from './library-common';
 
-/** Account routes: sign-up, password reset, invitations by their token, and the site administrator's user list. */
+/** Account routes: sign-up, password reset, invitations by their token, and the site administrator's accounts and site roles. */
 
 const FORM_ERRORS = [400, 413, 415, 429, 503];
 const RESET_TOKEN = 'Zm9yZ290dGVuX3Bhc3N3b3JkX2V4YW1wbGVfb25seQ';
@@ -111,5 +112,21 @@ export const AUTH_OPERATIONS: ApiOperation[] = [
     answers: [{ status: 200, description: 'The accounts.', schema: userListAnswerSchema }],
     errors: [401, 404, 429, 503],
     examples: [{ title: 'Accounts', status: 200, responseExcerpt: { items: [{ id: EXAMPLE.user, email: 'demo@seamline.test', siteRole: 'member', workspaceCount: 2 }] } }],
+  },
+  {
+    id: 'admin-user-site-role',
+    method: 'PATCH',
+    path: '/api/v1/admin/users/{id}',
+    tag: 'Account',
+    summary: 'Sets an account’s site role: makes it a site admin, or a member again (site administrators, in a browser session).',
+    notes: [
+      'Anyone else, and any access token, gets 404. The site keeps at least one site admin: making the last one a member is a 409 that says so (the same rule stops the last admin deleting their account). Setting the role the account already has changes nothing.',
+    ],
+    access: 'admin',
+    pathParams: adminUserParams,
+    body: { schema: siteRoleUpdateSchema, limitBytes: BODY_LIMIT_BYTES.form },
+    answers: [{ status: 200, description: 'The account with its site role now.', schema: siteRoleAnswerSchema }],
+    errors: [400, 401, 404, 409, 413, 415, 429, 503],
+    examples: [{ title: 'Make an account a site admin', pathParams: { id: EXAMPLE.user }, body: { siteRole: 'admin' }, status: 200, responseExcerpt: { id: EXAMPLE.user, siteRole: 'admin' } }],
   },
 ];

@@ -20,6 +20,7 @@ export const measurementParams = z.object({ id: rowId('The measurement’s id.')
 export const lessonParams = z.object({ id: rowId('The Lesson’s id.') });
 export const lessonStepParams = z.object({ id: rowId('The Lesson’s id.'), stepId: rowId('The Step’s id.') });
 export const workspaceParams = z.object({ id: rowId('The workspace’s id.') });
+export const adminUserParams = z.object({ id: rowId('The account’s id (from GET /api/v1/admin/users).') });
 export const memberParams = z.object({ id: rowId('The workspace’s id.'), userId: rowId('The member’s account id.') });
 export const invitationParams = z.object({ id: rowId('The workspace’s id.'), invitationId: rowId('The invitation’s id.') });
 export const invitationTokenParams = z.object({
