@@ -43,31 +43,25 @@ export function SiteRoleControl({ user, isSelf }: Props) {
     }
   }
 
-  if (!asking) {
-    return (
-      <div className="flex flex-col items-start gap-1">
+  return (
+    <div className="flex flex-col items-start gap-1">
+      {asking ? (
+        <div className="flex min-w-48 flex-col items-start gap-1" role="group" aria-label={`${label}: ${user.name}`}>
+          <p className="text-xs">{consequence}</p>
+          <div className="flex gap-2">
+            <Button disabled={busy} onClick={() => void change()}>
+              {busy ? 'Saving…' : label}
+            </Button>
+            <Button variant="secondary" disabled={busy} onClick={() => setAsking(false)}>
+              Cancel
+            </Button>
+          </div>
+        </div>
+      ) : (
         <Button variant="secondary" className="whitespace-nowrap" onClick={() => setAsking(true)} aria-label={`${label}: ${user.name}`}>
           {label}
         </Button>
-        {error ? (
-          <p role="alert" className="text-xs text-fail">
-            {error}
-          </p>
-        ) : null}
-      </div>
-    );
-  }
-  return (
-    <div className="flex min-w-48 flex-col items-start gap-1" role="group" aria-label={`${label}: ${user.name}`}>
-      <p className="text-xs">{consequence}</p>
-      <div className="flex gap-2">
-        <Button disabled={busy} onClick={() => void change()}>
-          {busy ? 'Saving…' : label}
-        </Button>
-        <Button variant="secondary" disabled={busy} onClick={() => setAsking(false)}>
-          Cancel
-        </Button>
-      </div>
+      )}
       {error ? (
         <p role="alert" className="text-xs text-fail">
           {error}

@@ -97,6 +97,13 @@ export function TeamManager({ userId }: { userId: string }) {
                 </tr>
               </thead>
               <tbody>
+                {!members.data ? (
+                  <tr>
+                    <td colSpan={4} className="px-3 py-2 text-sm text-ink-soft" role="status">
+                      {members.error ? `The members could not be read: ${String(members.error.message)}` : 'Loading members…'}
+                    </td>
+                  </tr>
+                ) : null}
                 {(members.data?.items ?? []).map((m) => (
                   <tr key={m.userId} className="border-b border-line last:border-0">
                     <td className="px-3 py-2">{m.name}</td>
@@ -181,7 +188,11 @@ export function TeamManager({ userId }: { userId: string }) {
 
           <div>
             <h2 className="text-lg font-semibold">Pending invitations</h2>
-            {(invitations.data?.items ?? []).length === 0 ? (
+            {!invitations.data ? (
+              <p className="mt-1 text-sm text-ink-soft" role="status">
+                {invitations.error ? `The invitations could not be read: ${String(invitations.error.message)}` : 'Loading invitations…'}
+              </p>
+            ) : invitations.data.items.length === 0 ? (
               <p className="mt-1 text-sm text-ink-soft">None.</p>
             ) : (
               <ul className="mt-2 flex flex-col gap-2">

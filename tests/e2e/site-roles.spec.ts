@@ -7,8 +7,11 @@ import { seriousViolations } from './helpers/axe';
  */
 test('the site admin makes an account a site admin and a member again on the Users page', async ({ page }) => {
   test.setTimeout(180_000);
-  const email = `site-role-${Date.now().toString(36)}@example.test`;
-  const signUp = await page.request.post('/api/v1/auth/sign-up', { data: { name: 'Site role walk (invented)', email, password: 'a-long-password-1' } });
+  const stamp = `${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
+  const email = `site-role-${stamp}@example.test`;
+  // A name of this run alone: on a database kept between runs, earlier walks' accounts are still listed.
+  const name = `Site role walk ${stamp} (invented)`;
+  const signUp = await page.request.post('/api/v1/auth/sign-up', { data: { name, email, password: 'a-long-password-1' } });
   expect(signUp.status(), await signUp.text()).toBe(201);
   const id = ((await signUp.json()) as { id: string }).id;
 
@@ -23,16 +26,16 @@ test('the site admin makes an account a site admin and a member again on the Use
   await expect(role).toHaveText('member', { timeout: 60_000 });
   const stored = async () => ((await (await page.request.get('/api/v1/admin/users')).json()).items as { id: string; siteRole: string }[]).find((u) => u.id === id)?.siteRole;
 
-  await page.getByRole('button', { name: 'Make site admin: Site role walk (invented)' }).click();
-  const ask = page.getByRole('group', { name: 'Make site admin: Site role walk (invented)' });
+  await page.getByRole('button', { name: `Make site admin: ${name}` }).click();
+  const ask = page.getByRole('group', { name: `Make site admin: ${name}` });
   await expect(ask).toContainText('will manage every account on this site');
   expect(await seriousViolations(page, 'Users page, confirm step')).toEqual([]);
   await ask.getByRole('button', { name: 'Make site admin' }).click();
   await expect(role).toHaveText('site admin', { timeout: 30_000 });
   expect(await stored()).toBe('admin');
 
-  await page.getByRole('button', { name: 'Make member: Site role walk (invented)' }).click();
-  await page.getByRole('group', { name: 'Make member: Site role walk (invented)' }).getByRole('button', { name: 'Make member' }).click();
+  await page.getByRole('button', { name: `Make member: ${name}` }).click();
+  await page.getByRole('group', { name: `Make member: ${name}` }).getByRole('button', { name: 'Make member' }).click();
   await expect(role).toHaveText('member', { timeout: 30_000 });
   expect(await stored()).toBe('member');
 });
