@@ -126,14 +126,17 @@ export async function getSession(): Promise<Session | null> {
 }
 
 /**
- * The caller of a browser session (pages), or null. Bearer tokens are for the API only. The account is looked up on
- * each request that asks (never on a compute route that needs no caller), so a deleted account's cookie is refused at
- * once, and its name and site role are the stored ones, not the ones signed into the cookie.
+ * The caller of a browser session (pages), or null. Bearer tokens are for the API only. The account was looked up
+ * afresh by the jwt callback while reading the session (never on a compute route that needs no caller), so a deleted
+ * account's cookie reads as no session at once, and the name and site role are the stored ones, not the ones signed
+ * into the cookie. While the database cannot answer, the cookie's own account stands (whatever needs the database
+ * answers 503 meanwhile).
  */
 export async function getSessionCaller(): Promise<(Caller & { email: string; name: string }) | null> {
   const session = await getSession();
-  const user = session ? await findSessionUser(session.user.id) : null;
-  return user ? { id: user.id, siteRole: user.siteRole, email: user.email, name: user.name } : null;
+  if (!session) return null;
+  const { id, siteRole, email, name } = session.user;
+  return { id, siteRole, email, name };
 }
 
 /** One answer for every token that is not accepted, so a caller cannot tell a mistyped token from a revoked one. */
